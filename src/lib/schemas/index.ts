@@ -1,0 +1,10 @@
+// Public face of the schemas room.
+export * from './design-input';
+export * from './input-error';
+import { designInputSchema, type DesignInput } from './design-input';
+import { parseWith } from './input-error';
+
+/** Validates a design-input document (defaults filled) or throws InputError. */
+export function parseDesignInput(raw: unknown): DesignInput {
+	return parseWith(designInputSchema, raw);
+}
