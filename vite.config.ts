@@ -12,6 +12,7 @@ export default defineConfig({
 		testTimeout: 30_000,
 		hookTimeout: 60_000,
 		// Integration suites share one test database: run files one after another.
-		fileParallelism: false
+		fileParallelism: false,
+		globalSetup: ['tests/global-setup.ts']
 	}
 });

@@ -1,0 +1,104 @@
+// `npm test`: lint, then vitest (unit + integration against the real PostgreSQL), then Playwright in
+// Debian's Chromium against the production build. Ends with one line: `N passed, N failed`.
+import { spawnSync } from 'node:child_process';
+import { existsSync, readFileSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import pg from 'pg';
+import { loadConfig, rootDir, runMain } from './lib/config.ts';
+import { provideMail } from './lib/mail.ts';
+import { migrateToLatest } from './lib/migrate.ts';
+import { TEST_DATABASE, connectionUrl, provideDatabase, stopCluster } from './lib/postgres.ts';
+import { stopBackground } from './lib/services.ts';
+
+interface Tally {
+	suite: string;
+	passed: number;
+	failed: number;
+}
+
+function run(command: string, args: string[], env: NodeJS.ProcessEnv): number {
+	const r = spawnSync(command, args, { cwd: rootDir, stdio: 'inherit', env });
+	return r.status ?? 1;
+}
+
+function ensureChromium(): string {
+	const path = process.env.CHROMIUM_PATH || '/usr/bin/chromium';
+	if (existsSync(path)) return path;
+	if (process.getuid?.() !== 0) throw new Error(`${path} is missing; install Debian's chromium package (apt-get install chromium)`);
+	console.log('installing Debian\'s chromium package for the end-to-end tests…');
+	const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
+	if (run('apt-get', ['update', '-qq'], env) !== 0 || run('apt-get', ['install', '-y', '-qq', 'chromium'], env) !== 0) {
+		throw new Error('apt-get install chromium failed');
+	}
+	return path;
+}
+
+/** A fresh test database on the private cluster, so every run starts from the migrations alone. */
+async function recreateTestDatabase(url: string): Promise<void> {
+	const admin = new pg.Client({ connectionString: url.replace(/\/[^/]+$/, '/postgres') });
+	await admin.connect();
+	try {
+		await admin.query(`drop database if exists "${TEST_DATABASE}" with (force)`);
+		await admin.query(`create database "${TEST_DATABASE}"`);
+	} finally {
+		await admin.end();
+	}
+}
+
+function readJson(file: string): any {
+	return existsSync(file) ? JSON.parse(readFileSync(file, 'utf8')) : undefined;
+}
+
+runMain(async () => {
+	const config = { ...loadConfig(), smtpPort: Number(process.env.TEST_SMTP_PORT || 2526) };
+	const tallies: Tally[] = [];
+	const reports = join(config.dataDir, 'reports');
+	rmSync(reports, { recursive: true, force: true });
+
+	const startedCluster = !config.databaseUrl;
+	let databaseUrl = await provideDatabase(config, TEST_DATABASE);
+	if (startedCluster) {
+		await recreateTestDatabase(databaseUrl);
+		databaseUrl = connectionUrl(config, TEST_DATABASE);
+	}
+	await migrateToLatest(databaseUrl, () => undefined);
+	const mail = await provideMail(config, 'mail-test', join(config.dataDir, 'mail-test'));
+	const env: NodeJS.ProcessEnv = { ...process.env, ...mail, DATABASE_URL: databaseUrl, FRINGEFIELD_TEST: '1' };
+
+	try {
+		console.log('\n── lint ──');
+		const lint = run('npx', ['eslint', '--config', 'scripts/eslint.config.js', 'src', 'tests', 'scripts'], env);
+		tallies.push({ suite: 'lint', passed: lint === 0 ? 1 : 0, failed: lint === 0 ? 0 : 1 });
+
+		console.log('\n── build ──');
+		const built = run('npx', ['vite', 'build', '--logLevel', 'error'], env);
+		tallies.push({ suite: 'build', passed: built === 0 ? 1 : 0, failed: built === 0 ? 0 : 1 });
+
+		console.log('\n── vitest: unit + integration ──');
+		const vitestReport = join(reports, 'vitest.json');
+		run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`], env);
+		const v = readJson(vitestReport);
+		tallies.push(v ? { suite: 'vitest', passed: v.numPassedTests, failed: v.numFailedTests + (v.numRuntimeErrorTestSuites ?? 0) } : { suite: 'vitest', passed: 0, failed: 1 });
+
+		console.log('\n── Playwright end-to-end in Chromium ──');
+		const chromium = ensureChromium();
+		if (built !== 0) {
+			tallies.push({ suite: 'e2e', passed: 0, failed: 1 });
+		} else {
+			const e2eReport = join(reports, 'e2e.json');
+			run('npx', ['playwright', 'test', '--config', 'tests/e2e/playwright.config.ts'], { ...env, CHROMIUM_PATH: chromium, PLAYWRIGHT_JSON_OUTPUT_NAME: e2eReport });
+			const p = readJson(e2eReport);
+			tallies.push(p ? { suite: 'e2e', passed: p.stats.expected + (p.stats.flaky ?? 0), failed: p.stats.unexpected } : { suite: 'e2e', passed: 0, failed: 1 });
+		}
+	} finally {
+		await stopBackground(config, 'mail-test');
+		if (startedCluster && process.env.CI) await stopCluster(config);
+	}
+
+	const passed = tallies.reduce((n, t) => n + t.passed, 0);
+	const failed = tallies.reduce((n, t) => n + t.failed, 0);
+	console.log('');
+	for (const t of tallies) console.log(`${t.suite}: ${t.passed} passed, ${t.failed} failed`);
+	console.log(`${passed} passed, ${failed} failed`);
+	process.exitCode = failed > 0 || passed === 0 ? 1 : 0;
+});

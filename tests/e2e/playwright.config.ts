@@ -1,0 +1,48 @@
+// Playwright in Debian's Chromium against the production build (`node build`) on 127.0.0.1.
+// scripts/test.ts provides DATABASE_URL (the test database) and the mail fake's settings.
+import { defineConfig } from '@playwright/test';
+
+const port = Number(process.env.E2E_PORT || 3100);
+export const baseURL = `http://127.0.0.1:${port}`;
+
+export default defineConfig({
+	testDir: '.',
+	testMatch: '**/*.e2e.ts',
+	outputDir: '../../.data/e2e-results',
+	fullyParallel: false,
+	workers: 1,
+	retries: 0,
+	timeout: 60_000,
+	reporter: [['list'], ['json']],
+	use: {
+		baseURL,
+		trace: 'off',
+		screenshot: 'off',
+		launchOptions: {
+			executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
+			args: [
+				'--no-sandbox',
+				'--disable-gpu',
+				'--disable-quic',
+				'--no-first-run',
+				'--disable-background-networking',
+				'--disable-component-update',
+				'--disable-sync'
+			]
+		}
+	},
+	webServer: {
+		command: 'node build',
+		cwd: '../..',
+		url: `${baseURL}/healthz`,
+		reuseExistingServer: false,
+		timeout: 60_000,
+		env: {
+			...(process.env as Record<string, string>),
+			HOST: '127.0.0.1',
+			PORT: String(port),
+			ORIGIN: baseURL,
+			FRINGEFIELD_DEV_MAILBOX: '1'
+		}
+	}
+});
