@@ -4,7 +4,7 @@ import tseslint from 'typescript-eslint';
 const pureCore = ['schemas', 'units', 'rf', 'geometry', 'artwork', 'drc', 'formats'].map((room) => `src/lib/${room}/**/*.ts`);
 
 export default tseslint.config(
-	{ ignores: ['**/*.svelte', '.svelte-kit/**', 'build/**', 'node_modules/**', '.data/**'] },
+	{ ignores: ['**/*.svelte', '.svelte-kit/**', 'build/**', 'node_modules/**', '.data/**', 'tests/fixtures/**'] },
 	{
 		files: ['**/*.ts', '**/*.js'],
 		languageOptions: { parser: tseslint.parser },

@@ -1,7 +1,14 @@
-// Every request: security headers; every unexpected error: logged with an id support can find.
+// Every request: who is asking (session or API token) on locals, security headers on the answer;
+// every unexpected error: logged with an id support can find.
 import type { Handle, HandleServerError } from '@sveltejs/kit';
+import { identify } from '$lib/server/auth/request-identity';
 
 export const handle: Handle = async ({ event, resolve }) => {
+	const identity = event.url.pathname === '/healthz' ? { user: null, sessionId: null, apiToken: null } : await identify(event.request, event.cookies);
+	event.locals.user = identity.user;
+	event.locals.sessionId = identity.sessionId;
+	event.locals.apiToken = identity.apiToken;
+	event.locals.identity = identity;
 	const response = await resolve(event);
 	response.headers.set('x-content-type-options', 'nosniff');
 	response.headers.set('referrer-policy', 'same-origin');

@@ -1,8 +1,24 @@
 // The typed Database: one entry per table, each defined in its own <table>.table.ts.
+import type { ApiTokenTable } from './api-token.table';
 import type { AppUserTable } from './app-user.table';
+import type { DesignTable, RevisionTable } from './design.table';
+import type { ExportRecordTable } from './export-record.table';
+import type { LaminateTable } from './laminate.table';
+import type { PasswordResetTable } from './password-reset.table';
+import type { TeamInviteTable } from './team-invite.table';
+import type { TeamMemberTable, TeamTable } from './team.table';
 import type { UserSessionTable } from './user-session.table';
 
 export interface Database {
 	app_user: AppUserTable;
 	user_session: UserSessionTable;
+	team: TeamTable;
+	team_member: TeamMemberTable;
+	team_invite: TeamInviteTable;
+	password_reset: PasswordResetTable;
+	laminate: LaminateTable;
+	design: DesignTable;
+	revision: RevisionTable;
+	export_record: ExportRecordTable;
+	api_token: ApiTokenTable;
 }

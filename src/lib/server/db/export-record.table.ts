@@ -1,0 +1,28 @@
+// export_record: every download — who, when, which revision, which files with their hashes, from where.
+import type { ColumnType, Insertable, Selectable } from 'kysely';
+
+export type ExportVia = 'ui' | 'api' | 'cli';
+
+export interface ExportedFile {
+	name: string;
+	sizeBytes: number;
+	sha256: string;
+}
+
+export interface ExportRecordTable {
+	id: string;
+	team_id: string;
+	design_id: string;
+	revision_id: string;
+	user_id: string;
+	via: ExportVia;
+	/** What was downloaded: 'bundle' or one format name. */
+	kind: string;
+	files: ColumnType<ExportedFile[], string, never>;
+	/** sha256 of the bytes delivered (the zip for a bundle). */
+	sha256: string;
+	waiver: string | null;
+	created_at: ColumnType<Date, Date | string | undefined, never>;
+}
+export type ExportRecordRow = Selectable<ExportRecordTable>;
+export type InsertableExportRecordRow = Insertable<ExportRecordTable>;
