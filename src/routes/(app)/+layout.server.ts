@@ -1,0 +1,9 @@
+// Signed-in pages: anonymous visitors go to sign-in; every page gets the current team and the team list.
+import { redirect } from '@sveltejs/kit';
+import { currentTeam } from '$lib/server/teams/current-team';
+
+export async function load({ locals, cookies, url }) {
+	if (!locals.user) redirect(303, `/signin?next=${encodeURIComponent(url.pathname + url.search)}`);
+	const { current, teams } = await currentTeam(locals.user.id, cookies);
+	return { user: locals.user, team: current, teams };
+}
