@@ -1,0 +1,74 @@
+// A sized design → its Artwork: top copper, ground with clearance, profile, optional masks, drills and the stack.
+import { GeometryError, createRectangleContour, type Point } from '../geometry';
+import type { SizedDesign } from '../rf/sized-design';
+import { buildDimensions } from './build-dimensions';
+import { buildStack } from './build-stack';
+import { buildTopCopper } from './build-top-copper';
+import type { Artwork, ArtworkDrill, ArtworkLayer, ArtworkShape } from './types';
+
+/** Pen width for the board profile line: the outline is its centre line; width only makes it visible. */
+export const PROFILE_STROKE_WIDTH_MM = 0.1;
+
+/**
+ * Builds the artwork. The board spans (0, 0)–(ground.widthMm, ground.lengthMm); the patch is
+ * centred on it and the feed runs down (−y) to the board edge at y = 0.
+ */
+export function buildArtwork(sized: SizedDesign): Artwork {
+	const { widthMm: boardW, lengthMm: boardL } = sized.ground;
+	if (!(boardW > 0 && boardL > 0)) throw new GeometryError('degenerate-shape', `ground.widthMm and ground.lengthMm must be positive (got ${boardW}, ${boardL})`);
+	const center: Point = [boardW / 2, boardL / 2];
+	const top = buildTopCopper(sized, center);
+	const board = { outer: createRectangleContour(0, 0, boardW, boardL), holes: [] };
+
+	const groundShapes: ArtworkShape[] = [{ id: 'ground', role: 'ground', polarity: 'dark', geometry: { kind: 'region', region: board } }];
+	const drills: ArtworkDrill[] = [];
+	if (sized.feed.kind === 'probe' && top.probeCenter) {
+		const { clearanceDiameterMm, drillDiameterMm } = sized.feed;
+		const [px, py] = top.probeCenter;
+		const r = clearanceDiameterMm / 2;
+		if (px - r < 0 || py - r < 0 || px + r > boardW || py + r > boardL) {
+			throw new GeometryError('clearance-outside-ground', `the ground clearance (diameter ${clearanceDiameterMm} mm) must lie inside the ground plane`);
+		}
+		groundShapes.push({ id: 'clearance', role: 'clearance', polarity: 'clear', geometry: { kind: 'circle', center: top.probeCenter, diameterMm: clearanceDiameterMm } });
+		drills.push({ id: 'probe-drill', role: 'probe', plated: true, center: top.probeCenter, diameterMm: drillDiameterMm, fromCopper: 1, toCopper: 2 });
+	}
+
+	const layers: ArtworkLayer[] = [
+		{ id: 'copper-top', title: 'Top copper (patch and feed)', function: { kind: 'copper', copperIndex: 1, side: 'top' }, shapes: top.shapes, voids: top.voids },
+		{ id: 'copper-bottom', title: 'Bottom copper (ground)', function: { kind: 'copper', copperIndex: 2, side: 'bottom' }, shapes: groundShapes, voids: [] },
+		{
+			id: 'profile',
+			title: 'Board profile',
+			function: { kind: 'profile' },
+			shapes: [{ id: 'profile', role: 'profile', polarity: 'dark', geometry: { kind: 'outline', contour: board.outer, strokeWidthMm: PROFILE_STROKE_WIDTH_MM } }],
+			voids: []
+		}
+	];
+	if (sized.input.solderMask) {
+		// Mask off the antenna: solder mask over the patch would shift its resonance (common practice, no source).
+		const topOpenings = top.shapes.map((s): ArtworkShape => ({ ...s, id: `mask-top-${s.id}`, role: 'mask-opening', polarity: 'dark' }));
+		const bottomOpenings: ArtworkShape[] = drills.map((d) => ({
+			id: `mask-bottom-${d.id}`,
+			role: 'mask-opening',
+			polarity: 'dark',
+			geometry: { kind: 'circle', center: d.center, diameterMm: sized.feed.kind === 'probe' ? sized.feed.clearanceDiameterMm : d.diameterMm }
+		}));
+		layers.push({ id: 'mask-top', title: 'Top solder mask (openings)', function: { kind: 'solder-mask', side: 'top' }, shapes: topOpenings, voids: [] });
+		layers.push({ id: 'mask-bottom', title: 'Bottom solder mask (openings)', function: { kind: 'solder-mask', side: 'bottom' }, shapes: bottomOpenings, voids: [] });
+	}
+
+	return {
+		board: { widthMm: boardW, lengthMm: boardL },
+		layers,
+		drills,
+		stack: buildStack(sized),
+		dimensions: buildDimensions(sized, center, top.patchEdgeYMm),
+		metadata: {
+			designName: sized.input.name,
+			shape: sized.shape,
+			feedKind: sized.feedKind,
+			frequencyHz: sized.frequencyHz,
+			copperLayerCount: 2
+		}
+	};
+}

@@ -1,0 +1,32 @@
+// Artwork drills of one kind (plated or not) → Excellon commands; tools numbered by ascending diameter.
+import type { Artwork } from '../../artwork';
+import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
+import type { ExcellonCommand } from './commands';
+
+export function buildExcellonCommands(artwork: Artwork, plated: boolean, meta: ExportMeta): ExcellonCommand[] {
+	const drills = artwork.drills.filter((d) => d.plated === plated);
+	const from = Math.min(...drills.map((d) => d.fromCopper), 1);
+	const to = Math.max(...drills.map((d) => d.toCopper), artwork.metadata.copperLayerCount);
+	const out: ExcellonCommand[] = [{ type: 'header-start' }];
+	out.push({ type: 'comment', text: `${SOFTWARE_NAME} ${meta.designName} revision ${meta.revisionLabel}: ${plated ? 'plated' : 'non-plated'} holes` });
+	out.push({ type: 'attribute', name: 'TF.GenerationSoftware', values: [SOFTWARE_NAME, SOFTWARE_NAME, meta.softwareVersion] });
+	out.push({ type: 'attribute', name: 'TF.CreationDate', values: [`${meta.revisionDate}T00:00:00+00:00`] });
+	out.push({ type: 'attribute', name: 'TF.SameCoordinates', values: [`${meta.designSlug}-${meta.revisionLabel}`] });
+	out.push({ type: 'attribute', name: 'TF.FileFunction', values: plated ? ['Plated', String(from), String(to), 'PTH'] : ['NonPlated', String(from), String(to), 'NPTH'] });
+	out.push({ type: 'attribute', name: 'TF.FilePolarity', values: ['Positive'] });
+	out.push({ type: 'units', units: 'metric' });
+	const diameters = [...new Set(drills.map((d) => d.diameterMm.toFixed(3)))].sort((a, b) => Number(a) - Number(b));
+	const toolOf = new Map(diameters.map((d, i) => [d, i + 1]));
+	for (const d of diameters) {
+		out.push({ type: 'attribute', name: 'TA.AperFunction', values: plated ? ['Plated', 'PTH', 'ComponentDrill'] : ['NonPlated', 'NPTH', 'ComponentDrill'] });
+		out.push({ type: 'define-tool', tool: toolOf.get(d)!, diameterMm: Number(d) });
+	}
+	out.push({ type: 'header-end' }, { type: 'absolute' }, { type: 'drill-mode' });
+	for (const d of diameters) {
+		out.push({ type: 'select-tool', tool: toolOf.get(d)! });
+		const hits = drills.filter((h) => h.diameterMm.toFixed(3) === d).sort((a, b) => a.center[0] - b.center[0] || a.center[1] - b.center[1]);
+		for (const h of hits) out.push({ type: 'hit', at: h.center });
+	}
+	out.push({ type: 'end' });
+	return out;
+}
