@@ -35,6 +35,12 @@ export type SizedPatch =
 			/** Leg of each right-isosceles corner cut. */
 			truncationLegMm: number;
 			handedness: Handedness;
+			/**
+			 * Which opposite corners are cut, in the patch frame (x along the width, y the feed's axis,
+			 * radiation towards +z): 'rising' cuts (+x,+y) and (−x,−y) and gives RHCP with the feed on
+			 * the y axis; 'falling' cuts (−x,+y) and (+x,−y) and gives LHCP.
+			 */
+			truncatedDiagonal: 'rising' | 'falling';
 	  }
 	| {
 			kind: 'nearly-square';
@@ -42,6 +48,10 @@ export type SizedPatch =
 			widthMm: number;
 			/** Side along y; differs from widthMm by a few per cent. */
 			lengthMm: number;
+			/**
+			 * With the probe on the diagonal in the +x,+y quadrant and radiation towards +z, a longer y
+			 * side gives RHCP and a longer x side LHCP.
+			 */
 			handedness: Handedness;
 	  };
 

@@ -12,6 +12,22 @@ export type PatchShape = (typeof patchShapes)[number];
 export type FeedKind = (typeof feedKinds)[number];
 export type Handedness = (typeof handednesses)[number];
 
+/**
+ * Feeds each shape supports: a circular patch has no cos² inset relation, and a nearly-square patch
+ * is fed on its diagonal, which only a probe reaches.
+ */
+export const allowedFeeds: Record<PatchShape, readonly FeedKind[]> = {
+	rectangular: feedKinds,
+	'truncated-corner': feedKinds,
+	circular: ['probe', 'edge', 'quarter-wave'],
+	'nearly-square': ['probe']
+};
+
+/** The feed to choose when only a shape is given (the first the shape supports, inset for the rest). */
+export function defaultFeedFor(shape: PatchShape): FeedKind {
+	return allowedFeeds[shape].includes('inset') ? 'inset' : 'probe';
+}
+
 /** A finite number in [min, max] whose error message states the allowed range. */
 function bounded(min: number, max: number, opts: { exclusiveMin?: boolean; exclusiveMax?: boolean } = {}) {
 	const lo = opts.exclusiveMin ? `(${min}` : `[${min}`;
@@ -90,6 +106,15 @@ export const designInputSchema = z
 		}
 		if (d.patchWidthMm !== undefined && d.shape !== 'rectangular') {
 			ctx.addIssue({ code: 'custom', path: ['patchWidthMm'], input: d.patchWidthMm, message: 'only a rectangular patch takes a fixed width' });
+		}
+		const feedsForShape = allowedFeeds[d.shape];
+		if (!feedsForShape.includes(d.feed)) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['feed'],
+				input: d.feed,
+				message: `a ${d.shape} patch takes one of: ${feedsForShape.join(', ')}`
+			});
 		}
 		if (d.probe.clearanceDiameterMm <= d.probe.drillDiameterMm) {
 			ctx.addIssue({

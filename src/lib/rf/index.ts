@@ -1,0 +1,23 @@
+// Public face of the rf room: sizing of patches, feeds and microstrip lines; estimates; the tolerance study.
+export * from './sized-design';
+export { size, NOTCH_GAP_LINE_WIDTHS, PROBE_ANNULAR_RING_MM } from './size';
+export { sizingReport, type SizingReport } from './sizing-report';
+export { resonantFrequencyHz, type SubstrateValues } from './resonant-frequency';
+export { toleranceStudy, type ToleranceOptions, type ToleranceStudy } from './tolerance-study';
+export { analyzeMicrostrip, type MicrostripGeometry, type MicrostripModel } from './analyze-microstrip';
+export { dispersivePermittivity, type DispersionInput } from './dispersive-permittivity';
+export { synthesizeMicrostrip, type MicrostripTarget, type SynthesizedMicrostrip } from './synthesize-microstrip';
+export { rectangularPatch, radiatingWidthMm, patchEffectivePermittivity, fringeExtensionMm, type RectangularPatchInput, type RectangularPatchSize } from './rectangular-patch';
+export { squarePatch } from './square-patch';
+export { slotConductance, type SlotConductances, type SlotPair } from './slot-conductance';
+export { insetDepthMm, type InsetTarget } from './inset-depth';
+export { probeOffsetMm } from './probe-offset';
+export { quarterWaveTransformer, quarterGuidedWavelengthMm, type TransformerInput } from './quarter-wave-transformer';
+export { circularPatch, effectiveRadiusMm, circularRadiationConductanceS, type CircularPatchInput, type CircularPatchSize } from './circular-patch';
+export { circularProbeRadiusMm, type CircularProbeTarget } from './circular-probe-radius';
+export { truncationLegMm, truncatedDiagonalFor, type TruncatedDiagonal } from './truncated-corner-patch';
+export { nearlySquarePatch, type NearlySquareInput, type NearlySquareSize } from './nearly-square-patch';
+export { performanceEstimates, type EstimateInput } from './performance-estimates';
+export { groundSize, DEFAULT_MARGIN_HEIGHTS, type GroundInput } from './ground-size';
+export { besselJ, TM11_EIGENVALUE } from './bessel';
+export { integrateGaussLegendre } from './gauss-legendre';

@@ -1,0 +1,246 @@
+// Sizing one design: validated input in, every derived quantity and the warnings out.
+import { InputError, parseDesignInput, type DesignInput } from '../schemas';
+import { freeSpaceWavelengthMm, mmFromUm } from '../units';
+import { circularPatch } from './circular-patch';
+import { circularProbeRadiusMm } from './circular-probe-radius';
+import { insetDepthMm } from './inset-depth';
+import { nearlySquarePatch } from './nearly-square-patch';
+import { circularDirectivity, circularRadiationQuality, performanceEstimates, rectangularDirectivity, rectangularRadiationQuality } from './performance-estimates';
+import { probeOffsetMm } from './probe-offset';
+import { microstripSection, quarterWaveTransformer } from './quarter-wave-transformer';
+import { rectangularPatch, type RectangularPatchSize } from './rectangular-patch';
+import { groundSize } from './ground-size';
+import type { SizedDesign, SizedEstimates, SizedFeed, SizedLine, SizedPatch } from './sized-design';
+import { sizingWarnings, type WarningFacts } from './sizing-warnings';
+import { slotConductance, type SlotConductances } from './slot-conductance';
+import { squarePatch, lineModelOf } from './square-patch';
+import { truncatedDiagonalFor, truncationLegMm } from './truncated-corner-patch';
+
+/** Notch gap default: equal to the feed-line width on each side (common practice, no source). */
+export const NOTCH_GAP_LINE_WIDTHS = 1;
+/** Probe pad default: the drill plus a 0.25 mm annular ring on each side (common practice, no source). */
+export const PROBE_ANNULAR_RING_MM = 0.25;
+
+/** Where the low-level functions' argument names live in the design-input document. */
+const DOCUMENT_PATHS: Record<string, string> = {
+	heightMm: 'substrate.heightMm',
+	relativePermittivity: 'substrate.relativePermittivity',
+	targetResistanceOhm: 'targetImpedanceOhm',
+	impedanceOhm: 'feedLineImpedanceOhm'
+};
+
+/** The geometry-and-conductance core every shape reduces to before the feed is attached. */
+interface Core {
+	patch: SizedPatch;
+	model: RectangularPatchSize;
+	slots: SlotConductances;
+	edgeResistanceOhm: number;
+	estimates: SizedEstimates;
+	/** Patch extent along x and y. */
+	extentXMm: number;
+	extentYMm: number;
+	/** Length along the feed axis that the cos² relation uses. */
+	resonantLengthMm: number;
+	/** The edge a line or notch meets. */
+	feedEdgeMm: number;
+}
+
+function lineEstimates(d: DesignInput, model: RectangularPatchSize, slots: SlotConductances): SizedEstimates {
+	const { frequencyHz, substrate: s } = d;
+	const g = slots.slotConductanceS + slots.mutualConductanceS;
+	return performanceEstimates({
+		frequencyHz,
+		heightMm: s.heightMm,
+		lossTangent: s.lossTangent,
+		copperConductivitySPerM: s.copperConductivitySPerM,
+		radiationQualityFactor: rectangularRadiationQuality(model.widthMm, model.effectiveLengthMm, s.heightMm, s.relativePermittivity, frequencyHz, g),
+		directivity: rectangularDirectivity(model.widthMm, frequencyHz, slots.slotIntegral, slots.slotConductanceS, slots.mutualConductanceS)
+	});
+}
+
+function rectangularFamily(d: DesignInput): Core {
+	const { frequencyHz, substrate: s } = d;
+	const base = { frequencyHz, relativePermittivity: s.relativePermittivity, heightMm: s.heightMm };
+	if (d.shape === 'rectangular') {
+		const model = rectangularPatch({ ...base, widthMm: d.patchWidthMm });
+		const slots = slotConductance({ widthMm: model.widthMm, lengthMm: model.lengthMm, frequencyHz });
+		const patch: SizedPatch = { kind: 'rectangular', widthMm: model.widthMm, lengthMm: model.lengthMm };
+		return { patch, model, slots, edgeResistanceOhm: slots.edgeResistanceOhm, estimates: lineEstimates(d, model, slots), extentXMm: model.widthMm, extentYMm: model.lengthMm, resonantLengthMm: model.lengthMm, feedEdgeMm: model.widthMm };
+	}
+	const square = squarePatch(base);
+	const squareSlots = slotConductance({ widthMm: square.widthMm, lengthMm: square.lengthMm, frequencyHz });
+	const estimates = lineEstimates(d, square, squareSlots);
+	if (d.shape === 'truncated-corner') {
+		const patch: SizedPatch = {
+			kind: 'truncated-corner',
+			sideMm: square.widthMm,
+			truncationLegMm: truncationLegMm(square.widthMm, estimates.qualityFactor),
+			handedness: d.handedness,
+			truncatedDiagonal: truncatedDiagonalFor(d.handedness)
+		};
+		return { patch, model: square, slots: squareSlots, edgeResistanceOhm: squareSlots.edgeResistanceOhm, estimates, extentXMm: square.widthMm, extentYMm: square.widthMm, resonantLengthMm: square.widthMm, feedEdgeMm: square.widthMm };
+	}
+	// Nearly square: two orthogonal modes; the diagonal probe sees their mean edge resistance.
+	const ns = nearlySquarePatch({ ...base, qualityFactor: estimates.qualityFactor, handedness: d.handedness });
+	const modeX = slotConductance({ widthMm: ns.lengthMm, lengthMm: ns.widthMm, frequencyHz });
+	const modeY = slotConductance({ widthMm: ns.widthMm, lengthMm: ns.lengthMm, frequencyHz });
+	const slots: SlotConductances = {
+		slotConductanceS: (modeX.slotConductanceS + modeY.slotConductanceS) / 2,
+		mutualConductanceS: (modeX.mutualConductanceS + modeY.mutualConductanceS) / 2,
+		edgeResistanceOhm: (modeX.edgeResistanceOhm + modeY.edgeResistanceOhm) / 2,
+		slotIntegral: (modeX.slotIntegral + modeY.slotIntegral) / 2
+	};
+	const model = lineModelOf(ns.widthMm, ns.lengthMm, s.heightMm, s.relativePermittivity);
+	const patch: SizedPatch = { kind: 'nearly-square', widthMm: ns.widthMm, lengthMm: ns.lengthMm, handedness: d.handedness };
+	return { patch, model, slots, edgeResistanceOhm: slots.edgeResistanceOhm, estimates, extentXMm: ns.widthMm, extentYMm: ns.lengthMm, resonantLengthMm: ns.lengthMm, feedEdgeMm: ns.widthMm };
+}
+
+function circularCore(d: DesignInput): Core {
+	const { frequencyHz, substrate: s } = d;
+	const c = circularPatch({ frequencyHz, relativePermittivity: s.relativePermittivity, heightMm: s.heightMm });
+	const g = c.radiationConductanceS;
+	const estimates = performanceEstimates({
+		frequencyHz,
+		heightMm: s.heightMm,
+		lossTangent: s.lossTangent,
+		copperConductivitySPerM: s.copperConductivitySPerM,
+		radiationQualityFactor: circularRadiationQuality(c.effectiveRadiusMm, s.heightMm, s.relativePermittivity, frequencyHz, g),
+		directivity: circularDirectivity(c.effectiveRadiusMm, frequencyHz, g)
+	});
+	const diameter = 2 * c.radiusMm;
+	return {
+		patch: { kind: 'circular', radiusMm: c.radiusMm, effectiveRadiusMm: c.effectiveRadiusMm },
+		model: { widthMm: diameter, lengthMm: diameter, effectivePermittivity: s.relativePermittivity, fringeExtensionMm: 0, effectiveLengthMm: 2 * c.effectiveRadiusMm },
+		slots: { slotConductanceS: g, mutualConductanceS: 0, edgeResistanceOhm: c.edgeResistanceOhm, slotIntegral: 0 },
+		edgeResistanceOhm: c.edgeResistanceOhm,
+		estimates,
+		extentXMm: diameter,
+		extentYMm: diameter,
+		resonantLengthMm: diameter,
+		feedEdgeMm: c.radiusMm
+	};
+}
+
+interface FeedResult {
+	feed: SizedFeed;
+	feedRoomMm: number;
+	facts: Pick<WarningFacts, 'inset' | 'feedWidth' | 'probe'>;
+}
+
+function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
+	const { frequencyHz, substrate: s } = d;
+	const t = mmFromUm(s.copperThicknessUm);
+	const line = (impedanceOhm: number, lengthMm: number): SizedLine => microstripSection(impedanceOhm, frequencyHz, s.heightMm, s.relativePermittivity, t, lengthMm);
+	switch (d.feed) {
+		case 'edge': {
+			const l = line(d.feedLineImpedanceOhm, marginMm);
+			return { feed: { kind: 'edge', line: l }, feedRoomMm: 0, facts: { feedWidth: { widthMm: l.widthMm, edgeMm: core.feedEdgeMm, notch: false } } };
+		}
+		case 'inset': {
+			const depth = insetDepthMm({ edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm, lengthMm: core.resonantLengthMm });
+			const l = line(d.feedLineImpedanceOhm, marginMm + depth);
+			const gap = d.inset.notchGapMm ?? NOTCH_GAP_LINE_WIDTHS * l.widthMm;
+			return {
+				feed: { kind: 'inset', insetDepthMm: depth, notchGapMm: gap, line: l },
+				feedRoomMm: 0,
+				facts: { inset: { depthMm: depth, lengthMm: core.resonantLengthMm }, feedWidth: { widthMm: l.widthMm + 2 * gap, edgeMm: core.feedEdgeMm, notch: true } }
+			};
+		}
+		case 'quarter-wave': {
+			const transformer = quarterWaveTransformer({
+				loadResistanceOhm: core.edgeResistanceOhm,
+				sourceResistanceOhm: d.targetImpedanceOhm,
+				frequencyHz,
+				heightMm: s.heightMm,
+				relativePermittivity: s.relativePermittivity,
+				thicknessMm: t
+			});
+			const probeLine = line(d.feedLineImpedanceOhm, 0);
+			// The feed side must hold the λ/4 section plus at least one line width of 50 Ω line.
+			const feedRoomMm = transformer.lengthMm + probeLine.widthMm;
+			const sideMm = Math.max(marginMm, feedRoomMm);
+			const l = { ...probeLine, lengthMm: sideMm - transformer.lengthMm };
+			return { feed: { kind: 'quarter-wave', transformer, line: l }, feedRoomMm, facts: { feedWidth: { widthMm: Math.max(transformer.widthMm, l.widthMm), edgeMm: core.feedEdgeMm, notch: false } } };
+		}
+		case 'probe': {
+			const pad = d.probe.padDiameterMm ?? d.probe.drillDiameterMm + 2 * PROBE_ANNULAR_RING_MM;
+			const common = { drillDiameterMm: d.probe.drillDiameterMm, padDiameterMm: pad, clearanceDiameterMm: d.probe.clearanceDiameterMm };
+			const target = { edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm };
+			if (core.patch.kind === 'circular') {
+				const rho = circularProbeRadiusMm({ ...target, radiusMm: core.patch.radiusMm, effectiveRadiusMm: core.patch.effectiveRadiusMm });
+				return { feed: { kind: 'probe', offsetXMm: 0, offsetYMm: rho, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: core.patch.radiusMm - rho, padRadiusMm: pad / 2 } } };
+			}
+			if (core.patch.kind === 'nearly-square') {
+				// Both modes see R·sin²(π·t/2) at the fraction t of the way from the centre to the corner:
+				// the cos² relation over a unit half-length, counted from the corner instead of the edge.
+				const share = 1 - insetDepthMm({ ...target, lengthMm: 2 });
+				const x = (share * core.patch.widthMm) / 2;
+				const y = (share * core.patch.lengthMm) / 2;
+				const edge = Math.min(core.patch.widthMm / 2 - x, core.patch.lengthMm / 2 - y);
+				return { feed: { kind: 'probe', offsetXMm: x, offsetYMm: y, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: edge, padRadiusMm: pad / 2 } } };
+			}
+			const offset = probeOffsetMm({ ...target, lengthMm: core.resonantLengthMm });
+			const edge = Math.min(core.resonantLengthMm / 2 - offset, core.extentXMm / 2);
+			return { feed: { kind: 'probe', offsetXMm: 0, offsetYMm: offset, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: edge, padRadiusMm: pad / 2 } } };
+		}
+	}
+}
+
+function sizeValid(d: DesignInput): SizedDesign {
+	const s = d.substrate;
+	const lambda0 = freeSpaceWavelengthMm(d.frequencyHz);
+	const core = d.shape === 'circular' ? circularCore(d) : rectangularFamily(d);
+	const marginMm = d.groundMarginMm ?? 3 * s.heightMm;
+	const fed = attachFeed(d, core, marginMm);
+	const ground = groundSize({ patchWidthMm: core.extentXMm, patchLengthMm: core.extentYMm, heightMm: s.heightMm, marginMm, feedRoomMm: fed.feedRoomMm });
+	const warnings = sizingWarnings({
+		heightMm: s.heightMm,
+		freeSpaceWavelengthMm: lambda0,
+		frequencyHz: d.frequencyHz,
+		lossTangent: s.lossTangent,
+		marginMm,
+		bandwidthFraction: core.estimates.bandwidthFraction,
+		qualityFactor: core.estimates.qualityFactor,
+		circularlyPolarised: d.shape === 'truncated-corner' || d.shape === 'nearly-square',
+		...fed.facts
+	});
+	return {
+		input: d,
+		shape: d.shape,
+		feedKind: d.feed,
+		frequencyHz: d.frequencyHz,
+		freeSpaceWavelengthMm: lambda0,
+		effectivePermittivity: core.model.effectivePermittivity,
+		fringeExtensionMm: core.model.fringeExtensionMm,
+		effectiveLengthMm: core.model.effectiveLengthMm,
+		slotConductanceS: core.slots.slotConductanceS,
+		mutualConductanceS: core.slots.mutualConductanceS,
+		edgeResistanceOhm: core.edgeResistanceOhm,
+		patch: core.patch,
+		feed: fed.feed,
+		ground,
+		copperThicknessMm: mmFromUm(s.copperThicknessUm),
+		estimates: core.estimates,
+		warnings
+	};
+}
+
+function toDocumentPaths(error: InputError): InputError {
+	return new InputError(error.issues.map((i) => ({ ...i, path: DOCUMENT_PATHS[i.path] ?? i.path })));
+}
+
+/**
+ * Sizes one design: validates the document (defaults filled) and computes the patch, the feed,
+ * the ground, the estimates and the warnings. Throws only InputError, with document field paths
+ * (e.g. "substrate.heightMm" for a substrate too thick for the patch, "targetImpedanceOhm" when no
+ * inset depth reaches the target).
+ */
+export function size(input: unknown): SizedDesign {
+	const d = parseDesignInput(input);
+	try {
+		return sizeValid(d);
+	} catch (error) {
+		if (error instanceof InputError) throw toDocumentPaths(error);
+		throw error;
+	}
+}

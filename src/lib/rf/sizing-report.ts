@@ -1,0 +1,88 @@
+// The flat report of a sized design: every quantity with its unit in its key, as the CLI and API print it.
+import type { DesignInput } from '../schemas';
+import type { SizedDesign, SizingWarning } from './sized-design';
+
+export interface SizingReport {
+	input: DesignInput;
+	[quantity: string]: unknown;
+	estimates: Record<string, unknown>;
+	warnings: SizingWarning[];
+}
+
+/** Flattens a SizedDesign: `input` first, then the quantities, `estimates`, `warnings`. Absent quantities are left out. */
+export function sizingReport(sized: SizedDesign): SizingReport {
+	const out: Record<string, unknown> = {
+		input: sized.input,
+		shape: sized.shape,
+		feed: sized.feedKind,
+		frequencyHz: sized.frequencyHz,
+		freeSpaceWavelengthMm: sized.freeSpaceWavelengthMm
+	};
+	const p = sized.patch;
+	switch (p.kind) {
+		case 'rectangular':
+			Object.assign(out, { patchWidthMm: p.widthMm, patchLengthMm: p.lengthMm });
+			break;
+		case 'nearly-square':
+			Object.assign(out, { patchWidthMm: p.widthMm, patchLengthMm: p.lengthMm, handedness: p.handedness });
+			break;
+		case 'truncated-corner':
+			Object.assign(out, { patchWidthMm: p.sideMm, patchLengthMm: p.sideMm, truncationLegMm: p.truncationLegMm, truncatedDiagonal: p.truncatedDiagonal, handedness: p.handedness });
+			break;
+		case 'circular':
+			Object.assign(out, { patchRadiusMm: p.radiusMm, effectiveRadiusMm: p.effectiveRadiusMm });
+			break;
+	}
+	Object.assign(out, {
+		effectivePermittivity: sized.effectivePermittivity,
+		fringeExtensionMm: sized.fringeExtensionMm,
+		effectiveLengthMm: sized.effectiveLengthMm,
+		slotConductanceS: sized.slotConductanceS,
+		mutualConductanceS: sized.mutualConductanceS,
+		edgeResistanceOhm: sized.edgeResistanceOhm
+	});
+	const f = sized.feed;
+	const line = (prefix: string, l: { widthMm: number; lengthMm: number; impedanceOhm: number; effectivePermittivity: number }) => ({
+		[`${prefix}ImpedanceOhm`]: l.impedanceOhm,
+		[`${prefix}WidthMm`]: l.widthMm,
+		[`${prefix}LengthMm`]: l.lengthMm,
+		[`${prefix}EffectivePermittivity`]: l.effectivePermittivity
+	});
+	switch (f.kind) {
+		case 'inset':
+			Object.assign(out, { insetDepthMm: f.insetDepthMm, notchGapMm: f.notchGapMm }, line('feedLine', f.line));
+			break;
+		case 'edge':
+			Object.assign(out, line('feedLine', f.line));
+			break;
+		case 'quarter-wave':
+			Object.assign(out, line('transformer', f.transformer), line('feedLine', f.line));
+			break;
+		case 'probe':
+			Object.assign(out, {
+				probeOffsetMm: Math.hypot(f.offsetXMm, f.offsetYMm),
+				probeOffsetXMm: f.offsetXMm,
+				probeOffsetYMm: f.offsetYMm,
+				probeDrillDiameterMm: f.drillDiameterMm,
+				probePadDiameterMm: f.padDiameterMm,
+				probeClearanceDiameterMm: f.clearanceDiameterMm
+			});
+			break;
+	}
+	Object.assign(out, {
+		groundWidthMm: sized.ground.widthMm,
+		groundLengthMm: sized.ground.lengthMm,
+		groundMarginMm: sized.ground.marginMm,
+		copperThicknessMm: sized.copperThicknessMm,
+		estimates: {
+			note: 'Estimates from the cavity and transmission-line models (surface waves not counted), not measurements.',
+			bandwidthFraction: sized.estimates.bandwidthFraction,
+			qualityFactor: sized.estimates.qualityFactor,
+			directivityDbi: sized.estimates.directivityDbi,
+			radiationEfficiency: sized.estimates.radiationEfficiency,
+			gainDbi: sized.estimates.gainDbi
+		},
+		warnings: sized.warnings
+	});
+	return out as SizingReport;
+}
