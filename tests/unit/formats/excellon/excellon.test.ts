@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { buildArtwork, type Artwork } from '../../../../src/lib/artwork';
 import { createExportMeta } from '../../../../src/lib/formats/export-meta';
 import { buildExcellonCommands, toExcellon } from '../../../../src/lib/formats/excellon';
-import { handBuiltSized } from '../../../fixtures/sized/hand-built-sized';
+import { sizedCase } from '../../../fixtures/designs/design-cases';
 
 const meta = createExportMeta({ designName: 'Sunroof GNSS', revisionLabel: 'B', revisionDate: '2026-11-20' });
 const parse = (text: string) => {
@@ -13,7 +13,7 @@ const parse = (text: string) => {
 	return p.results();
 };
 
-const probe = buildArtwork(handBuiltSized({ shape: 'rectangular', feed: 'probe' }));
+const probe = buildArtwork(sizedCase('rectangular', 'probe'));
 /** A hand-made artwork with non-plated holes of two sizes (mounting holes), for the NPTH file. */
 const withMounting: Artwork = {
 	...probe,

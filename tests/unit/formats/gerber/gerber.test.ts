@@ -5,7 +5,7 @@ import { buildArtwork, type Artwork, type ArtworkLayer } from '../../../../src/l
 import { contourArea, flattenContour, regionArea } from '../../../../src/lib/geometry';
 import { createExportMeta } from '../../../../src/lib/formats/export-meta';
 import { buildGerberCommands, toGerber } from '../../../../src/lib/formats/gerber';
-import { allShapeFeedCases, handBuiltSized } from '../../../fixtures/sized/hand-built-sized';
+import { allShapeFeedCases, sizedCase } from '../../../fixtures/designs/design-cases';
 import { circleRing, readBackGerber, ringOfReadContour, type ReadBack } from './read-back';
 
 const meta = createExportMeta({ designName: 'Sunroof GNSS', revisionLabel: 'B', revisionDate: '2026-11-20' });
@@ -58,7 +58,7 @@ function readBackArea(read: ReadBack): number {
 	return multiArea(image);
 }
 
-const cases = allShapeFeedCases.map((c) => ({ ...c, artwork: buildArtwork(handBuiltSized({ ...c, solderMask: true })) }));
+const cases = allShapeFeedCases.map((c) => ({ ...c, artwork: buildArtwork(sizedCase(c.shape, c.feed, { solderMask: true })) }));
 const gerberLayers = (a: Artwork) => a.layers.filter((l) => l.function.kind !== 'profile');
 
 describe('Gerber writer', () => {
@@ -113,7 +113,7 @@ describe('Gerber writer', () => {
 	});
 
 	it('matches the exact arc area of a circular patch with the parsed, flattened one within 0.1 %', () => {
-		const sized = handBuiltSized({ shape: 'circular', feed: 'probe' });
+		const sized = sizedCase('circular', 'probe');
 		if (sized.patch.kind !== 'circular') throw new Error('expected a circular patch');
 		const a = buildArtwork(sized);
 		const patch = a.layers[0].shapes.find((s) => s.id === 'patch')!;
