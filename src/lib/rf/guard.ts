@@ -15,19 +15,21 @@ export function describeRange(min: number, max: number, opts: RangeOptions = {})
 
 /** Returns `value` when it is a finite number inside the range, else throws InputError for `path`. */
 export function requireInRange(path: string, value: unknown, min: number, max: number, opts: RangeOptions = {}): number {
-	const range = describeRange(min, max, opts);
 	if (typeof value !== 'number' || !Number.isFinite(value)) {
-		throw new InputError([{ path, value, message: `must be a finite number; ${range}` }]);
+		throw new InputError([{ path, value, message: `must be a finite number; ${describeRange(min, max, opts)}` }]);
 	}
 	const belowMin = opts.exclusiveMin ? value <= min : value < min;
 	const aboveMax = opts.exclusiveMax ? value >= max : value > max;
-	if (belowMin || aboveMax) throw new InputError([{ path, value, message: range }]);
+	if (belowMin || aboveMax) throw new InputError([{ path, value, message: describeRange(min, max, opts) }]);
 	return value;
 }
 
 /** A finite number > 0 (upper end: the largest finite double). */
+const POSITIVE: RangeOptions = { exclusiveMin: true };
+
 export function requirePositive(path: string, value: unknown): number {
-	return requireInRange(path, value, 0, Number.MAX_VALUE, { exclusiveMin: true });
+	if (typeof value === 'number' && value > 0 && value <= Number.MAX_VALUE) return value;
+	return requireInRange(path, value, 0, Number.MAX_VALUE, POSITIVE);
 }
 
 /** A finite number ≥ 0. */

@@ -28,9 +28,28 @@ function startingRatio(z: number, er: number): number {
 	return Number.isFinite(wide) && wide > 0 ? wide : 1;
 }
 
+/** Bracketed bisection over [lo, hi] (fallback), with the reachability check. */
+function bisect(g: (x: number) => number, lo: number, hi: number, z: number, logTarget: number): number {
+	const gLo = g(lo);
+	const gHi = g(hi);
+	if (!(gLo >= 0 && gHi <= 0)) {
+		const zMax = Math.exp(gLo + logTarget);
+		const zMin = Math.exp(gHi + logTarget);
+		throw new InputError([
+			{ path: 'impedanceOhm', value: z, message: `not realisable as microstrip on this substrate; allowed range [${zMin.toPrecision(4)}, ${zMax.toPrecision(4)}]` }
+		]);
+	}
+	for (let i = 0; i < 200 && hi - lo > 1e-15; i++) {
+		const mid = (lo + hi) / 2;
+		if (g(mid) > 0) lo = mid;
+		else hi = mid;
+	}
+	return (lo + hi) / 2;
+}
+
 /**
  * The width W whose Hammerstad–Jensen Z0 (with the thickness correction) equals the target, to
- * about 1e-12 relative. Newton's method on ln Z over ln(W/h), kept inside a bracket. Example:
+ * about 1e-12 relative. Secant steps on ln Z over ln(W/h), with a bisection fallback. Example:
  * 50 Ω on εr 4.4, h 1.6 mm, t 35 µm → W ≈ 3.0 mm.
  */
 export function synthesizeMicrostrip(target: MicrostripTarget): SynthesizedMicrostrip {
@@ -42,30 +61,28 @@ export function synthesizeMicrostrip(target: MicrostripTarget): SynthesizedMicro
 	const logTarget = Math.log(z);
 	const g = (x: number) => Math.log(microstripModel(Math.exp(x), er, tr).impedanceOhm) - logTarget;
 
-	let lo = Math.log(MIN_WIDTH_RATIO);
-	let hi = Math.log(MAX_WIDTH_RATIO);
-	const gLo = g(lo);
-	const gHi = g(hi);
-	if (!(gLo >= 0 && gHi <= 0)) {
-		const zMax = Math.exp(gLo + logTarget);
-		const zMin = Math.exp(gHi + logTarget);
-		throw new InputError([
-			{ path: 'impedanceOhm', value: z, message: `not realisable as microstrip on this substrate; allowed range [${zMin.toPrecision(4)}, ${zMax.toPrecision(4)}]` }
-		]);
-	}
-	let x = Math.min(hi, Math.max(lo, Math.log(startingRatio(z, er))));
-	for (let iter = 0; iter < 100; iter++) {
-		const gx = g(x);
-		if (Math.abs(gx) < 1e-14) break;
-		if (gx > 0) lo = x;
-		else hi = x;
-		const step = 1e-7;
-		const slope = (g(x + step) - gx) / step;
-		let next = x - gx / slope;
-		if (!(next > lo && next < hi)) next = (lo + hi) / 2;
-		if (Math.abs(next - x) < 1e-15) break;
+	const lnMin = Math.log(MIN_WIDTH_RATIO);
+	const lnMax = Math.log(MAX_WIDTH_RATIO);
+	// Secant steps from the closed-form guess; ln Z is nearly linear in ln u, so a few steps suffice.
+	let x0 = Math.min(lnMax, Math.max(lnMin, Math.log(startingRatio(z, er))));
+	let g0 = g(x0);
+	let x = x0 + (g0 > 0 ? 0.01 : -0.01);
+	let gx = g(x);
+	let converged = Math.abs(g0) < 1e-14;
+	if (converged) x = x0;
+	for (let iter = 0; iter < 60 && !converged; iter++) {
+		if (Math.abs(gx) < 1e-14) {
+			converged = true;
+			break;
+		}
+		const next = x - (gx * (x - x0)) / (gx - g0);
+		if (!Number.isFinite(next) || next < lnMin || next > lnMax) break;
+		x0 = x;
+		g0 = gx;
 		x = next;
+		gx = g(x);
 	}
+	if (!converged) x = bisect(g, lnMin, lnMax, z, logTarget);
 	const u = Math.exp(x);
 	return { widthMm: u * heightMm, ...microstripModel(u, er, tr) };
 }
