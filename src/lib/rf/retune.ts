@@ -20,6 +20,8 @@ const MIN_RELATIVE_PERMITTIVITY = 1;
 const MAX_RELATIVE_PERMITTIVITY = 30;
 /** Bisection stops when the bracket is this small relative to εr (far below any laminate tolerance). */
 const PERMITTIVITY_RELATIVE_TOLERANCE = 1e-12;
+/** Significant digits kept in the apparent εr (an εr step of 1e-5 moves the resonance by about 1 ppm). */
+const APPARENT_PERMITTIVITY_DIGITS = 6;
 
 export interface RetuneOptions {
 	/** Keep the designed patch width and solve only the length (rectangular patches). Default false. */
@@ -45,7 +47,7 @@ export interface RetuneProposal {
 	/** (measured − predicted)/predicted. */
 	frequencyErrorFraction: number;
 	designRelativePermittivity: number;
-	/** The laminate εr that makes the model's resonance of the built patch equal the measurement. */
+	/** The laminate εr that makes the model's resonance of the built patch equal the measurement (6 significant digits). */
 	apparentRelativePermittivity: number;
 	/** Patch effective permittivity the sizing model gives for the designed and the apparent εr. */
 	designEffectivePermittivity: number;
@@ -89,7 +91,8 @@ function apparentPermittivity(patch: SizedPatch, heightMm: number, measuredHz: n
 		if (resonanceOn(patch, heightMm, mid) > measuredHz) lo = mid;
 		else hi = mid;
 	}
-	return (lo + hi) / 2;
+	// Six significant digits: far finer than any laminate's εr is known, and a readable value in the new document.
+	return Number(((lo + hi) / 2).toPrecision(APPARENT_PERMITTIVITY_DIGITS));
 }
 
 /** εreff of fixed patch dimensions on a laminate (transmission-line model; the cavity model's εr for a disc). */
