@@ -1,0 +1,83 @@
+// A fab capability profile: the smallest features a board house promises to build, and its tolerances.
+import { z } from 'zod';
+import { parseWith } from './input-error';
+
+/** A finite length in mm within [min, max]; the error message states the allowed range. */
+function lengthMm(min: number, max: number) {
+	const range = `allowed range [${min}, ${max}] mm`;
+	return z
+		.number({ error: (iss) => (iss.input === undefined ? `required; ${range}` : `must be a finite number; ${range}`) })
+		.gte(min, { error: range })
+		.lte(max, { error: range });
+}
+
+/**
+ * What one board house can make. Every minimum is a finished (as-built) size; the tolerances are
+ * the ± spread the house states around a drawn size. 0.15 mm trace / 0.15 mm space, for example,
+ * means a 0.15 mm line next to a 0.15 mm gap is still built without opens or shorts.
+ */
+export const fabProfileSchema = z
+	.strictObject({
+		/** Human name, shown in the check report and the fab notes. */
+		name: z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }),
+		/** Narrowest copper line (feed line, transformer section). */
+		minTraceWidthMm: lengthMm(0.01, 10),
+		/** Narrowest gap between two separate copper features on one layer; also drill barrel to plane. */
+		minSpacingMm: lengthMm(0.01, 10),
+		/** Smallest finished hole. */
+		minDrillMm: lengthMm(0.01, 10),
+		/** Narrowest copper ring left around a hole: (pad diameter − drill) / 2. */
+		minAnnularRingMm: lengthMm(0, 10),
+		/** Copper kept back from the routed board outline. */
+		copperToEdgeMm: lengthMm(0, 20),
+		/** Narrowest copper-free slot inside one copper feature (an inset notch gap). */
+		minSlotWidthMm: lengthMm(0.01, 10),
+		/** ± change of a drawn copper edge after etching. */
+		etchToleranceMm: lengthMm(0, 1),
+		/** ± on a plated hole's finished diameter. */
+		platedDrillToleranceMm: lengthMm(0, 1),
+		/** ± on a non-plated hole's diameter. */
+		nonPlatedDrillToleranceMm: lengthMm(0, 1)
+	})
+	.superRefine((p, ctx) => {
+		// A slot is a gap too: a house that cannot hold a 0.15 mm space cannot hold a 0.1 mm notch.
+		if (p.minSlotWidthMm < p.minSpacingMm) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['minSlotWidthMm'],
+				input: p.minSlotWidthMm,
+				message: `must be at least minSpacingMm (${p.minSpacingMm} mm); allowed range [${p.minSpacingMm}, 10] mm`
+			});
+		}
+	});
+
+export type FabProfile = z.output<typeof fabProfileSchema>;
+
+/**
+ * The built-in profile. All values: common practice, no source — typical of low-cost quick-turn
+ * two-layer FR-4 services, chosen on the conservative side:
+ * - 0.15 mm (≈ 6 mil) trace and space;
+ * - 0.3 mm smallest finished drill;
+ * - 0.15 mm annular ring;
+ * - 0.3 mm copper to the routed edge;
+ * - 0.2 mm notch/slot: a little wider than the space, because a narrow slot cut into a wide copper
+ *   area is etched from both walls and closes first;
+ * - ±0.05 mm etch, ±0.075 mm plated and ±0.05 mm non-plated drill diameter.
+ */
+export const STANDARD_QUICK_TURN_PROFILE: FabProfile = Object.freeze({
+	name: 'standard quick-turn two-layer',
+	minTraceWidthMm: 0.15,
+	minSpacingMm: 0.15,
+	minDrillMm: 0.3,
+	minAnnularRingMm: 0.15,
+	copperToEdgeMm: 0.3,
+	minSlotWidthMm: 0.2,
+	etchToleranceMm: 0.05,
+	platedDrillToleranceMm: 0.075,
+	nonPlatedDrillToleranceMm: 0.05
+});
+
+/** Validates a fab profile document or throws InputError (field path, value, allowed range). */
+export function parseFabProfile(raw: unknown): FabProfile {
+	return parseWith(fabProfileSchema, raw);
+}
