@@ -67,7 +67,7 @@ runMain(async () => {
 
 	try {
 		console.log('\n── lint ──');
-		const lint = run('npx', ['eslint', '--config', 'scripts/eslint.config.js', 'src', 'tests', 'scripts'], env);
+		const lint = run('npm', ['run', '--silent', 'lint'], env);
 		tallies.push({ suite: 'lint', passed: lint === 0 ? 1 : 0, failed: lint === 0 ? 0 : 1 });
 
 		console.log('\n── build ──');
