@@ -1,0 +1,4 @@
+// svgdom ships no types: the one function we use.
+declare module 'svgdom' {
+	export function createSVGWindow(): Window & typeof globalThis;
+}
