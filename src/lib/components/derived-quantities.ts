@@ -1,0 +1,97 @@
+// The derived values of a sized design as labelled rows with display units, shared by the panel and the diff.
+import type { SizedDesign } from '../rf';
+import { ghzFromHz } from '../units';
+
+export interface Quantity {
+	key: string;
+	group: 'Patch' | 'Feed' | 'Board' | 'Model' | 'Estimates';
+	label: string;
+	/** In the display unit. */
+	value: number | string;
+	unit: string;
+	/** Significant digits to show. */
+	digits: number;
+}
+
+export function derivedQuantities(s: SizedDesign): Quantity[] {
+	const q: Quantity[] = [];
+	const add = (group: Quantity['group'], key: string, label: string, value: number | string, unit: string, digits = 5) => q.push({ key, group, label, value, unit, digits });
+
+	const p = s.patch;
+	switch (p.kind) {
+		case 'rectangular':
+		case 'nearly-square':
+			add('Patch', 'patchWidthMm', 'Width W', p.widthMm, 'mm');
+			add('Patch', 'patchLengthMm', 'Length L', p.lengthMm, 'mm');
+			if (p.kind === 'nearly-square') add('Patch', 'handedness', 'Polarisation', p.handedness.toUpperCase(), '');
+			break;
+		case 'truncated-corner':
+			add('Patch', 'patchSideMm', 'Side a', p.sideMm, 'mm');
+			add('Patch', 'truncationLegMm', 'Corner cut leg', p.truncationLegMm, 'mm');
+			add('Patch', 'handedness', 'Polarisation', p.handedness.toUpperCase(), '');
+			break;
+		case 'circular':
+			add('Patch', 'patchRadiusMm', 'Radius a', p.radiusMm, 'mm');
+			add('Patch', 'effectiveRadiusMm', 'Effective radius aₑ', p.effectiveRadiusMm, 'mm');
+			break;
+	}
+
+	const f = s.feed;
+	const line = (prefix: string, name: string, l: { widthMm: number; lengthMm: number; impedanceOhm: number }) => {
+		add('Feed', `${prefix}WidthMm`, `${name} width`, l.widthMm, 'mm');
+		add('Feed', `${prefix}LengthMm`, `${name} length`, l.lengthMm, 'mm');
+		add('Feed', `${prefix}ImpedanceOhm`, `${name} impedance`, l.impedanceOhm, 'Ω', 4);
+	};
+	switch (f.kind) {
+		case 'inset':
+			add('Feed', 'insetDepthMm', 'Inset depth y₀', f.insetDepthMm, 'mm');
+			add('Feed', 'notchGapMm', 'Notch gap', f.notchGapMm, 'mm');
+			line('feedLine', 'Feed line', f.line);
+			break;
+		case 'edge':
+			line('feedLine', 'Feed line', f.line);
+			break;
+		case 'quarter-wave':
+			line('transformer', 'λ/4 transformer', f.transformer);
+			line('feedLine', 'Feed line', f.line);
+			break;
+		case 'probe':
+			add('Feed', 'probeOffsetXMm', 'Probe offset x', f.offsetXMm, 'mm');
+			add('Feed', 'probeOffsetYMm', 'Probe offset y', f.offsetYMm, 'mm');
+			add('Feed', 'probeDrillDiameterMm', 'Drill ⌀', f.drillDiameterMm, 'mm', 3);
+			add('Feed', 'probePadDiameterMm', 'Pad ⌀', f.padDiameterMm, 'mm', 3);
+			add('Feed', 'probeClearanceDiameterMm', 'Clearance ⌀', f.clearanceDiameterMm, 'mm', 3);
+			break;
+	}
+
+	add('Board', 'groundWidthMm', 'Ground width', s.ground.widthMm, 'mm');
+	add('Board', 'groundLengthMm', 'Ground length', s.ground.lengthMm, 'mm');
+	add('Board', 'groundMarginMm', 'Ground margin', s.ground.marginMm, 'mm', 4);
+
+	add('Model', 'frequencyGHz', 'Frequency f₀', ghzFromHz(s.frequencyHz), 'GHz', 6);
+	add('Model', 'freeSpaceWavelengthMm', 'Free-space wavelength λ₀', s.freeSpaceWavelengthMm, 'mm');
+	add('Model', 'effectivePermittivity', 'Effective permittivity εeff', s.effectivePermittivity, '', 4);
+	if (s.fringeExtensionMm > 0) add('Model', 'fringeExtensionMm', 'Fringe extension ΔL', s.fringeExtensionMm, 'mm', 4);
+	add('Model', 'effectiveLengthMm', 'Effective length', s.effectiveLengthMm, 'mm');
+	add('Model', 'slotConductanceMs', 'Slot conductance G₁', s.slotConductanceS * 1000, 'mS', 4);
+	add('Model', 'mutualConductanceMs', 'Mutual conductance G₁₂', s.mutualConductanceS * 1000, 'mS', 4);
+	add('Model', 'edgeResistanceOhm', 'Edge resistance', s.edgeResistanceOhm, 'Ω', 4);
+
+	const e = s.estimates;
+	add('Estimates', 'bandwidthPercent', 'Bandwidth (VSWR ≤ 2)', e.bandwidthFraction * 100, '%', 3);
+	add('Estimates', 'qualityFactor', 'Quality factor Q', e.qualityFactor, '', 3);
+	add('Estimates', 'directivityDbi', 'Directivity', e.directivityDbi, 'dBi', 3);
+	add('Estimates', 'radiationEfficiencyPercent', 'Radiation efficiency', e.radiationEfficiency * 100, '%', 3);
+	add('Estimates', 'gainDbi', 'Gain', e.gainDbi, 'dBi', 3);
+	return q;
+}
+
+/** A value as text: fixed significant digits, no exponent for the ranges we show. */
+export function formatValue(value: number | string, digits: number): string {
+	if (typeof value === 'string') return value;
+	if (!Number.isFinite(value)) return '—';
+	const abs = Math.abs(value);
+	if (abs === 0) return '0';
+	const decimals = Math.max(0, Math.min(6, digits - 1 - Math.floor(Math.log10(abs))));
+	return value.toFixed(decimals);
+}
