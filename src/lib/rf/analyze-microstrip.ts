@@ -44,7 +44,9 @@ export function microstripModel(u: number, relativePermittivity: number, thickne
 	// Thickness widens the strip: Δu1 in air, Δur in the dielectric (HJ 1980, eq. 6–9).
 	const t = thicknessRatio;
 	const coth = 1 / Math.tanh(Math.sqrt(6.517 * u));
-	const du1 = (t / Math.PI) * Math.log(1 + (4 * Math.E) / (t * coth * coth));
+	// ln(1 + A/t) written as ln(t + A) − ln t, which stays finite for denormal t.
+	const a = (4 * Math.E) / (coth * coth);
+	const du1 = (t / Math.PI) * (Math.log(t + a) - Math.log(t));
 	const dur = 0.5 * (1 + 1 / Math.cosh(Math.sqrt(relativePermittivity - 1))) * du1;
 	const u1 = u + du1;
 	const ur = u + dur;
