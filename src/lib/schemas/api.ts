@@ -1,0 +1,146 @@
+// zod schemas of the /api/v1 surface: path parameters, queries, bodies and answers. The OpenAPI document is generated from these.
+import { z } from 'zod';
+import { designInputSchema } from './design-input';
+
+/** The design-input document, named for the OpenAPI components. */
+export const designInputDocumentSchema = designInputSchema.meta({ id: 'DesignInput', description: 'The design-input document (see src/lib/schemas/design-input.ts)' });
+
+/** What a download can deliver: the whole zip bundle or one format's files. */
+export const exportKinds = ['bundle', 'gerber', 'drill', 'dxf', 'svg', 'sweep', 'notes'] as const;
+export type ExportKind = (typeof exportKinds)[number];
+
+export function isExportKind(value: string): value is ExportKind {
+	return (exportKinds as readonly string[]).includes(value);
+}
+
+export const exportVias = ['ui', 'api', 'cli'] as const;
+
+const idString = (what: string) =>
+	z
+		.string()
+		.min(1, { error: `${what} must not be empty` })
+		.max(100, { error: `${what} is at most 100 characters` })
+		.regex(/^[A-Za-z0-9_-]+$/, { error: `${what} holds only letters, digits, "_" and "-"` });
+
+export const teamIdParam = idString('teamId').meta({ description: 'Team id', example: 'team_3f9c' });
+export const designIdParam = idString('designId').meta({ description: 'Design id', example: 'dsg_71ab' });
+export const revisionLabelParam = z
+	.string()
+	.regex(/^[A-Za-z0-9][A-Za-z0-9.-]{0,15}$/, { error: 'label is 1–16 letters, digits, dots or hyphens' })
+	.meta({ description: 'Revision label', example: 'A' });
+export const exportKindParam = z.enum(exportKinds).meta({ description: 'What to download: the zip bundle or one format' });
+
+export const teamParamsSchema = z.object({ teamId: teamIdParam });
+export const designParamsSchema = z.object({ designId: designIdParam });
+export const revisionParamsSchema = z.object({ designId: designIdParam, label: revisionLabelParam });
+export const exportParamsSchema = z.object({ designId: designIdParam, label: revisionLabelParam, format: exportKindParam });
+
+export const exportSortKeys = ['createdAt', 'design', 'revision', 'kind', 'via', 'user', 'sizeBytes'] as const;
+export type ExportSortKey = (typeof exportSortKeys)[number];
+
+/** Query of the export log: filter, sort, page. */
+export const exportLogQuerySchema = z.strictObject({
+	designId: designIdParam.optional(),
+	kind: z.enum(exportKinds).optional().meta({ description: 'Only this kind of download' }),
+	via: z.enum(exportVias).optional().meta({ description: 'Only downloads made from here' }),
+	q: z.string().trim().max(100, { error: 'q is at most 100 characters' }).optional().meta({ description: 'Text in the design name, revision label, person or sha256' }),
+	sort: z.enum(exportSortKeys).default('createdAt'),
+	order: z.enum(['asc', 'desc']).default('desc'),
+	page: z.coerce.number({ error: 'page must be a whole number ≥ 1' }).int({ error: 'page must be a whole number ≥ 1' }).min(1, { error: 'page must be a whole number ≥ 1' }).max(100_000, { error: 'page is at most 100000' }).default(1),
+	pageSize: z.coerce.number({ error: 'pageSize must be a whole number in [1, 100]' }).int({ error: 'pageSize must be a whole number in [1, 100]' }).min(1, { error: 'allowed range [1, 100]' }).max(100, { error: 'allowed range [1, 100]' }).default(25)
+});
+export type ExportLogQuery = z.output<typeof exportLogQuerySchema>;
+
+export const createDesignBodySchema = z
+	.strictObject({
+		name: z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).optional().meta({ description: 'Design name (default: the input document’s name)', example: 'Roof GNSS L1' }),
+		/** The design-input document of revision A. */
+		input: designInputDocumentSchema,
+		note: z.string().max(500, { error: 'at most 500 characters' }).optional()
+	})
+	.meta({ id: 'CreateDesign' });
+export type CreateDesignBody = z.output<typeof createDesignBodySchema>;
+
+export const createRevisionBodySchema = z
+	.strictObject({
+		parent: revisionLabelParam.meta({ description: 'Label of the revision this one starts from' }),
+		/** The complete design-input document of the new revision. */
+		input: designInputDocumentSchema,
+		note: z.string().max(500, { error: 'at most 500 characters' }).optional()
+	})
+	.meta({ id: 'CreateRevision' });
+export type CreateRevisionBody = z.output<typeof createRevisionBodySchema>;
+
+// ---- answers (documentation of what the routes return) ----
+
+export const teamRoleSchema = z.enum(['owner', 'editor', 'viewer']);
+
+export const teamSummarySchema = z.object({ id: z.string(), name: z.string(), role: teamRoleSchema }).meta({ id: 'Team' });
+export const teamListSchema = z.object({ teams: z.array(teamSummarySchema) }).meta({ id: 'TeamList' });
+
+export const revisionSummarySchema = z
+	.object({
+		label: z.string(),
+		parentLabel: z.string().nullable(),
+		note: z.string(),
+		createdAt: z.iso.datetime(),
+		createdBy: z.string().meta({ description: 'Display name of the author' })
+	})
+	.meta({ id: 'RevisionSummary' });
+
+export const designSummarySchema = z
+	.object({ id: z.string(), teamId: z.string(), name: z.string(), slug: z.string(), createdAt: z.iso.datetime(), latestLabel: z.string().nullable() })
+	.meta({ id: 'DesignSummary' });
+export const designListSchema = z.object({ designs: z.array(designSummarySchema) }).meta({ id: 'DesignList' });
+
+export const designDetailSchema = designSummarySchema.extend({ revisions: z.array(revisionSummarySchema) }).meta({ id: 'Design' });
+
+/** The sized design (see src/lib/rf/sized-design.ts): numbers with their unit in their name, and the warnings. */
+export const sizedDesignSchema = z
+	.looseObject({
+		input: designInputDocumentSchema,
+		shape: z.string(),
+		feedKind: z.string(),
+		frequencyHz: z.number(),
+		freeSpaceWavelengthMm: z.number(),
+		effectivePermittivity: z.number(),
+		patch: z.looseObject({ kind: z.string() }),
+		feed: z.looseObject({ kind: z.string() }),
+		ground: z.object({ widthMm: z.number(), lengthMm: z.number(), marginMm: z.number() }),
+		estimates: z.looseObject({ bandwidthFraction: z.number(), gainDbi: z.number() }),
+		warnings: z.array(z.object({ code: z.string(), message: z.string() }))
+	})
+	.meta({ id: 'SizedDesign', description: 'Every derived quantity with its unit in its name (mm, Hz, Ω, S), and the sizing warnings' });
+
+export const revisionDetailSchema = revisionSummarySchema
+	.extend({ designId: z.string(), designName: z.string(), input: designInputDocumentSchema, results: sizedDesignSchema })
+	.meta({ id: 'Revision' });
+
+export const exportedFileSchema = z.object({ name: z.string(), sizeBytes: z.number().int(), sha256: z.string().regex(/^[0-9a-f]{64}$/) }).meta({ id: 'ExportedFile' });
+
+export const exportRecordSchema = z
+	.object({
+		id: z.string(),
+		createdAt: z.iso.datetime(),
+		design: z.object({ id: z.string(), name: z.string() }),
+		revision: z.object({ label: z.string() }),
+		kind: z.string(),
+		via: z.enum(exportVias),
+		user: z.object({ displayName: z.string() }),
+		files: z.array(exportedFileSchema),
+		sizeBytes: z.number().int().meta({ description: 'Sum of the file sizes' }),
+		sha256: z.string().meta({ description: 'sha256 of the delivered bytes (the zip for a bundle)' }),
+		earlier: z
+			.object({ exportId: z.string(), createdAt: z.iso.datetime(), matches: z.boolean() })
+			.nullable()
+			.meta({ description: 'The first earlier export of the same revision and kind, and whether every hash matches it; null for a first export' })
+	})
+	.meta({ id: 'ExportRecord' });
+
+export const exportLogSchema = z
+	.object({ items: z.array(exportRecordSchema), total: z.number().int(), page: z.number().int(), pageSize: z.number().int() })
+	.meta({ id: 'ExportLog' });
+
+export const problemSchema = z
+	.object({ error: z.string(), issues: z.array(z.object({ path: z.string(), message: z.string() })) })
+	.meta({ id: 'Problem', description: 'What went wrong; for bad input, one issue per field' });

@@ -1,0 +1,150 @@
+// The OpenAPI 3.1 document of /api/v1, generated from the same zod schemas the routes parse with.
+import { OpenAPIRegistry, OpenApiGeneratorV31 } from '@asteasolutions/zod-to-openapi';
+import { z } from 'zod';
+import {
+	createDesignBodySchema,
+	designInputDocumentSchema,
+	createRevisionBodySchema,
+	designDetailSchema,
+	designListSchema,
+	designParamsSchema,
+	exportLogQuerySchema,
+	exportLogSchema,
+	exportParamsSchema,
+	problemSchema,
+	revisionDetailSchema,
+	revisionParamsSchema,
+	sizedDesignSchema,
+	teamListSchema,
+	teamParamsSchema
+} from '$lib/schemas/api';
+import { SOFTWARE_VERSION } from '$lib/formats/export-meta';
+
+const problemResponse = (description: string) => ({ description, content: { 'application/json': { schema: problemSchema } } });
+const jsonResponse = (description: string, schema: z.ZodType) => ({ description, content: { 'application/json': { schema } } });
+
+const denied = {
+	401: problemResponse('No session and no valid API token'),
+	404: problemResponse('Not found, or not in a team the caller belongs to (an API token reaches only its own team)')
+};
+const badInput = { 400: problemResponse('Bad input: one issue per field, each naming the allowed range') };
+const forbidden = { 403: problemResponse('A member whose role lacks this right (viewers read and download only)') };
+
+function buildRegistry(): OpenAPIRegistry {
+	const registry = new OpenAPIRegistry();
+	registry.registerComponent('securitySchemes', 'apiToken', {
+		type: 'http',
+		scheme: 'bearer',
+		description: 'A personal API token (ff_…) made on the API tokens page; it reaches one team'
+	});
+	registry.registerComponent('securitySchemes', 'session', { type: 'apiKey', in: 'cookie', name: 'ff_session', description: 'The signed-in session of the web app' });
+
+	registry.registerPath({
+		method: 'get',
+		path: '/teams',
+		tags: ['teams'],
+		summary: 'The teams the caller belongs to (an API token: its one team)',
+		responses: { 200: jsonResponse('The teams with the caller’s role in each', teamListSchema), 401: denied[401] }
+	});
+	registry.registerPath({
+		method: 'get',
+		path: '/teams/{teamId}/designs',
+		tags: ['designs'],
+		summary: 'The team’s designs',
+		request: { params: teamParamsSchema },
+		responses: { 200: jsonResponse('Designs, newest first', designListSchema), ...badInput, ...denied }
+	});
+	registry.registerPath({
+		method: 'post',
+		path: '/teams/{teamId}/designs',
+		tags: ['designs'],
+		summary: 'Create a design with its first revision (A) — editors and owners',
+		request: { params: teamParamsSchema, body: { required: true, content: { 'application/json': { schema: createDesignBodySchema } } } },
+		responses: { 201: jsonResponse('The new design', designDetailSchema), ...badInput, ...denied, ...forbidden }
+	});
+	registry.registerPath({
+		method: 'get',
+		path: '/designs/{designId}',
+		tags: ['designs'],
+		summary: 'A design with its revision history',
+		request: { params: designParamsSchema },
+		responses: { 200: jsonResponse('The design', designDetailSchema), ...badInput, ...denied }
+	});
+	registry.registerPath({
+		method: 'post',
+		path: '/designs/{designId}/revisions',
+		tags: ['revisions'],
+		summary: 'Save a new revision from a parent (never changes an old one) — editors and owners',
+		request: { params: designParamsSchema, body: { required: true, content: { 'application/json': { schema: createRevisionBodySchema } } } },
+		responses: { 201: jsonResponse('The new revision', revisionDetailSchema), ...badInput, ...denied, ...forbidden }
+	});
+	registry.registerPath({
+		method: 'get',
+		path: '/designs/{designId}/revisions/{label}',
+		tags: ['revisions'],
+		summary: 'One revision: its input document and its computed results',
+		request: { params: revisionParamsSchema },
+		responses: { 200: jsonResponse('The revision', revisionDetailSchema), ...badInput, ...denied }
+	});
+	registry.registerPath({
+		method: 'get',
+		path: '/designs/{designId}/revisions/{label}/sweep',
+		tags: ['exports'],
+		summary: 'The revision’s sweep definition (JSON; see /schemas for its JSON Schema) — recorded in the export log',
+		request: { params: revisionParamsSchema },
+		responses: {
+			200: { description: 'The sweep definition document', content: { 'application/json': { schema: z.looseObject({}).meta({ description: 'Sweep definition, versioned schema of its own' }) } } },
+			...badInput,
+			...denied
+		}
+	});
+	registry.registerPath({
+		method: 'get',
+		path: '/designs/{designId}/revisions/{label}/export/{format}',
+		tags: ['exports'],
+		summary: 'Download one format or the zip bundle — recorded in the export log; the same revision always gives the same bytes',
+		request: { params: exportParamsSchema },
+		responses: {
+			200: {
+				description: 'The file (content-disposition: attachment); x-content-sha256 carries the sha256 of the body',
+				content: { 'application/octet-stream': { schema: z.string().meta({ format: 'binary' }) } }
+			},
+			...badInput,
+			...denied
+		}
+	});
+	registry.registerPath({
+		method: 'get',
+		path: '/teams/{teamId}/exports',
+		tags: ['exports'],
+		summary: 'The team’s export log: filter, sort, page',
+		request: { params: teamParamsSchema, query: exportLogQuerySchema },
+		responses: { 200: jsonResponse('One page of the log', exportLogSchema), ...badInput, ...denied }
+	});
+	registry.registerPath({
+		method: 'post',
+		path: '/size',
+		tags: ['sizing'],
+		summary: 'Size a design (stateless: nothing is stored)',
+		request: { body: { required: true, content: { 'application/json': { schema: designInputDocumentSchema } } } },
+		responses: { 200: jsonResponse('The sized design', sizedDesignSchema), ...badInput, 401: denied[401] }
+	});
+	return registry;
+}
+
+let cached: ReturnType<OpenApiGeneratorV31['generateDocument']> | undefined;
+
+export function openApiDocument() {
+	cached ??= new OpenApiGeneratorV31(buildRegistry().definitions).generateDocument({
+		openapi: '3.1.0',
+		info: {
+			title: 'Fringefield API',
+			version: SOFTWARE_VERSION,
+			description:
+				'Teams, designs, immutable revisions, sizing, sweep definitions and recorded downloads. Authorise with the session cookie or `Authorization: Bearer ff_…` (a personal API token, scoped to one team).'
+		},
+		servers: [{ url: '/api/v1' }],
+		security: [{ apiToken: [] }, { session: [] }]
+	});
+	return cached;
+}

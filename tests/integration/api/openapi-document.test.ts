@@ -1,0 +1,44 @@
+// The OpenAPI document is generated from the route schemas and is a valid 3.1 document.
+import { describe, expect, it } from 'vitest';
+import { openApiDocument } from '../../../src/lib/server/api/openapi-document';
+
+describe('openApiDocument', () => {
+	it('declares OpenAPI 3.1 and lists every /api/v1 route with its method', () => {
+		const doc = openApiDocument();
+		expect(doc.openapi).toBe('3.1.0');
+		const routes = Object.entries(doc.paths ?? {}).flatMap(([path, item]) => Object.keys(item as object).map((m) => `${m.toUpperCase()} ${path}`));
+		expect(routes.sort()).toEqual(
+			[
+				'GET /teams',
+				'GET /teams/{teamId}/designs',
+				'POST /teams/{teamId}/designs',
+				'GET /teams/{teamId}/exports',
+				'GET /designs/{designId}',
+				'POST /designs/{designId}/revisions',
+				'GET /designs/{designId}/revisions/{label}',
+				'GET /designs/{designId}/revisions/{label}/sweep',
+				'GET /designs/{designId}/revisions/{label}/export/{format}',
+				'POST /size'
+			].sort()
+		);
+	});
+
+	it('carries the design-input schema with its bounds, taken from the zod schema', () => {
+		const doc = openApiDocument();
+		const input = doc.components?.schemas?.DesignInput as { properties: Record<string, { minimum?: number; maximum?: number }>; required: string[] };
+		// Bounds from src/lib/schemas/design-input.ts: frequencyHz in [100e6, 100e9].
+		expect(input.properties.frequencyHz.minimum).toBe(100e6);
+		expect(input.properties.frequencyHz.maximum).toBe(100e9);
+		expect(input.required).toContain('frequencyHz');
+	});
+
+	it('documents the export-log query parameters and the format enum', () => {
+		const doc = openApiDocument();
+		const log = (doc.paths as Record<string, any>)['/teams/{teamId}/exports'].get;
+		const names = log.parameters.map((p: { name: string; in: string }) => `${p.in}:${p.name}`);
+		expect(names).toEqual(expect.arrayContaining(['path:teamId', 'query:sort', 'query:order', 'query:page', 'query:pageSize', 'query:q', 'query:designId']));
+		const download = (doc.paths as Record<string, any>)['/designs/{designId}/revisions/{label}/export/{format}'].get;
+		const format = download.parameters.find((p: { name: string }) => p.name === 'format');
+		expect(format.schema.enum).toEqual(['bundle', 'gerber', 'drill', 'dxf', 'svg', 'sweep', 'notes']);
+	});
+});
