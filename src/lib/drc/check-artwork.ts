@@ -1,0 +1,21 @@
+// All design rules on one artwork: the pure gate before any export.
+import type { Artwork } from '../artwork';
+import type { FabProfile } from '../schemas/fab-profile';
+import { checkCopperSpacing } from './check-copper-spacing';
+import { checkAnnularRing, checkDrillSize } from './check-drills';
+import { checkEdgeClearance } from './check-edge-clearance';
+import { checkSlotWidth } from './check-slot-width';
+import { checkTraceWidth } from './check-trace-width';
+import type { Violation } from './violation';
+
+/** Every violation of the profile, grouped by rule in a fixed order; empty when the artwork is buildable. */
+export function checkArtwork(artwork: Artwork, profile: FabProfile): Violation[] {
+	return [
+		...checkTraceWidth(artwork, profile),
+		...checkCopperSpacing(artwork, profile),
+		...checkDrillSize(artwork, profile),
+		...checkAnnularRing(artwork, profile),
+		...checkEdgeClearance(artwork, profile),
+		...checkSlotWidth(artwork, profile)
+	];
+}

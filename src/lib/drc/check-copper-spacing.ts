@@ -1,0 +1,37 @@
+// copper-spacing: the gap between separate copper features of one layer against the profile's minimum space.
+import { LENGTH_EPSILON_MM } from '../geometry';
+import type { Artwork } from '../artwork';
+import type { FabProfile } from '../schemas/fab-profile';
+import { copperFeatures, isCopperLayer } from './copper-features';
+import { boundaryDistance } from './shape-distance';
+import { locationOf, midpointOf, roundMm, type Violation } from './violation';
+
+/**
+ * Gaps inside one feature (an inset notch) are the slot-width rule's: the profile guarantees
+ * minSlotWidthMm ≥ minSpacingMm, so one rule per gap is enough.
+ */
+export function checkCopperSpacing(artwork: Artwork, profile: FabProfile): Violation[] {
+	const out: Violation[] = [];
+	for (const layer of artwork.layers.filter(isCopperLayer)) {
+		const copper = copperFeatures(layer);
+		for (let i = 0; i < copper.length; i++) {
+			for (let j = i + 1; j < copper.length; j++) {
+				const a = copper[i];
+				const b = copper[j];
+				if (a.feature === b.feature) continue;
+				const gap = boundaryDistance(a.pieces, b.pieces);
+				if (!gap || !(gap.distanceMm < profile.minSpacingMm - LENGTH_EPSILON_MM)) continue;
+				out.push({
+					ruleId: 'copper-spacing',
+					layerId: layer.id,
+					shapeIds: [a.shape.id, b.shape.id],
+					location: locationOf(midpointOf(gap.onA, gap.onB)),
+					measuredMm: roundMm(gap.distanceMm),
+					requiredMm: profile.minSpacingMm,
+					message: `${a.shape.id} and ${b.shape.id} are ${roundMm(gap.distanceMm)} mm apart; ${profile.name} needs at least ${profile.minSpacingMm} mm between copper features`
+				});
+			}
+		}
+	}
+	return out;
+}
