@@ -1,0 +1,5 @@
+// Export pipeline: sized design → files → zip.
+export { buildFiles, buildFilesFromInput, type BuildFilesEnvironment } from './build-files';
+export { buildBundle } from './build-bundle';
+export { exportFormats, parseExportFormats, type ExportFormat } from './export-formats';
+export { exportFileName, bundleFileName } from './file-names';

@@ -1,0 +1,79 @@
+// Base design + plan → sweep document: each point sized by rf.size and drawn by artwork.buildArtwork.
+import { buildArtwork } from '../../artwork';
+import { GeometryError } from '../../geometry';
+import { size } from '../../rf';
+import { InputError, parseDesignInput } from '../../schemas';
+import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
+import { SWEEP_FORMAT, SWEEP_FORMAT_VERSION, SWEEP_SCHEMA_PATH, type SweepDocument, type SweepPoint } from './document';
+import { axisValues, parseSweepPlan, type SweepPlan } from './plan';
+
+/** Every point's field values, in order: the last axis varies fastest on a grid. */
+export function sweepCombinations(plan: SweepPlan): Record<string, number>[] {
+	const axes = plan.axes.map((a) => ({ field: a.field, values: axisValues(a) }));
+	if (plan.combine === 'zip') return axes[0].values.map((_, i) => Object.fromEntries(axes.map((a) => [a.field, a.values[i]])));
+	let combos: Record<string, number>[] = [{}];
+	for (const a of axes) combos = combos.flatMap((c) => a.values.map((v) => ({ ...c, [a.field]: v })));
+	return combos;
+}
+
+function withField(doc: unknown, path: string, value: number): unknown {
+	const copy = structuredClone(doc) as Record<string, unknown>;
+	const keys = path.split('.');
+	let node = copy;
+	for (const k of keys.slice(0, -1)) {
+		if (node[k] === undefined || node[k] === null || typeof node[k] !== 'object') node[k] = {};
+		node = node[k] as Record<string, unknown>;
+	}
+	node[keys[keys.length - 1]] = value;
+	return copy;
+}
+
+/**
+ * Builds the sweep. Throws InputError for a bad base design or plan (including more than
+ * MAX_SWEEP_POINTS points) before sizing anything; a point that sizing or geometry refuses is
+ * recorded as refused, with the reason.
+ */
+export function buildSweepDocument(baseRaw: unknown, planRaw: unknown, meta: ExportMeta): SweepDocument {
+	const base = parseDesignInput(baseRaw);
+	const plan = parseSweepPlan(planRaw);
+	const points: SweepPoint[] = sweepCombinations(plan).map((parameters, index) => {
+		let doc: unknown = base;
+		for (const [field, value] of Object.entries(parameters)) doc = withField(doc, field, value);
+		try {
+			const sized = size(doc);
+			const artwork = buildArtwork(sized);
+			const { input: _input, warnings, ...derived } = sized;
+			void _input;
+			return {
+				index,
+				status: 'sized',
+				parameters,
+				derived,
+				warnings: warnings.map((w) => ({ code: w.code, message: w.message })),
+				board: artwork.board,
+				layers: artwork.layers,
+				drills: artwork.drills,
+				stack: artwork.stack
+			};
+		} catch (e) {
+			if (e instanceof InputError) return { index, status: 'refused', parameters, error: { kind: 'input', path: e.first.path, message: e.first.message } };
+			if (e instanceof GeometryError) return { index, status: 'refused', parameters, error: { kind: 'geometry', path: e.code, message: e.message } };
+			throw e;
+		}
+	});
+	return {
+		$schema: SWEEP_SCHEMA_PATH,
+		format: SWEEP_FORMAT,
+		formatVersion: SWEEP_FORMAT_VERSION,
+		design: { name: meta.designName, slug: meta.designSlug, revision: meta.revisionLabel, revisionDate: meta.revisionDate, software: `${SOFTWARE_NAME} ${meta.softwareVersion}` },
+		base,
+		plan,
+		pointCount: points.length,
+		points
+	};
+}
+
+/** Compact JSON with a final newline: the bytes of a .sweep.json file. */
+export function serializeSweep(doc: SweepDocument): string {
+	return JSON.stringify(doc) + '\n';
+}

@@ -1,0 +1,44 @@
+// The sweep document's TypeScript shape (version 1); its JSON Schema twin is in schema.ts.
+import type { ArtworkDrill, ArtworkLayer, StackLayer } from '../../artwork';
+import type { DesignInput } from '../../schemas';
+import type { SizedDesign } from '../../rf';
+import type { SweepPlan } from './plan';
+
+export const SWEEP_FORMAT = 'fringefield-sweep';
+export const SWEEP_FORMAT_VERSION = 1;
+/** Where the app publishes the schema (route src/routes/schemas/sweep-v1.json). */
+export const SWEEP_SCHEMA_PATH = '/schemas/sweep-v1.json';
+
+export type SweepDerived = Omit<SizedDesign, 'input' | 'warnings'>;
+
+export type SweepPoint =
+	| {
+			readonly index: number;
+			readonly status: 'sized';
+			/** The swept fields' values at this point, keyed by dotted path. */
+			readonly parameters: Readonly<Record<string, number>>;
+			readonly derived: SweepDerived;
+			readonly warnings: readonly { code: string; message: string }[];
+			readonly board: { widthMm: number; lengthMm: number };
+			readonly layers: readonly ArtworkLayer[];
+			readonly drills: readonly ArtworkDrill[];
+			readonly stack: readonly StackLayer[];
+	  }
+	| {
+			readonly index: number;
+			readonly status: 'refused';
+			readonly parameters: Readonly<Record<string, number>>;
+			/** Why this point has no design: bad input for sizing, or a broken geometry rule. */
+			readonly error: { kind: 'input' | 'geometry'; path: string; message: string };
+	  };
+
+export interface SweepDocument {
+	readonly $schema: string;
+	readonly format: typeof SWEEP_FORMAT;
+	readonly formatVersion: typeof SWEEP_FORMAT_VERSION;
+	readonly design: { name: string; slug: string; revision: string; revisionDate: string; software: string };
+	readonly base: DesignInput;
+	readonly plan: SweepPlan;
+	readonly pointCount: number;
+	readonly points: readonly SweepPoint[];
+}

@@ -1,0 +1,5 @@
+// Sweep documents: plan, build, serialise, JSON Schema.
+export * from './plan';
+export * from './document';
+export { buildSweepDocument, serializeSweep, sweepCombinations } from './build';
+export { sweepJsonSchema } from './schema';

@@ -1,0 +1,68 @@
+// The zip bundle: a golden SHA-256 (node:crypto as the outside reference), the same bytes again and in a fresh tsx process, read back with jszip.
+import { execFileSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
+import JSZip from 'jszip';
+import { createSVGWindow } from 'svgdom';
+import { describe, expect, it } from 'vitest';
+import { buildFilesFromInput, exportFileName, parseExportFormats } from '../../../../src/lib/formats/bundle';
+import { InputError } from '../../../../src/lib/schemas';
+import { goldenBundle, goldenDesign, goldenMeta } from '../../../fixtures/bundle/golden-bundle';
+
+/**
+ * Recorded from the first build. It changes only when sizing or a writer changes on purpose:
+ * then check the new files by eye and record the new hash.
+ */
+const GOLDEN_SHA256 = '7451e16081ec611fbea0b6287d686b15fb540c53e6537bf4a05aea35d3839e1a';
+const sha = (b: Uint8Array) => createHash('sha256').update(b).digest('hex');
+
+describe('export bundle', () => {
+	it('matches the recorded golden hash, twice in one process', async () => {
+		expect(sha(await goldenBundle())).toBe(GOLDEN_SHA256);
+		expect(sha(await goldenBundle())).toBe(GOLDEN_SHA256);
+	});
+
+	it('gives the same hash in a fresh process in another time zone', () => {
+		const out = execFileSync('npx', ['tsx', 'tests/fixtures/bundle/golden-bundle.ts'], { encoding: 'utf8', env: { ...process.env, TZ: 'Asia/Kolkata' } });
+		expect(out.trim()).toBe(GOLDEN_SHA256);
+	});
+
+	it('holds every file in the fixed order with the revision date and no folder entries', async () => {
+		const zip = await JSZip.loadAsync(await goldenBundle());
+		const names = Object.keys(zip.files);
+		const s = (part: string, ext: string) => exportFileName(goldenMeta, part, ext);
+		expect(names).toEqual([
+			s('copper-top', 'gbr'),
+			s('copper-bottom', 'gbr'),
+			s('profile', 'gbr'),
+			s('mask-top', 'gbr'),
+			s('mask-bottom', 'gbr'),
+			s('drill-plated', 'drl'),
+			s('drawing', 'dxf'),
+			s('drawing', 'svg'),
+			s('design', 'sweep.json'),
+			s('fab-notes', 'txt'),
+			s('manifest', 'json')
+		]);
+		expect(names[0]).toBe('sunroof-gnss-B.copper-top.gbr');
+		for (const f of Object.values(zip.files)) {
+			expect(f.dir).toBe(false);
+			expect(f.date.toISOString()).toBe('2026-11-20T00:00:00.000Z');
+		}
+		const manifest = JSON.parse(await zip.file(s('manifest', 'json'))!.async('string'));
+		for (const entry of manifest.files) {
+			const bytes = await zip.file(entry.name)!.async('uint8array');
+			expect(entry.sizeBytes).toBe(bytes.length);
+			expect(entry.sha256).toBe(sha(bytes));
+		}
+		expect(manifest.files.length).toBe(names.length - 1);
+	});
+
+	it('builds only the chosen formats, plus the manifest', () => {
+		const files = buildFilesFromInput(goldenDesign, goldenMeta, parseExportFormats('drill,notes'), { svgWindow: createSVGWindow() });
+		expect(files.map((f) => f.name)).toEqual(['sunroof-gnss-B.drill-plated.drl', 'sunroof-gnss-B.fab-notes.txt', 'sunroof-gnss-B.manifest.json']);
+	});
+
+	it('refuses an unknown format name with an InputError', () => {
+		expect(() => parseExportFormats('gerber,pdf')).toThrow(InputError);
+	});
+});
