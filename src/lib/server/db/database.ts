@@ -4,7 +4,9 @@ import type { AppUserTable } from './app-user.table';
 import type { DesignTable, RevisionTable } from './design.table';
 import type { ExportRecordTable } from './export-record.table';
 import type { LaminateTable } from './laminate.table';
+import type { MeasurementTable } from './measurement.table';
 import type { PasswordResetTable } from './password-reset.table';
+import type { SweepPlanTable } from './sweep-plan.table';
 import type { TeamInviteTable } from './team-invite.table';
 import type { TeamMemberTable, TeamTable } from './team.table';
 import type { UserSessionTable } from './user-session.table';
@@ -21,4 +23,6 @@ export interface Database {
 	revision: RevisionTable;
 	export_record: ExportRecordTable;
 	api_token: ApiTokenTable;
+	sweep_plan: SweepPlanTable;
+	measurement: MeasurementTable;
 }

@@ -16,6 +16,8 @@ export interface SaveRevisionOptions {
 	/** A design-input document. */
 	raw: unknown;
 	note?: string;
+	/** Set by a retune: the measurement this revision was retuned from (stored at insert; revisions never change). */
+	retunedFromMeasurementId?: string;
 }
 
 export interface SavedRevision {
@@ -46,7 +48,8 @@ export async function saveRevision(db: Kysely<Database>, opts: SaveRevisionOptio
 			input: JSON.stringify(input),
 			results: JSON.stringify(sized),
 			note,
-			created_by: opts.userId
+			created_by: opts.userId,
+			...(opts.retunedFromMeasurementId ? { retuned_from_measurement_id: opts.retunedFromMeasurementId } : {})
 		});
 		return { id, label, parentLabel: parent.label };
 	});

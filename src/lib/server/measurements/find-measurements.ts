@@ -1,0 +1,40 @@
+// Reading measurements: a revision's list, one with its samples, and the retune links either way.
+import type { Kysely } from 'kysely';
+import type { S11Sample } from '../../formats/touchstone';
+import type { Database } from '../db/database';
+import * as measurementQueries from '../db/measurement.queries';
+import { toMeasurement, type Measurement, type MeasurementWithSamples } from './measurement-model';
+
+export async function listMeasurements(db: Kysely<Database>, revisionId: string): Promise<Measurement[]> {
+	return (await measurementQueries.listMeasurementsByRevision(db, revisionId)).map(toMeasurement);
+}
+
+export async function findMeasurement(db: Kysely<Database>, revisionId: string, id: string): Promise<MeasurementWithSamples | null> {
+	if (!/^[0-9a-f-]{36}$/.test(id)) return null;
+	const row = await measurementQueries.findMeasurementByRevisionAndId(db, revisionId, id);
+	return row ? { ...toMeasurement(row), samples: row.points as S11Sample[] } : null;
+}
+
+export interface RetunedRevisionLink {
+	label: string;
+	createdAt: Date;
+}
+
+/** Revisions made by retuning from this measurement. */
+export async function listRetunedRevisions(db: Kysely<Database>, measurementId: string): Promise<RetunedRevisionLink[]> {
+	return (await measurementQueries.listRevisionsByRetunedFromMeasurement(db, measurementId)).map((r) => ({ label: r.label, createdAt: r.created_at }));
+}
+
+export interface RetuneSource {
+	measurementId: string;
+	fileName: string;
+	uploadedAt: Date;
+	/** Label of the revision the measured board was built from. */
+	measuredLabel: string;
+}
+
+/** The measurement a revision was retuned from, or null for a revision saved by hand. */
+export async function findRetuneSource(db: Kysely<Database>, revisionId: string): Promise<RetuneSource | null> {
+	const row = await measurementQueries.findRetuneSourceByRevision(db, revisionId);
+	return row ? { measurementId: row.measurement_id, fileName: row.file_name, uploadedAt: row.uploaded_at, measuredLabel: row.measured_label } : null;
+}
