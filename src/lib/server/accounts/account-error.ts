@@ -1,0 +1,20 @@
+// The expected ways an account or team change is refused; routes turn each code into a form message.
+export type AccountErrorCode =
+	| 'wrong-credentials' // sign-in: the one generic answer for an unknown e-mail or a wrong password
+	| 'email-taken' // sign-up with an e-mail that has an account
+	| 'link-invalid' // a reset or invite link that is unknown, used or expired
+	| 'last-owner' // the change would leave the team without an owner
+	| 'not-member' // the person named is not a member of this team
+	| 'not-found'; // the invitation or token named does not exist (for this team or person)
+
+export class AccountError extends Error {
+	readonly name = 'AccountError';
+	constructor(
+		readonly code: AccountErrorCode,
+		message: string
+	) {
+		super(message);
+	}
+}
+
+export const WRONG_CREDENTIALS_MESSAGE = 'E-mail or password is wrong';

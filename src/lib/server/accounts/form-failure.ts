@@ -1,0 +1,51 @@
+// Refusals of a form action: bad input → 400 with issues per field; an expected refusal → its status and message.
+import { fail } from '@sveltejs/kit';
+import { InputError } from '$lib/schemas/input-error';
+import { AccountError, type AccountErrorCode } from './account-error';
+import { MailDeliveryError } from '../mail';
+
+const statusOf: Record<AccountErrorCode, number> = {
+	'wrong-credentials': 400,
+	'email-taken': 409,
+	'link-invalid': 410,
+	'last-owner': 409,
+	'not-member': 404,
+	'not-found': 404
+};
+
+export interface FormProblem {
+	/** Which form on the page failed (several share one page). */
+	form: string;
+	message: string;
+	issues: Record<string, string>;
+	values: Record<string, string>;
+}
+
+/** Turns an expected error into `fail(...)`; anything else is rethrown (→ handleError). */
+export function formFailure(err: unknown, form: string, values: Record<string, string> = {}) {
+	const problem = (status: number, message: string, issues: Record<string, string> = {}) => fail(status, { form, message, issues, values } as FormProblem);
+	if (err instanceof InputError) {
+		const issues: Record<string, string> = {};
+		for (const i of err.issues) issues[i.path || 'form'] ??= i.message;
+		return problem(400, 'Please correct the marked fields.', issues);
+	}
+	if (err instanceof AccountError) return problem(statusOf[err.code], err.message);
+	if (err instanceof MailDeliveryError) {
+		console.error(err.message);
+		return problem(503, 'The e-mail could not be sent just now; please try again in a minute.');
+	}
+	throw err;
+}
+
+/** The string fields of a submitted form (files and repeated keys are ignored); never echoes passwords. */
+export async function formFields(request: Request): Promise<Record<string, string>> {
+	const data = await request.formData();
+	const out: Record<string, string> = {};
+	for (const [key, value] of data) if (typeof value === 'string' && !(key in out)) out[key] = value;
+	return out;
+}
+
+export function withoutSecrets(values: Record<string, string>): Record<string, string> {
+	const { password: _password, ...rest } = values;
+	return rest;
+}

@@ -1,0 +1,54 @@
+// A team's members: list them, change a role, remove one. A team always keeps at least one owner; the
+// check runs under a row lock on the team, so two owners demoting each other at once cannot both succeed.
+import type { TeamRole } from '../db/team.table';
+import { getDb } from '../db';
+import * as memberQueries from '../db/member.queries';
+import * as tokenQueries from '../db/token.queries';
+import { parseWith } from '$lib/schemas/input-error';
+import { changeRoleSchema, memberRefSchema } from '$lib/schemas/account';
+import { AccountError } from './account-error';
+
+export interface TeamMember {
+	userId: string;
+	email: string;
+	displayName: string;
+	role: TeamRole;
+	joinedAt: Date;
+}
+
+export async function listTeamMembers(teamId: string): Promise<TeamMember[]> {
+	const rows = await memberQueries.listMembersByTeam(getDb(), teamId);
+	return rows.map((r) => ({ userId: r.id, email: r.email, displayName: r.display_name, role: r.role, joinedAt: r.created_at }));
+}
+
+const LAST_OWNER = 'A team needs at least one owner: make someone else an owner first.';
+
+export async function changeMemberRole(teamId: string, raw: { userId: unknown; role: unknown }): Promise<void> {
+	const { userId, role } = parseWith(changeRoleSchema, raw);
+	await getDb()
+		.transaction()
+		.execute(async (trx) => {
+			await memberQueries.lockTeamById(trx, teamId);
+			const current = (await memberQueries.listMembersByTeam(trx, teamId)).find((m) => m.id === userId);
+			if (!current) throw new AccountError('not-member', 'That person is not a member of this team.');
+			if (current.role === 'owner' && role !== 'owner' && (await memberQueries.countOwnersByTeam(trx, teamId)) <= 1) {
+				throw new AccountError('last-owner', LAST_OWNER);
+			}
+			await memberQueries.updateMemberRole(trx, teamId, userId, role);
+		});
+}
+
+/** Removes a member (and revokes the API tokens they made for this team). */
+export async function removeMember(teamId: string, raw: { userId: unknown }, now = new Date()): Promise<void> {
+	const { userId } = parseWith(memberRefSchema, raw);
+	await getDb()
+		.transaction()
+		.execute(async (trx) => {
+			await memberQueries.lockTeamById(trx, teamId);
+			const current = (await memberQueries.listMembersByTeam(trx, teamId)).find((m) => m.id === userId);
+			if (!current) throw new AccountError('not-member', 'That person is not a member of this team.');
+			if (current.role === 'owner' && (await memberQueries.countOwnersByTeam(trx, teamId)) <= 1) throw new AccountError('last-owner', LAST_OWNER);
+			await memberQueries.deleteMember(trx, teamId, userId);
+			await tokenQueries.revokeTokensByTeamAndUser(trx, teamId, userId, now);
+		});
+}

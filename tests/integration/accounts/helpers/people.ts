@@ -1,0 +1,43 @@
+// People and teams of our own in the shared test database, with a random suffix per test file.
+import { randomBytes } from 'node:crypto';
+import { signUp, createTeam, type AccountUser } from '../../../../src/lib/server/accounts';
+import { getDb } from '../../../../src/lib/server/db';
+import * as memberQueries from '../../../../src/lib/server/db/member.queries';
+import type { TeamRole } from '../../../../src/lib/server/db/team.table';
+
+export const TEST_PASSWORD = 'correct horse battery';
+
+export function uniqueSuffix(tag: string): string {
+	return `${tag}-${randomBytes(4).toString('hex')}`;
+}
+
+export function emailFor(label: string, suffix: string): string {
+	return `${label}-${suffix}@accounts.test`;
+}
+
+export async function person(label: string, suffix: string): Promise<AccountUser> {
+	return signUp({ displayName: `${label} ${suffix}`, email: emailFor(label, suffix), password: TEST_PASSWORD });
+}
+
+export interface TeamFixture {
+	teamId: string;
+	owner: AccountUser;
+	editor: AccountUser;
+	viewer: AccountUser;
+	/** Belongs to another team only. */
+	outsider: AccountUser;
+	outsiderTeamId: string;
+}
+
+export async function teamWithRoles(suffix: string): Promise<TeamFixture> {
+	const [owner, editor, viewer, outsider] = await Promise.all([person('owner', suffix), person('editor', suffix), person('viewer', suffix), person('outsider', suffix)]);
+	const { id: teamId } = await createTeam(owner.id, { name: `Accounts team ${suffix}` });
+	const { id: outsiderTeamId } = await createTeam(outsider.id, { name: `Outsider team ${suffix}` });
+	await addMember(teamId, editor.id, 'editor');
+	await addMember(teamId, viewer.id, 'viewer');
+	return { teamId, owner, editor, viewer, outsider, outsiderTeamId };
+}
+
+export async function addMember(teamId: string, userId: string, role: TeamRole): Promise<void> {
+	await memberQueries.insertMember(getDb(), teamId, userId, role);
+}
