@@ -21,3 +21,18 @@ export { performanceEstimates, type EstimateInput } from './performance-estimate
 export { groundSize, DEFAULT_MARGIN_HEIGHTS, type GroundInput } from './ground-size';
 export { besselJ, TM11_EIGENVALUE } from './bessel';
 export { integrateGaussLegendre } from './gauss-legendre';
+export {
+	analyzeMeasuredResponse,
+	reflectionDb,
+	vswrFromReflection,
+	DEFAULT_MATCH_THRESHOLD_DB,
+	MIN_REFLECTION_DB,
+	type ReflectionSample,
+	type ReflectionValue,
+	type ResponsePoint,
+	type MeasuredResonance,
+	type MatchedBand,
+	type MeasuredResponse,
+	type MeasuredResponseOptions
+} from './measured-response';
+export { proposeRetune, type RetuneProposal, type RetuneOptions, type DimensionChange } from './retune';
