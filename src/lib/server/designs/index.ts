@@ -8,3 +8,4 @@ export { sizeInput, type SizedInput } from './sized-input';
 export { listLaminates, addLaminate, type Laminate } from './laminates';
 export { laminatePresets, type LaminatePreset } from './laminate-presets';
 export type { Design, Revision } from './design-model';
+export { startDesign, startDesignSchema } from './start-design';

@@ -1,0 +1,40 @@
+// Input document → validated input, sized design and artwork, or the issues that stop it. Pure: the editor
+// runs it on every keystroke in the browser, and the server runs it before saving a revision.
+import { buildArtwork, type Artwork } from '../artwork';
+import { GeometryError } from '../geometry';
+import { size, type SizedDesign } from '../rf';
+import { designInputSchema, fromZodError, InputError, type DesignInput, type InputIssue } from '../schemas';
+
+/** The input field a geometry error is about, so the editor shows it beside that field. */
+const GEOMETRY_PATHS: Record<string, string> = {
+	'feed-longer-than-margin': 'groundMarginMm',
+	'notch-outside-patch': 'inset.notchGapMm',
+	'probe-outside-patch': 'probe.padDiameterMm',
+	'clearance-outside-ground': 'probe.clearanceDiameterMm'
+};
+
+export type SizingOutcome =
+	| { ok: true; input: DesignInput; sized: SizedDesign; artwork: Artwork }
+	| { ok: false; issues: InputIssue[] };
+
+export function sizeDocument(raw: unknown): SizingOutcome {
+	const parsed = designInputSchema.safeParse(raw);
+	if (!parsed.success) return { ok: false, issues: fromZodError(parsed.error, raw).issues };
+	try {
+		const sized = size(parsed.data);
+		return { ok: true, input: parsed.data, sized, artwork: buildArtwork(sized) };
+	} catch (err) {
+		if (err instanceof InputError) return { ok: false, issues: err.issues };
+		if (err instanceof GeometryError) {
+			const path = GEOMETRY_PATHS[err.code] ?? '';
+			return { ok: false, issues: [{ path, value: path ? valueAt(parsed.data, path) : undefined, message: err.message }] };
+		}
+		throw err;
+	}
+}
+
+function valueAt(root: unknown, path: string): unknown {
+	let node = root;
+	for (const key of path.split('.')) node = node && typeof node === 'object' ? (node as Record<string, unknown>)[key] : undefined;
+	return node;
+}

@@ -1,0 +1,37 @@
+// The current team's laminate library: built-in presets and the team's own; editors add entries.
+import { fail } from '@sveltejs/kit';
+import { authorize, can } from '$lib/server/access';
+import { getDb } from '$lib/server/db';
+import { addLaminate, listLaminates } from '$lib/server/designs';
+import { requireTeamRole, requireUser } from '$lib/server/designs/design-access';
+import { currentTeam } from '$lib/server/teams/current-team';
+import { InputError } from '$lib/schemas';
+import type { Actions, PageServerLoad } from './$types';
+
+const propertyKeys = ['relativePermittivity', 'lossTangent', 'heightMm', 'copperThicknessUm', 'relativePermittivityTolerance', 'heightToleranceMm'] as const;
+
+export const load: PageServerLoad = async (event) => {
+	const user = requireUser(event);
+	const { current } = await currentTeam(user.id, event.cookies);
+	if (!current) return { team: null, laminates: [], canAdd: false };
+	authorize(current.role, 'team.read');
+	return { team: current, laminates: await listLaminates(getDb(), current.id), canAdd: can(current.role, 'laminate.write') };
+};
+
+export const actions: Actions = {
+	add: async (event) => {
+		const data = await event.request.formData();
+		const teamId = String(data.get('teamId') ?? '');
+		const { user } = await requireTeamRole(event, teamId, 'laminate.write');
+		const values = Object.fromEntries(['name', ...propertyKeys].map((k) => [k, String(data.get(k) ?? '')]));
+		const num = (t: string) => (t.trim() === '' ? undefined : Number(t));
+		const raw = { name: values.name, properties: Object.fromEntries(propertyKeys.map((k) => [k, num(values[k])])) };
+		try {
+			await addLaminate(getDb(), { teamId, userId: user.id, raw });
+			return { added: values.name };
+		} catch (err) {
+			if (err instanceof InputError) return fail(400, { values, issues: err.issues.map((i) => ({ path: i.path.replace(/^properties\./, ''), message: i.message })) });
+			throw err;
+		}
+	}
+};
