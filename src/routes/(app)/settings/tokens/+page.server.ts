@@ -1,0 +1,42 @@
+// Personal API tokens: made for the current team, shown once, listed by name and team, revoked by their owner.
+import { error, fail } from '@sveltejs/kit';
+import { authorize, can } from '$lib/server/access';
+import { roleInTeam } from '$lib/server/access/team-role';
+import { createApiToken, findOwnApiTokenTeam, formFailure, formFields, listApiTokens, requireSessionUser, revokeApiToken, type FormProblem } from '$lib/server/accounts';
+import { currentTeam } from '$lib/server/teams/current-team';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async ({ locals, url, parent }) => {
+	const user = requireSessionUser(locals, url);
+	const { team } = await parent();
+	return { tokens: await listApiTokens(user.id), canCreate: can(team?.role, 'token.manage-own') };
+};
+
+export const actions: Actions = {
+	create: async ({ request, locals, url, cookies }) => {
+		const user = requireSessionUser(locals, url);
+		const values = await formFields(request);
+		const { current } = await currentTeam(user.id, cookies);
+		if (!current) return fail(400, { form: 'create', message: 'Make or join a team first: a token reaches exactly one team.', issues: {}, values } as FormProblem);
+		authorize(await roleInTeam(locals.identity, current.id), 'token.manage-own', 'Team not found');
+		try {
+			const token = await createApiToken(user.id, current.id, { name: values.name });
+			return { form: 'create', created: { name: token.name, secret: token.secret, teamName: current.name } };
+		} catch (err) {
+			return formFailure(err, 'create', values);
+		}
+	},
+	revoke: async ({ request, locals, url }) => {
+		const user = requireSessionUser(locals, url);
+		const { tokenId } = await formFields(request);
+		const teamId = await findOwnApiTokenTeam(user.id, tokenId ?? '');
+		if (!teamId) error(404, 'Token not found');
+		authorize(await roleInTeam(locals.identity, teamId), 'token.manage-own', 'Token not found');
+		try {
+			await revokeApiToken(user.id, tokenId);
+		} catch (err) {
+			return formFailure(err, 'revoke');
+		}
+		return { form: 'revoke', revoked: true };
+	}
+};

@@ -1,0 +1,9 @@
+// Every page: who is signed in, and for them the current team and the teams they can switch to (the header needs both).
+import { currentTeam } from '$lib/server/teams/current-team';
+import type { LayoutServerLoad } from './$types';
+
+export const load: LayoutServerLoad = async ({ locals, cookies }) => {
+	if (!locals.user) return { user: null, team: null, teams: [] };
+	const { current, teams } = await currentTeam(locals.user.id, cookies);
+	return { user: locals.user, team: current, teams };
+};
