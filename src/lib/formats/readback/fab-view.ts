@@ -1,0 +1,91 @@
+// What a board house sees in our files, rebuilt from the parse: layer images, holes, board extents, and what did not match.
+import type { Bounds } from '../../geometry';
+
+/** A file as written: its name and its text (or the bytes, UTF-8). */
+export interface FabFile {
+	readonly name: string;
+	readonly text: string | Uint8Array;
+}
+
+/** A ring of [x, y] points in mm, not closed (the first point is not repeated). */
+export type FabRing = [xMm: number, yMm: number][];
+
+/** A filled polygon: one outer ring and its holes. Plain data, ready to draw. */
+export interface FabPolygon {
+	readonly outer: FabRing;
+	readonly holes: FabRing[];
+}
+
+/**
+ * Which physical layer a Gerber file images, from its %TF.FileFunction: "copper-L1", "copper-L2",
+ * "profile", "mask-top", "mask-bottom". The artwork's layers map to the same keys.
+ */
+export type FabLayerKey = string;
+
+export interface FabLayerImage {
+	readonly fileName: string;
+	readonly key: FabLayerKey;
+	/** The image after dark and clear shapes are applied in file order (flattened arcs, ≤ 0.1 µm sag). */
+	readonly polygons: FabPolygon[];
+	readonly areaMm2: number;
+	/** Extents of the image; for the profile, of the outline's centre line. Null when empty. */
+	readonly bounds: Bounds | null;
+}
+
+export interface FabHole {
+	readonly xMm: number;
+	readonly yMm: number;
+	readonly diameterMm: number;
+}
+
+export interface FabDrillFile {
+	readonly fileName: string;
+	readonly plated: boolean;
+	readonly holes: FabHole[];
+}
+
+export type ReadBackCheck =
+	| 'file-unreadable'
+	| 'file-unsupported'
+	| 'file-unidentified'
+	| 'layer-missing'
+	| 'layer-unexpected'
+	| 'layer-area'
+	| 'layer-shape'
+	| 'layer-extents'
+	| 'board-extents'
+	| 'drill-count'
+	| 'drill-diameter'
+	| 'drill-position';
+
+/** One way the files differ from the artwork. Any mismatch means a writer bug: the bundle must not ship. */
+export interface ReadBackMismatch {
+	readonly check: ReadBackCheck;
+	readonly fileName: string | null;
+	readonly layerKey: FabLayerKey | null;
+	readonly message: string;
+}
+
+export interface FabView {
+	readonly layers: FabLayerImage[];
+	readonly drills: FabDrillFile[];
+	/** Board extents from the profile layer's outline; null without a profile file. */
+	readonly board: Bounds | null;
+	/** Problems found while reading (unreadable or unsupported files), before any comparison. */
+	readonly problems: ReadBackMismatch[];
+}
+
+/** Tolerances of the comparison: what a writer may lose to rounding and flattening, and no more. */
+export const READ_BACK_TOLERANCE = Object.freeze({
+	/**
+	 * Copper (or mask) area per layer: 0.5 %. The area covered by one image and not the other must
+	 * stay below that too, and below the layer's perimeter × extentsMm (every edge off by 1 µm).
+	 */
+	areaFraction: 0.005,
+	/** Board and image extents: 1 µm (Gerber 4.6 writes 1 nm; flattening sags 0.1 µm at most). */
+	extentsMm: 1e-3,
+	/** Hole diameters: exact to the Excellon file's 3 decimals, so half a µm of rounding. */
+	drillDiameterMm: 0.5e-3 + 1e-9,
+	/** Hole positions: 3 decimals, so within 1 µm. */
+	drillPositionMm: 1e-3
+});
