@@ -1,0 +1,97 @@
+// Benchmark rows 1–4: the pure core against floors measured in the same run (tinybench: warm-up, medians).
+import { deflateRawSync } from 'node:zlib';
+import { createSVGWindow } from 'svgdom';
+import { Bench } from 'tinybench';
+import { buildArtwork } from '../../src/lib/artwork';
+import { buildBundle, buildFiles, buildSweepDocument, createExportMeta, serializeSweep, toSvg } from '../../src/lib/formats';
+import { parseDesignInput } from '../../src/lib/schemas';
+import { size } from '../../src/lib/rf';
+
+export interface BenchRow {
+	work: string;
+	ours: number;
+	floor: number;
+	unit: 'µs' | 'ms';
+	floorName: string;
+	ratio: number;
+	target: string;
+	pass: boolean;
+	note?: string;
+}
+
+/** Demo scenario input used by every core row. */
+const input = {
+	name: 'Bench sensor node',
+	frequencyHz: 2.45e9,
+	feed: 'inset',
+	substrate: { relativePermittivity: 4.3, lossTangent: 0.017, heightMm: 1.6 }
+};
+const meta = createExportMeta({ designName: input.name, revisionLabel: 'A', revisionDate: '2026-11-20' });
+
+async function medianUs(tasks: Record<string, () => unknown | Promise<unknown>>, time = 1500): Promise<Record<string, number>> {
+	const bench = new Bench({ time, warmupTime: 300 });
+	for (const [name, fn] of Object.entries(tasks)) bench.add(name, fn);
+	await bench.run();
+	const out: Record<string, number> = {};
+	for (const task of bench.tasks) {
+		const result = task.result as { latency?: { p50?: number } } | undefined;
+		const p50Ms = result?.latency?.p50;
+		if (p50Ms === undefined) throw new Error(`benchmark "${task.name}" produced no result`);
+		out[task.name] = p50Ms * 1000;
+	}
+	return out;
+}
+
+function sweepPlan(points: number) {
+	// a grid of two axes whose product is `points`
+	const a = points === 1000 ? 40 : 100;
+	const b = points / a;
+	return {
+		combine: 'grid',
+		axes: [
+			{ field: 'patchWidthMm', from: 30, to: 30 + (a - 1) * 0.05, step: 0.05 },
+			{ field: 'substrate.relativePermittivity', from: 4.0, to: 4.0 + (b - 1) * 0.01, step: 0.01 }
+		]
+	};
+}
+
+export async function coreRows(): Promise<BenchRow[]> {
+	const rows: BenchRow[] = [];
+	const svgWindow = createSVGWindow();
+
+	const r1 = await medianUs({ size: () => size(input), validate: () => parseDesignInput(input) });
+	rows.push({ work: 'sizing one design', ours: r1.size, floor: r1.validate, unit: 'µs', floorName: 'zod validation alone', ratio: r1.size / r1.validate, target: '≤ 50 µs', pass: r1.size <= 50 });
+
+	const r2 = await medianUs({
+		preview: () => toSvg(buildArtwork(size(input)), meta, svgWindow),
+		size: () => size(input)
+	});
+	rows.push({ work: 'live preview: size + artwork + SVG', ours: r2.preview, floor: r2.size, unit: 'µs', floorName: 'sizing alone', ratio: r2.preview / r2.size, target: '≤ 1000 µs', pass: r2.preview <= 1000 });
+
+	const sized = size(input);
+	const files = buildFiles(sized, meta, undefined, { svgWindow });
+	const concatenated = new Uint8Array(files.reduce((n, f) => n + f.bytes.length, 0));
+	let offset = 0;
+	for (const f of files) {
+		concatenated.set(f.bytes, offset);
+		offset += f.bytes.length;
+	}
+	const r3 = await medianUs({
+		bundle: async () => buildBundle(buildFiles(sized, meta, undefined, { svgWindow }), meta.revisionDate),
+		deflate: () => deflateRawSync(concatenated)
+	});
+	rows.push({ work: 'one bundle (all formats + zip)', ours: r3.bundle, floor: r3.deflate, unit: 'µs', floorName: 'deflateRaw of the same bytes', ratio: r3.bundle / r3.deflate, target: '≤ 2×', pass: r3.bundle / r3.deflate <= 2 });
+
+	const sweepUs: Record<number, number> = {};
+	for (const points of [1000, 10000]) {
+		const plan = sweepPlan(points);
+		const doc = buildSweepDocument(input, plan, meta);
+		if (doc.points.length !== points) throw new Error(`sweep plan made ${doc.points.length} points, wanted ${points}`);
+		const r = await medianUs({ ours: () => serializeSweep(doc), floor: () => JSON.stringify(doc) }, points === 1000 ? 1500 : 3000);
+		sweepUs[points] = r.ours;
+		rows.push({ work: `sweep JSON, ${points} points`, ours: r.ours, floor: r.floor, unit: 'µs', floorName: 'JSON.stringify of the same object', ratio: r.ours / r.floor, target: '≤ 1.5×', pass: r.ours / r.floor <= 1.5 });
+	}
+	const growth = sweepUs[10000] / sweepUs[1000];
+	rows.push({ work: 'sweep JSON growth 1 000 → 10 000', ours: sweepUs[10000], floor: sweepUs[1000], unit: 'µs', floorName: '1 000-point time', ratio: growth, target: '9–11×', pass: growth >= 9 && growth <= 11 });
+	return rows;
+}
