@@ -141,7 +141,7 @@ export function openApiDocument() {
 			title: 'Fringefield API',
 			version: SOFTWARE_VERSION,
 			description:
-				'Teams, designs, immutable revisions, sizing, sweep definitions and recorded downloads. Authorise with the session cookie or `Authorization: Bearer ff_…` (a personal API token, scoped to one team).'
+				'Teams, designs, immutable revisions, sizing, sweep definitions and recorded downloads. Authorise with the session cookie of the web app, or with a personal API token sent as the header Authorization: Bearer ff_… (a token reaches only the one team it was made for).'
 		},
 		servers: [{ url: '/api/v1' }],
 		security: [{ apiToken: [] }, { session: [] }]

@@ -1,0 +1,54 @@
+// Journey: make an API token → fetch a revision's sweep definition with it → it validates against the sweep JSON Schema (ajv);
+// the token reaches only its team, and the fetch is recorded in the export log as coming from the API.
+import { expect, test } from '@playwright/test';
+import Ajv2020 from 'ajv/dist/2020.js';
+import { sweepJsonSchema } from '../../src/lib/formats/sweep/schema';
+import { makeTeam, makeToken, newDesign, signUp, uniqueSuffix } from './helpers/exports';
+
+test('a personal API token fetches a sweep definition that validates against the published schema', async ({ page, playwright, baseURL }) => {
+	const s = uniqueSuffix();
+	await signUp(page, { name: `Token Tester ${s}`, email: `token-${s}@e2e.test`, password: 'quarter wave transformer' });
+	const teamId = await makeTeam(page, `Sweep lab ${s}`);
+	const designId = await newDesign(page, `Mast patch ${s}`);
+	const token = await makeToken(page, `sweep runner ${s}`);
+	expect(token).toMatch(/^ff_/);
+
+	// A fresh request context: no cookies, only the Authorization header.
+	const api = await playwright.request.newContext({ baseURL, extraHTTPHeaders: { authorization: `Bearer ${token}` } });
+	const teams = await (await api.get('/api/v1/teams')).json();
+	expect(teams.teams.map((t: { id: string }) => t.id)).toEqual([teamId]);
+	const design = await (await api.get(`/api/v1/designs/${designId}`)).json();
+	expect(design.revisions.map((r: { label: string }) => r.label)).toEqual(['A']);
+
+	const res = await api.get(`/api/v1/designs/${designId}/revisions/A/sweep`);
+	expect(res.status()).toBe(200);
+	expect(res.headers()['content-type']).toBe('application/json');
+	const doc = await res.json();
+
+	// ajv (JSON Schema draft 2020-12) against the sweep schema of src/lib/formats/sweep/schema.ts.
+	const ajv = new Ajv2020({ allErrors: true, strict: false });
+	const validate = ajv.compile(sweepJsonSchema);
+	expect(validate(doc), JSON.stringify(validate.errors?.slice(0, 3))).toBe(true);
+	expect(doc.design.revision).toBe('A');
+	// A tampered document fails with a field-level error.
+	expect(validate({ ...doc, formatVersion: 'one' })).toBe(false);
+
+	// Without the token: 401; the OpenAPI document is public.
+	const anonymous = await playwright.request.newContext({ baseURL });
+	expect((await anonymous.get(`/api/v1/designs/${designId}/revisions/A/sweep`)).status()).toBe(401);
+	const openapi = await (await anonymous.get('/api/v1/openapi.json')).json();
+	expect(openapi.openapi).toBe('3.1.0');
+
+	// The fetch is in the team's log, from the API.
+	const log = await (await api.get(`/api/v1/teams/${teamId}/exports?designId=${designId}`)).json();
+	expect(log.items).toHaveLength(1);
+	expect(log.items[0]).toMatchObject({ kind: 'sweep', via: 'api', earlier: null });
+
+	await page.goto('/api/docs');
+	await expect(page.getByRole('heading', { name: 'Fringefield API' })).toBeVisible();
+	await expect(page.locator('section[id^="get-"]').first()).toBeVisible();
+	await page.screenshot({ path: '/tmp/ff-api-docs.png', fullPage: false });
+	await page.screenshot({ path: '/tmp/ff-api-docs-full.png', fullPage: true });
+	await api.dispose();
+	await anonymous.dispose();
+});

@@ -1,0 +1,42 @@
+// Journey steps shared by the download and API e2e files: a fresh person, a team, a design, a token.
+import { expect, type Page } from '@playwright/test';
+
+export function uniqueSuffix(): string {
+	return `${Date.now().toString(36)}${Math.floor(Math.random() * 1e6).toString(36)}`;
+}
+
+export async function signUp(page: Page, who: { name: string; email: string; password: string }): Promise<void> {
+	await page.goto('/signup');
+	await page.getByLabel('Your name').fill(who.name);
+	await page.getByLabel('E-mail').fill(who.email);
+	await page.getByLabel('Password').fill(who.password);
+	await page.getByRole('button', { name: 'Create account' }).click();
+	await page.waitForURL(/\/teams/);
+}
+
+export async function makeTeam(page: Page, name: string): Promise<string> {
+	await page.goto('/teams');
+	await page.getByLabel('Team name').fill(name);
+	await page.getByRole('button', { name: 'Make team' }).click();
+	await page.waitForURL(/\/teams\/[^/?]+$/);
+	return new URL(page.url()).pathname.split('/').pop()!;
+}
+
+/** Creates a design from the list page's form; returns its id (the page lands on revision A). */
+export async function newDesign(page: Page, name: string): Promise<string> {
+	await page.goto('/designs');
+	const form = page.locator('form[action="?/create"]');
+	await form.getByLabel('Name').fill(name);
+	await form.getByRole('button', { name: 'Create design' }).click();
+	await page.waitForURL(/\/designs\/[^/]+\/r\/A$/);
+	return new URL(page.url()).pathname.split('/')[2];
+}
+
+export async function makeToken(page: Page, name: string): Promise<string> {
+	await page.goto('/settings/tokens');
+	await page.getByLabel('Name').fill(name);
+	await page.getByRole('button', { name: 'Make token' }).click();
+	const secret = page.getByTestId('token-secret');
+	await expect(secret).toBeVisible();
+	return (await secret.textContent())!.trim();
+}
