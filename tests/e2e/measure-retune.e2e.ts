@@ -1,0 +1,84 @@
+// Journey: an editor uploads a measured S11 file, sees the plot with its resonance, confirms the retune and
+// lands on a new revision that names the measurement; a malformed file shows its line-numbered error and changes nothing.
+import { randomBytes } from 'node:crypto';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { expect, test, type Page } from '@playwright/test';
+import { closeDb, getDb } from '../../src/lib/server/db';
+import { hashPassword } from '../../src/lib/server/auth/password';
+import { createDesign } from '../../src/lib/server/designs/create-design';
+
+const fixtures = path.join(path.dirname(fileURLToPath(import.meta.url)), '../fixtures/touchstone-upload');
+const suffix = randomBytes(4).toString('hex');
+const editor = { id: `e2e-meas-${suffix}`, email: `meas-${suffix}@e2e.test`, password: `retune-${suffix}-pass` };
+let designId = '';
+
+test.beforeAll(async () => {
+	const db = getDb();
+	await db.insertInto('app_user').values({ id: editor.id, email: editor.email, display_name: `Bench ${suffix}`, password_hash: await hashPassword(editor.password) }).execute();
+	await db.insertInto('team').values({ id: `team-meas-${suffix}`, name: `Bench team ${suffix}` }).execute();
+	await db.insertInto('team_member').values({ team_id: `team-meas-${suffix}`, user_id: editor.id, role: 'editor' }).execute();
+	// 2.45 GHz inset-fed patch on εr 3.55, 1.524 mm (demo data); the fixture board resonates at 2.41 GHz.
+	const { design } = await createDesign(db, {
+		teamId: `team-meas-${suffix}`,
+		userId: editor.id,
+		raw: { name: `Bench patch ${suffix}`, frequencyHz: 2.45e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 3.55, heightMm: 1.524, lossTangent: 0.0027 } }
+	});
+	designId = design.id;
+});
+test.afterAll(async () => {
+	await closeDb();
+});
+
+async function signIn(page: Page, next: string) {
+	await page.goto(`/signin?next=${encodeURIComponent(next)}`);
+	await page.getByLabel('E-mail').fill(editor.email);
+	await page.getByLabel('Password').fill(editor.password);
+	await page.getByRole('button', { name: /sign in/i }).click();
+	await page.waitForURL((url) => url.pathname === next);
+}
+
+const revisionCount = async () => Number((await getDb().selectFrom('revision').select((eb) => eb.fn.countAll<string>().as('n')).where('design_id', '=', designId).executeTakeFirstOrThrow()).n);
+const measurementCount = async () =>
+	Number(
+		(await getDb().selectFrom('measurement').innerJoin('revision', 'revision.id', 'measurement.revision_id').select((eb) => eb.fn.countAll<string>().as('n')).where('revision.design_id', '=', designId).executeTakeFirstOrThrow()).n
+	);
+
+test('a malformed file shows its line-numbered error and changes nothing', async ({ page }) => {
+	await signIn(page, `/designs/${designId}/r/A/measurements`);
+	await page.getByLabel('Touchstone file').setInputFiles(path.join(fixtures, 'broken-line-7.s1p'));
+	await page.getByRole('button', { name: 'Upload' }).click();
+	await expect(page.getByTestId('upload-error')).toContainText('line 7: expected a number');
+	await expect(page.getByTestId('upload-error')).toContainText('Nothing was stored');
+	await expect(page.getByTestId('s11-plot')).toHaveCount(0);
+	expect(await measurementCount()).toBe(0);
+	expect(await revisionCount()).toBe(1);
+});
+
+test('upload → plot with the resonance → confirm the retune → a new revision that links the measurement', async ({ page }) => {
+	await signIn(page, `/designs/${designId}/r/A/measurements`);
+	await page.getByLabel('Touchstone file').setInputFiles(path.join(fixtures, 'bench-2g4.s1p'));
+	await page.getByRole('button', { name: 'Upload' }).click();
+
+	const plot = page.getByTestId('s11-plot');
+	await expect(plot).toBeVisible();
+	await expect(page.getByTestId('s11-resonance')).toContainText('2.410 GHz');
+	await expect(page.getByTestId('s11-band')).toHaveCount(1);
+	await expect(page.getByTestId('resonance')).toHaveText(/^2\.410\d GHz$/);
+	await plot.screenshot({ path: '/tmp/s11-plot.png' });
+	await page.screenshot({ path: '/tmp/measurements-page.png', fullPage: true });
+	expect(await measurementCount()).toBe(1);
+
+	const apparent = Number(await page.getByTestId('apparent-er').textContent());
+	expect(apparent).toBeGreaterThan(3.55);
+	await page.getByRole('button', { name: 'Create a retuned revision from A' }).click();
+	await page.waitForURL(`**/designs/${designId}/r/B/measurements`);
+	await expect(page.getByTestId('retuned-from')).toContainText('bench-2g4.s1p');
+	await expect(page.getByTestId('retuned-from')).toContainText('of revision A');
+
+	const b = await getDb().selectFrom('revision').select(['parent_id', 'retuned_from_measurement_id', 'input']).where('design_id', '=', designId).where('label', '=', 'B').executeTakeFirstOrThrow();
+	const m = await getDb().selectFrom('measurement').innerJoin('revision', 'revision.id', 'measurement.revision_id').select(['measurement.id', 'revision.id as rid']).where('revision.design_id', '=', designId).executeTakeFirstOrThrow();
+	expect(b.retuned_from_measurement_id).toBe(m.id);
+	expect(b.parent_id).toBe(m.rid);
+	expect((b.input as { substrate: { relativePermittivity: number } }).substrate.relativePermittivity).toBe(apparent);
+});
