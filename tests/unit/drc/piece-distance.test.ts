@@ -28,8 +28,8 @@ function samples(p: BoundaryPiece, n = 4000): Point[] {
 /** Brute force: closest of sampled points on A to the exact closest point on B (upper bound, tight as n grows). */
 function sampledDistance(a: BoundaryPiece, b: BoundaryPiece): number {
 	let best = Infinity;
-	const sa = samples(a, 600);
-	const sb = samples(b, 600);
+	const sa = samples(a, 400);
+	const sb = samples(b, 400);
 	for (const p of sa) for (const q of sb) best = Math.min(best, Math.hypot(p[0] - q[0], p[1] - q[1]));
 	return best;
 }
@@ -83,11 +83,11 @@ describe('closest pair of pieces (against dense sampling)', () => {
 			fc.property(pieceArb, pieceArb, (a, b) => {
 				const exact = closestPair(a, b).distanceMm;
 				const sampled = sampledDistance(a, b);
-				// the sampling step: at most the longest piece (≤ 2π·8 or 28 mm) over 600 steps, ≈ 0.084 mm
+				// the sampling step: at most the longest piece (≤ 2π·8 or 28 mm) over 400 steps, ≈ 0.126 mm
 				expect(exact).toBeLessThanOrEqual(sampled + 1e-9);
-				expect(sampled - exact).toBeLessThan(0.09);
+				expect(sampled - exact).toBeLessThan(0.13);
 			}),
-			{ seed: 20261201, numRuns: 300 }
+			{ seed: 20261201, numRuns: 150 }
 		);
 	});
 });
