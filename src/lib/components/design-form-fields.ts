@@ -50,6 +50,15 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'solderMask', path: 'solderMask', label: 'Add solder-mask layers', unit: '', kind: 'flag', group: 'Board' }
 ];
 
+/** Whether a field matters for this shape and feed (the editor hides the rest; tables leave them out). */
+export function fieldApplies(field: FormField, shape: string, feed: string): boolean {
+	if (field.name === 'handedness') return shape === 'truncated-corner' || shape === 'nearly-square';
+	if (field.name === 'inset.notchGapMm') return feed === 'inset';
+	if (field.name.startsWith('probe.')) return feed === 'probe';
+	if (field.name === 'patchWidthMm') return shape === 'rectangular';
+	return true;
+}
+
 /** What the form holds: every control's text (a flag is "on" or ""). */
 export type FormValues = Record<string, string>;
 

@@ -59,31 +59,51 @@ export interface PreviewDimension {
 	text: string;
 }
 
-/** A dimension drawn `offsetMm` to its side, in screen coordinates. */
-export function previewDimension(dim: ArtworkDimension, boardLengthMm: number, offsetMm: number): PreviewDimension {
-	const [ax, ay] = toScreen(dim.from, boardLengthMm);
-	const [bx, by] = toScreen(dim.to, boardLengthMm);
-	const [dx, dy] = { above: [0, -1], below: [0, 1], left: [-1, 0], right: [1, 0] }[dim.side] as [number, number];
-	const o = offsetMm;
-	const x1 = ax + dx * o;
-	const y1 = ay + dy * o;
-	const x2 = bx + dx * o;
-	const y2 = by + dy * o;
-	const vertical = dim.side === 'left' || dim.side === 'right';
-	const gap = o * 0.45;
-	return {
-		id: dim.id,
-		x1,
-		y1,
-		x2,
-		y2,
-		ext: [
-			[ax, ay, x1 + dx * o * 0.25, y1 + dy * o * 0.25],
-			[bx, by, x2 + dx * o * 0.25, y2 + dy * o * 0.25]
-		],
-		textX: (x1 + x2) / 2 + dx * gap,
-		textY: (y1 + y2) / 2 + dy * gap,
-		vertical,
-		text: `${dim.label} ${dim.valueMm.toFixed(2)}`
-	};
+/** Dimensions that sit inside the board (drawn beside what they measure); the rest stack outside its edges. */
+const LOCAL_DIMENSIONS = new Set(['inset-depth']);
+
+/**
+ * Every dimension in screen coordinates. Outer ones are stacked per side of the board, the shortest
+ * nearest the edge, `stepMm` apart, so their lines and texts never overlap.
+ */
+export function previewDimensions(dims: readonly ArtworkDimension[], board: { widthMm: number; lengthMm: number }, stepMm: number): PreviewDimension[] {
+	const L = board.lengthMm;
+	const rank = new Map<string, number>();
+	for (const side of ['above', 'below', 'left', 'right'] as const) {
+		dims.filter((d) => d.side === side && !LOCAL_DIMENSIONS.has(d.id))
+			.sort((a, b) => a.valueMm - b.valueMm)
+			.forEach((d, i) => rank.set(d.id, i));
+	}
+	return dims.map((dim) => {
+		const [ax, ay] = toScreen(dim.from, L);
+		const [bx, by] = toScreen(dim.to, L);
+		const vertical = dim.side === 'left' || dim.side === 'right';
+		const [dx, dy] = { above: [0, -1], below: [0, 1], left: [-1, 0], right: [1, 0] }[dim.side] as [number, number];
+		let line: number;
+		if (LOCAL_DIMENSIONS.has(dim.id)) {
+			line = vertical ? ax + dx * stepMm * 0.6 : ay + dy * stepMm * 0.6;
+		} else {
+			const k = (rank.get(dim.id) ?? 0) + 1;
+			line = { above: -k * stepMm, below: L + k * stepMm, left: -k * stepMm, right: board.widthMm + k * stepMm }[dim.side];
+		}
+		const [x1, y1, x2, y2] = vertical ? [line, ay, line, by] : [ax, line, bx, line];
+		const over = stepMm * 0.15;
+		const textGap = stepMm * 0.38;
+		return {
+			id: dim.id,
+			x1,
+			y1,
+			x2,
+			y2,
+			ext: [
+				[ax, ay, x1 + dx * over, y1 + dy * over],
+				[bx, by, x2 + dx * over, y2 + dy * over]
+			],
+			// Text on the far side of the line for outer dimensions, beside it for local ones.
+			textX: (x1 + x2) / 2 + (vertical ? dx * textGap : 0),
+			textY: (y1 + y2) / 2 + (vertical ? 0 : dy * textGap),
+			vertical,
+			text: `${dim.label} ${dim.valueMm.toFixed(2)}`
+		};
+	});
 }
