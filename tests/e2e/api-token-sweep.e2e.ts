@@ -2,7 +2,6 @@
 // the token reaches only its team, and the fetch is recorded in the export log as coming from the API.
 import { expect, test } from '@playwright/test';
 import Ajv2020 from 'ajv/dist/2020.js';
-import { sweepJsonSchema } from '../../src/lib/formats/sweep/schema';
 import { makeTeam, makeToken, newDesign, signUp, uniqueSuffix } from './helpers/exports';
 
 test('a personal API token fetches a sweep definition that validates against the published schema', async ({ page, playwright, baseURL }) => {
@@ -25,9 +24,12 @@ test('a personal API token fetches a sweep definition that validates against the
 	expect(res.headers()['content-type']).toBe('application/json');
 	const doc = await res.json();
 
-	// ajv (JSON Schema draft 2020-12) against the sweep schema of src/lib/formats/sweep/schema.ts.
+	// ajv (JSON Schema draft 2020-12) against the schema the app publishes at the document's own $schema URL.
+	expect(doc.$schema).toBe('/schemas/sweep-v1.json');
+	const published = await api.get(doc.$schema);
+	expect(published.status()).toBe(200);
 	const ajv = new Ajv2020({ allErrors: true, strict: false });
-	const validate = ajv.compile(sweepJsonSchema);
+	const validate = ajv.compile(await published.json());
 	expect(validate(doc), JSON.stringify(validate.errors?.slice(0, 3))).toBe(true);
 	expect(doc.design.revision).toBe('A');
 	// A tampered document fails with a field-level error.
