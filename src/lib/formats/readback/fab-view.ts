@@ -1,10 +1,12 @@
 // What a board house sees in our files, rebuilt from the parse: layer images, holes, board extents, and what did not match.
 import type { Bounds } from '../../geometry';
 
-/** A file as written: its name and its text (or the bytes, UTF-8). */
-export interface FabFile {
-	readonly name: string;
-	readonly text: string | Uint8Array;
+/** A file as written: its name and its text, or its UTF-8 bytes (the export pipeline's `{ name, bytes }`). */
+export type FabFile = { readonly name: string; readonly text: string | Uint8Array } | { readonly name: string; readonly bytes: Uint8Array };
+
+/** Names of the files a board house reads: Gerber layers and Excellon drills (not DXF, SVG, JSON or notes). */
+export function isFabFileName(name: string): boolean {
+	return /\.(gbr|ger|gtl|gbl|gko|gm1|gts|gbs|drl|xln|exc)$/i.test(name);
 }
 
 /** A ring of [x, y] points in mm, not closed (the first point is not repeated). */

@@ -5,6 +5,7 @@ export { compareFabView } from './compare-fab-view';
 export { layerKeyOf, layerKeyOfFileFunction } from './artwork-image';
 export {
 	READ_BACK_TOLERANCE,
+	isFabFileName,
 	type FabDrillFile,
 	type FabFile,
 	type FabHole,

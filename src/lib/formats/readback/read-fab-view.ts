@@ -5,7 +5,10 @@ import { composeImage, toFabPolygons } from './image-item';
 import { readDrill } from './read-drill';
 import { readGerber } from './read-gerber';
 
-const textOf = (f: FabFile) => (typeof f.text === 'string' ? f.text : new TextDecoder('utf-8').decode(f.text));
+function textOf(f: FabFile): string {
+	const content = 'bytes' in f ? f.bytes : f.text;
+	return typeof content === 'string' ? content : new TextDecoder('utf-8').decode(content);
+}
 
 /** A drill file starts with M48 (Excellon header) or carries the drill X2 comment; everything else is read as Gerber. */
 function looksLikeDrill(text: string): boolean {

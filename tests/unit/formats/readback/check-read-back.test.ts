@@ -5,7 +5,8 @@ import { buildArtwork, type Artwork } from '../../../../src/lib/artwork';
 import { createExportMeta } from '../../../../src/lib/formats/export-meta';
 import { toExcellon } from '../../../../src/lib/formats/excellon';
 import { toGerber } from '../../../../src/lib/formats/gerber';
-import { checkReadBack, type FabFile, type ReadBackCheck } from '../../../../src/lib/formats/readback';
+import { buildFiles } from '../../../../src/lib/formats/bundle';
+import { checkReadBack, isFabFileName, type FabFile, type ReadBackCheck } from '../../../../src/lib/formats/readback';
 import { regionArea } from '../../../../src/lib/geometry';
 import { size } from '../../../../src/lib/rf';
 import { parseDesignInput, type DesignInputDocument } from '../../../../src/lib/schemas';
@@ -18,7 +19,8 @@ function artworkOf(doc: Partial<DesignInputDocument>): Artwork {
 }
 
 /** The files an export writes for the fab: one Gerber per layer, plated and non-plated Excellon. */
-function filesOf(artwork: Artwork): FabFile[] {
+type TextFile = { name: string; text: string };
+function filesOf(artwork: Artwork): TextFile[] {
 	return [
 		...artwork.layers.map((l) => ({ name: `${l.id}.gbr`, text: toGerber(artwork, l.id, meta) })),
 		{ name: 'plated.drl', text: toExcellon(artwork, true, meta) },
@@ -26,15 +28,15 @@ function filesOf(artwork: Artwork): FabFile[] {
 	];
 }
 
-function edit(files: FabFile[], name: string, change: (text: string) => string): FabFile[] {
+function edit(files: TextFile[], name: string, change: (text: string) => string): TextFile[] {
 	return files.map((f) => {
 		if (f.name !== name) return f;
-		const text = change(f.text as string);
+		const text = change(f.text);
 		if (text === f.text) throw new Error(`the edit of ${name} changed nothing`);
 		return { ...f, text };
 	});
 }
-const checksOf = (artwork: Artwork, files: FabFile[]): ReadBackCheck[] => [...new Set(checkReadBack(artwork, files).mismatches.map((m) => m.check))];
+const checksOf = (artwork: Artwork, files: readonly FabFile[]): ReadBackCheck[] => [...new Set(checkReadBack(artwork, files).mismatches.map((m) => m.check))];
 
 const designs: [string, Partial<DesignInputDocument>][] = [
 	['rectangular inset', {}],
@@ -79,9 +81,16 @@ describe('checkReadBack on honest writer output', () => {
 		expect(view.layers.find((l) => l.key === 'copper-L1')!.areaMm2 / exact).toBeCloseTo(1, 5);
 	});
 
+	it.each(designs)('passes the export pipeline\'s own Gerber and drill files for a %s design', (_name, doc) => {
+		const sized = size(parseDesignInput({ frequencyHz: 2.45e9, substrate: fr4, solderMask: true, ...doc }));
+		const files = buildFiles(sized, meta, ['gerber', 'drill', 'notes']).filter((f) => isFabFileName(f.name));
+		expect(files.length).toBeGreaterThanOrEqual(4);
+		expect(checkReadBack(buildArtwork(sized), files).mismatches).toEqual([]);
+	});
+
 	it('accepts the files as bytes too', () => {
 		const artwork = artworkOf({ feed: 'probe' });
-		const bytes = filesOf(artwork).map((f) => ({ name: f.name, text: new TextEncoder().encode(f.text as string) }));
+		const bytes = filesOf(artwork).map((f) => ({ name: f.name, bytes: new TextEncoder().encode(f.text) }));
 		expect(checkReadBack(artwork, bytes).ok).toBe(true);
 	});
 });
@@ -89,7 +98,7 @@ describe('checkReadBack on honest writer output', () => {
 describe('checkReadBack catches corrupted output', () => {
 	const inset = artworkOf({});
 	const probe = artworkOf({ feed: 'probe' });
-	it.each<[string, Artwork, (f: FabFile[]) => FabFile[], ReadBackCheck[]]>([
+	it.each<[string, Artwork, (f: TextFile[]) => FabFile[], ReadBackCheck[]]>([
 		// the feed-line region (the second G36…G37 block of the top copper) is dropped
 		['a dropped region', inset, (f) => edit(f, 'copper-top.gbr', (t) => t.replace(/(G36\*[\s\S]*?G37\*\n[\s\S]*?)G36\*[\s\S]*?G37\*\n/, '$1')), ['layer-area', 'layer-shape', 'layer-extents']],
 		// one vertex of the patch moved 0.2 mm in x
