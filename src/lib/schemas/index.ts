@@ -1,6 +1,7 @@
 // Public face of the schemas room.
 export * from './design-input';
 export * from './input-error';
+export * from './fab-profile';
 import { designInputSchema, type DesignInput } from './design-input';
 import { parseWith } from './input-error';
 
