@@ -1,0 +1,131 @@
+// The sweep-plan FORM: what an editor types (rows of text, display units) and its conversion to a sweep-plan
+// document. The document itself, its point count and its 10 000-point limit are formats/sweep/plan.ts: one schema per concept.
+import { z } from 'zod';
+
+/** Rows the form offers (the document allows up to 6 axes; four cover every practical study). */
+export const SWEEP_FORM_AXES = 4;
+
+export interface SweepFieldChoice {
+	/** Dotted design-input path (one of formats/sweep's sweepable fields). */
+	field: string;
+	label: string;
+	/** Unit the form shows and the user types. */
+	unit: string;
+	/** Stored units per displayed unit (GHz → Hz: 1e9). */
+	perUnit: number;
+	/** What a change of it moves in the sized design. */
+	moves: string;
+}
+
+/**
+ * The fields an editor picks from. Sized dimensions (patch length, inset depth, feed width, probe offset)
+ * are outputs of sizing, so a sweep moves them through the input that sets them.
+ */
+export const sweepFieldChoices: readonly SweepFieldChoice[] = [
+	{ field: 'frequencyHz', label: 'Design frequency', unit: 'GHz', perUnit: 1e9, moves: 'patch length (and width)' },
+	{ field: 'patchWidthMm', label: 'Patch width', unit: 'mm', perUnit: 1, moves: 'patch width held fixed (rectangular)' },
+	{ field: 'substrate.relativePermittivity', label: 'Laminate εr', unit: '', perUnit: 1, moves: 'every dimension' },
+	{ field: 'substrate.heightMm', label: 'Laminate thickness h', unit: 'mm', perUnit: 1, moves: 'every dimension, feed width' },
+	{ field: 'targetImpedanceOhm', label: 'Feed-point resistance', unit: 'Ω', perUnit: 1, moves: 'inset depth or probe offset' },
+	{ field: 'feedLineImpedanceOhm', label: 'Feed-line impedance', unit: 'Ω', perUnit: 1, moves: 'feed width' },
+	{ field: 'inset.notchGapMm', label: 'Inset notch gap', unit: 'mm', perUnit: 1, moves: 'notch gap' },
+	{ field: 'groundMarginMm', label: 'Ground margin', unit: 'mm', perUnit: 1, moves: 'board size' },
+	{ field: 'probe.drillDiameterMm', label: 'Probe drill', unit: 'mm', perUnit: 1, moves: 'probe hole' },
+	{ field: 'probe.clearanceDiameterMm', label: 'Probe anti-pad', unit: 'mm', perUnit: 1, moves: 'ground clearance' },
+	{ field: 'substrate.lossTangent', label: 'Loss tangent tanδ', unit: '', perUnit: 1, moves: 'estimates only' },
+	{ field: 'substrate.copperThicknessUm', label: 'Copper thickness', unit: 'µm', perUnit: 1, moves: 'feed width (slightly)' }
+];
+
+export function sweepFieldChoice(field: string): SweepFieldChoice | undefined {
+	return sweepFieldChoices.find((c) => c.field === field);
+}
+
+const text = (max: number) => z.string().max(max, { error: `at most ${max} characters` }).default('');
+
+export const sweepAxisDraftSchema = z.object({
+	/** '' = row unused. */
+	field: text(60),
+	mode: z.enum(['range', 'list']).default('range'),
+	from: text(40),
+	to: text(40),
+	step: text(40),
+	/** Comma- or space-separated. */
+	values: text(20_000)
+});
+
+export const sweepPlanDraftSchema = z.object({
+	name: z.string().trim().min(1, { error: 'give the plan a name' }).max(80, { error: 'at most 80 characters' }),
+	combine: z.enum(['grid', 'zip']).default('grid'),
+	axes: z.array(sweepAxisDraftSchema).max(SWEEP_FORM_AXES)
+});
+export type SweepPlanDraft = z.output<typeof sweepPlanDraftSchema>;
+export type SweepAxisDraft = z.output<typeof sweepAxisDraftSchema>;
+
+export function emptyAxisDraft(field = ''): SweepAxisDraft {
+	return { field, mode: 'range', from: '', to: '', step: '', values: '' };
+}
+
+/** Reads the form's fields (`name`, `combine`, `axes.<i>.field|mode|from|to|step|values`); unknown values become ''. */
+export function sweepDraftFromFields(get: (name: string) => unknown): unknown {
+	const str = (name: string) => {
+		const v = get(name);
+		return typeof v === 'string' ? v : undefined;
+	};
+	return {
+		name: str('name') ?? '',
+		combine: str('combine') || undefined,
+		axes: Array.from({ length: SWEEP_FORM_AXES }, (_, i) => ({
+			field: str(`axes.${i}.field`),
+			mode: str(`axes.${i}.mode`) || undefined,
+			from: str(`axes.${i}.from`),
+			to: str(`axes.${i}.to`),
+			step: str(`axes.${i}.step`),
+			values: str(`axes.${i}.values`)
+		}))
+	};
+}
+
+/** A typed number, or NaN (which the plan schema refuses as "must be a finite number"). */
+function number(textValue: string): number {
+	const t = textValue.trim();
+	return t === '' ? NaN : Number(t);
+}
+
+/** Keeps twelve significant digits so that 2.41 GHz becomes 2410000000 Hz, not 2409999999.9999995. */
+function toStored(value: number, perUnit: number): number {
+	return Number.isFinite(value) ? Number((value * perUnit).toPrecision(12)) : value;
+}
+
+/**
+ * The sweep-plan document a draft describes (not yet validated: formats/sweep's parseSweepPlan does that),
+ * and for each of its axes the form row it came from. Rows without a field are left out.
+ */
+export function sweepPlanFromDraft(draft: SweepPlanDraft): { plan: { planVersion: 1; combine: 'grid' | 'zip'; axes: Record<string, unknown>[] }; rows: number[] } {
+	const rows: number[] = [];
+	const axes: Record<string, unknown>[] = [];
+	draft.axes.forEach((a, row) => {
+		if (a.field === '') return;
+		const perUnit = sweepFieldChoice(a.field)?.perUnit ?? 1;
+		rows.push(row);
+		if (a.mode === 'list') {
+			const values = a.values.split(/[\s,;]+/).filter((v) => v !== '').map((v) => toStored(number(v), perUnit));
+			axes.push({ field: a.field, values });
+		} else {
+			axes.push({ field: a.field, from: toStored(number(a.from), perUnit), to: toStored(number(a.to), perUnit), step: toStored(number(a.step), perUnit) });
+		}
+	});
+	return { plan: { planVersion: 1, combine: draft.combine, axes }, rows };
+}
+
+/** The draft of a saved plan document (the inverse of sweepPlanFromDraft, for "start from this plan"). */
+export function sweepDraftFromPlan(name: string, plan: { combine: 'grid' | 'zip'; axes: readonly ({ field: string } & ({ from: number; to: number; step: number } | { values: readonly number[] }))[] }): SweepPlanDraft {
+	const shown = (v: number, perUnit: number) => String(Number((v / perUnit).toPrecision(12)));
+	const axes = plan.axes.slice(0, SWEEP_FORM_AXES).map((a) => {
+		const perUnit = sweepFieldChoice(a.field)?.perUnit ?? 1;
+		return 'values' in a
+			? { ...emptyAxisDraft(a.field), mode: 'list' as const, values: a.values.map((v) => shown(v, perUnit)).join(', ') }
+			: { ...emptyAxisDraft(a.field), from: shown(a.from, perUnit), to: shown(a.to, perUnit), step: shown(a.step, perUnit) };
+	});
+	while (axes.length < SWEEP_FORM_AXES) axes.push(emptyAxisDraft());
+	return { name, combine: plan.combine, axes };
+}
