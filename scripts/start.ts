@@ -26,7 +26,7 @@ runMain(async () => {
 	const server = spawn(process.execPath, ['build'], {
 		cwd: rootDir,
 		stdio: 'inherit',
-		env: { ...process.env, ...mail, DATABASE_URL: databaseUrl, HOST: '127.0.0.1', PORT: String(config.appPort), ORIGIN: origin, FRINGEFIELD_DEV_MAILBOX: '1' }
+		env: { ...process.env, ...mail, DATABASE_URL: databaseUrl, HOST: '127.0.0.1', PORT: String(config.appPort), ORIGIN: origin, BODY_SIZE_LIMIT: process.env.BODY_SIZE_LIMIT || '6M', FRINGEFIELD_DEV_MAILBOX: '1' }
 	});
 	recordPid(config, 'app', server.pid!);
 	console.log(`\nFringefield is running at ${origin}\n  demo sign-in: ${DEMO_EMAIL} / ${DEMO_PASSWORD}\n  caught e-mail: ${origin}/dev/mailbox\n  stop with Ctrl-C or \`npm run stop\`\n`);

@@ -42,6 +42,7 @@ export default defineConfig({
 			HOST: '127.0.0.1',
 			PORT: String(port),
 			ORIGIN: baseURL,
+			BODY_SIZE_LIMIT: '6M',
 			FRINGEFIELD_DEV_MAILBOX: '1'
 		}
 	}
