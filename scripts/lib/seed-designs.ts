@@ -5,7 +5,7 @@ import type { Kysely } from 'kysely';
 import type { Database } from '../../src/lib/server/db/database.ts';
 import * as designQueries from '../../src/lib/server/db/design.queries.ts';
 import { createDesign, laminatePresets, saveRevision } from '../../src/lib/server/designs/index.ts';
-import { toDesignSlug } from '../../src/lib/formats/export-meta.ts';
+import { toDesignSlug } from '../../src/lib/formats/index.ts';
 
 type Role = 'owner' | 'editor' | 'viewer';
 

@@ -95,3 +95,8 @@ export function formatValue(value: number | string, digits: number): string {
 	const decimals = Math.max(0, Math.min(6, digits - 1 - Math.floor(Math.log10(abs))));
 	return value.toFixed(decimals);
 }
+
+/** An input value as typed: up to seven significant digits, no trailing zeros ("2.45", "58000000"). */
+export function formatPlain(value: number): string {
+	return formatValue(value, 7).replace(/(\.\d*?)0+$/, '$1').replace(/\.$/, '');
+}

@@ -30,7 +30,7 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'name', path: 'name', label: 'Name', unit: '', kind: 'text', group: 'Design' },
 	{ name: 'frequencyGHz', path: 'frequencyHz', label: 'Target frequency f₀', unit: 'GHz', kind: 'number', group: 'Design', scale: ghz, step: 'any' },
 	{ name: 'shape', path: 'shape', label: 'Patch shape', unit: '', kind: 'choice', group: 'Design', choices: patchShapes },
-	{ name: 'handedness', path: 'handedness', label: 'Circular polarisation sense', unit: '', kind: 'choice', group: 'Design', choices: handednesses, hint: 'truncated-corner and nearly-square only' },
+	{ name: 'handedness', path: 'handedness', label: 'Circular polarisation sense', unit: '', kind: 'choice', group: 'Design', choices: handednesses },
 	{ name: 'substrate.relativePermittivity', path: 'substrate.relativePermittivity', label: 'Permittivity εr', unit: '', kind: 'number', group: 'Substrate', step: 'any' },
 	{ name: 'substrate.lossTangent', path: 'substrate.lossTangent', label: 'Loss tangent tanδ', unit: '', kind: 'number', group: 'Substrate', step: 'any' },
 	{ name: 'substrate.heightMm', path: 'substrate.heightMm', label: 'Thickness h', unit: 'mm', kind: 'number', group: 'Substrate', step: 'any' },

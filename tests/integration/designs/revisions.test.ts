@@ -156,7 +156,8 @@ describe('diffing two revisions', () => {
 		const b = (await designs.findRevision(db, design.id, 'B'))!;
 		const diff = designs.diffRevisions(a, b);
 		const freq = diff.inputs.find((r) => r.key === 'frequencyGHz')!;
-		expect([freq.a, freq.b, freq.changed]).toEqual(['2.450000', '2.400000', true]);
+		expect([freq.a, freq.b, freq.changed]).toEqual(['2.45', '2.4', true]);
+		expect(diff.inputs.some((r) => r.key.startsWith('probe.'))).toBe(false); // inset-fed on both sides
 		expect(diff.inputs.find((r) => r.key === 'substrate.heightMm')!.changed).toBe(false);
 		// A lower frequency means a longer patch (L ∝ 1/f: transmission-line model, any patch handbook).
 		const length = diff.derived.find((r) => r.key === 'patchLengthMm')!;

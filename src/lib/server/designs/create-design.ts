@@ -1,7 +1,7 @@
 // A new design: a slug unique in its team, and its first revision A, written together.
 import { randomUUID } from 'node:crypto';
 import type { Kysely } from 'kysely';
-import { toDesignSlug } from '../../formats/export-meta';
+import { toDesignSlug } from '../../formats';
 import type { Database } from '../db/database';
 import * as designQueries from '../db/design.queries';
 import { toDesign, type Design } from './design-model';

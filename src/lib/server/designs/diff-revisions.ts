@@ -1,6 +1,6 @@
 // Two revisions side by side: every input field and every derived dimension, with what changed. Pure.
-import { designFormFields, valueAtPath } from '../../components/design-form-fields';
-import { derivedQuantities, formatValue } from '../../components/derived-quantities';
+import { designFormFields, fieldApplies, valueAtPath } from '../../components/design-form-fields';
+import { derivedQuantities, formatPlain, formatValue } from '../../components/derived-quantities';
 import type { SizedDesign } from '../../rf';
 import type { DesignInput } from '../../schemas';
 
@@ -32,10 +32,12 @@ export interface RevisionDiff {
 }
 
 export function diffRevisions(a: DiffSide, b: DiffSide): RevisionDiff {
-	const inputs = designFormFields.map((f) => {
+	// Fields that apply to neither side (probe sizes of two inset-fed revisions) are left out.
+	const applies = (f: (typeof designFormFields)[number]) => fieldApplies(f, a.input.shape, a.input.feed) || fieldApplies(f, b.input.shape, b.input.feed);
+	const inputs = designFormFields.filter(applies).map((f) => {
 		const va = valueAtPath(a.input, f.path);
 		const vb = valueAtPath(b.input, f.path);
-		const show = (v: unknown) => (v === undefined || v === null ? '—' : typeof v === 'number' ? formatValue(f.scale ? f.scale.toForm(v) : v, 7) : typeof v === 'boolean' ? (v ? 'yes' : 'no') : String(v));
+		const show = (v: unknown) => (v === undefined || v === null ? '—' : typeof v === 'number' ? formatPlain(f.scale ? f.scale.toForm(v) : v) : typeof v === 'boolean' ? (v ? 'yes' : 'no') : String(v));
 		return row(f.name, f.group, f.label, f.unit, va, vb, show(va), show(vb));
 	});
 
