@@ -46,6 +46,12 @@ test('an invited person signs up from the e-mailed link and lands in the team as
 	await ownerPage.screenshot({ path: '/tmp/ff-team-as-owner.png', fullPage: true });
 	expect((await latestMailTo(ownerPage.request, invitee.email)).links).toHaveLength(1);
 
+	// The dev mailbox page shows the caught invitation with its link.
+	await ownerPage.goto(`/dev/mailbox?to=${encodeURIComponent(invitee.email)}`);
+	await expect(ownerPage.getByTestId('caught-mail')).toHaveCount(1);
+	await expect(ownerPage.getByTestId('caught-mail').getByRole('link')).toHaveAttribute('href', mail.links[0]);
+	await ownerPage.screenshot({ path: '/tmp/ff-dev-mailbox.png', fullPage: true });
+
 	await ownerContext.close();
 	await inviteeContext.close();
 });

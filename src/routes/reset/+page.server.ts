@@ -1,10 +1,16 @@
 // Asking for a password-reset link: the same answer whether or not the e-mail has an account.
-import { formFailure, formFields, requestPasswordReset } from '$lib/server/accounts';
+import { fail } from '@sveltejs/kit';
+import { formFailure, formFields, requestPasswordReset, takeResetMailAllowance, type FormProblem } from '$lib/server/accounts';
 import type { Actions } from './$types';
 
 export const actions: Actions = {
 	default: async ({ request }) => {
 		const values = await formFields(request);
+		// The allowance counts every e-mail alike, so running out of it says nothing about an account.
+		const { retryAfterSeconds } = await takeResetMailAllowance(values.email ?? '');
+		if (retryAfterSeconds > 0) {
+			return fail(429, { form: 'reset', message: `Several links were sent to this address already; try again in ${Math.ceil(retryAfterSeconds / 60)} minute(s).`, issues: {}, values } as FormProblem);
+		}
 		try {
 			const { delivery } = await requestPasswordReset({ email: values.email });
 			// Not awaited: waiting for the mail server would tell an observer that the account exists.

@@ -1,6 +1,18 @@
-// Sign-in: one generic refusal; a fresh session id on success (the old one, if any, ends).
-import { redirect } from '@sveltejs/kit';
-import { checkCredentials, formFailure, formFields, safeNextPath, startSession, withoutSecrets } from '$lib/server/accounts';
+// Sign-in: one generic refusal, slowed down after repeated failures; a fresh session id on success (the old one, if any, ends).
+import { fail, redirect } from '@sveltejs/kit';
+import {
+	AccountError,
+	checkCredentials,
+	clearSignInFailures,
+	formFailure,
+	formFields,
+	recordSignInFailure,
+	safeNextPath,
+	signInThrottle,
+	startSession,
+	withoutSecrets,
+	type FormProblem
+} from '$lib/server/accounts';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ locals, url }) => {
@@ -10,14 +22,23 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 };
 
 export const actions: Actions = {
-	default: async ({ request, cookies, locals }) => {
+	default: async ({ request, cookies, locals, getClientAddress }) => {
 		const values = await formFields(request);
+		const email = values.email ?? '';
+		const address = getClientAddress();
+		const { retryAfterSeconds } = await signInThrottle(email, address);
+		if (retryAfterSeconds > 0) {
+			const message = `Too many failed attempts. Try again in ${Math.ceil(retryAfterSeconds / 60)} minute(s), or set a new password.`;
+			return fail(429, { form: 'signin', message, issues: {}, values: withoutSecrets(values) } as FormProblem);
+		}
 		let userId: string;
 		try {
-			userId = (await checkCredentials({ email: values.email, password: values.password })).id;
+			userId = (await checkCredentials({ email, password: values.password })).id;
 		} catch (err) {
+			if (err instanceof AccountError) await recordSignInFailure(email, address);
 			return formFailure(err, 'signin', withoutSecrets(values));
 		}
+		await clearSignInFailures(email);
 		const { cookie } = await startSession(userId, locals.sessionId);
 		cookies.set(cookie.name, cookie.value, { ...cookie.attributes, path: '/' });
 		redirect(303, safeNextPath(values.next));

@@ -10,3 +10,4 @@ export { inviteToTeam, listPendingInvites, withdrawInvite, describeInvite, accep
 export { createApiToken, listApiTokens, findOwnApiTokenTeam, revokeApiToken, type ApiTokenSummary } from './api-tokens';
 export { safeNextPath, requireUser, requireSessionUser } from './request-user';
 export { formFailure, formFields, withoutSecrets, type FormProblem } from './form-failure';
+export { signInThrottle, recordSignInFailure, clearSignInFailures, takeResetMailAllowance, type Throttle } from './attempt-throttle';
