@@ -2,6 +2,7 @@
 export * from './design-input';
 export * from './input-error';
 export * from './fab-profile';
+export * from './laminate';
 import { designInputSchema, type DesignInput } from './design-input';
 import { parseWith } from './input-error';
 
