@@ -5,7 +5,7 @@ import { provideMail } from './lib/mail.ts';
 import { migrateToLatest } from './lib/migrate.ts';
 import { canBind } from './lib/ports.ts';
 import { APP_DATABASE, provideDatabase } from './lib/postgres.ts';
-import { DEMO_EMAIL, DEMO_PASSWORD, seedDemo } from './lib/seed.ts';
+import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemo } from './lib/seed.ts';
 import { forgetPid, recordPid } from './lib/services.ts';
 
 runMain(async () => {
@@ -29,7 +29,8 @@ runMain(async () => {
 		env: { ...process.env, ...mail, DATABASE_URL: databaseUrl, HOST: '127.0.0.1', PORT: String(config.appPort), ORIGIN: origin, BODY_SIZE_LIMIT: process.env.BODY_SIZE_LIMIT || '6M', FRINGEFIELD_DEV_MAILBOX: '1' }
 	});
 	recordPid(config, 'app', server.pid!);
-	console.log(`\nFringefield is running at ${origin}\n  demo sign-in: ${DEMO_EMAIL} / ${DEMO_PASSWORD}\n  caught e-mail: ${origin}/dev/mailbox\n  stop with Ctrl-C or \`npm run stop\`\n`);
+	const people = DEMO_PEOPLE.map((p) => `    ${p.email.padEnd(32)} ${p.role}`).join('\n');
+	console.log(`\nFringefield is running at ${origin}\n  demo sign-in (password ${DEMO_PASSWORD}):\n${people}\n  caught e-mail: ${origin}/dev/mailbox\n  stop with Ctrl-C or \`npm run stop\`\n`);
 	for (const sig of ['SIGINT', 'SIGTERM'] as const) process.on(sig, () => server.kill('SIGTERM'));
 	await new Promise<void>((done) => server.on('exit', () => done()));
 	forgetPid(config, 'app');

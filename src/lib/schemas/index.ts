@@ -3,6 +3,7 @@ export * from './design-input';
 export * from './input-error';
 export * from './fab-profile';
 export * from './laminate';
+export * from './account';
 import { designInputSchema, type DesignInput } from './design-input';
 import { parseWith } from './input-error';
 
