@@ -2,7 +2,8 @@
 import { GeometryError, createRectangleContour, type Point } from '../geometry';
 import type { SizedDesign } from '../rf/sized-design';
 import { buildDimensions } from './build-dimensions';
-import { buildStack } from './build-stack';
+import { buildLayeredStack, buildStack } from './build-stack';
+import { buildExtendedArtwork } from './build-extended-artwork';
 import { buildTopCopper } from './build-top-copper';
 import type { Artwork, ArtworkDrill, ArtworkLayer, ArtworkShape } from './types';
 
@@ -14,6 +15,7 @@ export const PROFILE_STROKE_WIDTH_MM = 0.1;
  * centred on it and the feed runs down (−y) to the board edge at y = 0.
  */
 export function buildArtwork(sized: SizedDesign): Artwork {
+	if (needsExtendedArtwork(sized)) return buildExtendedArtwork(sized);
 	const { widthMm: boardW, lengthMm: boardL } = sized.ground;
 	if (!(boardW > 0 && boardL > 0)) throw new GeometryError('degenerate-shape', `ground.widthMm and ground.lengthMm must be positive (got ${boardW}, ${boardL})`);
 	const center: Point = [boardW / 2, boardL / 2];
@@ -61,7 +63,7 @@ export function buildArtwork(sized: SizedDesign): Artwork {
 		board: { widthMm: boardW, lengthMm: boardL },
 		layers,
 		drills,
-		stack: buildStack(sized),
+		stack: sized.layerStack ? buildLayeredStack(sized) : buildStack(sized),
 		dimensions: buildDimensions(sized, center, top.patchEdgeYMm),
 		metadata: {
 			designName: sized.input.name,
@@ -71,4 +73,9 @@ export function buildArtwork(sized: SizedDesign): Artwork {
 			copperLayerCount: 2
 		}
 	};
+}
+
+/** Layered feeds, a parasitic patch and arrays take the extended builder; a two-copper stack stays here. */
+export function needsExtendedArtwork(sized: SizedDesign): boolean {
+	return sized.array !== undefined || sized.parasitic !== undefined || sized.feed.kind === 'aperture-coupled' || sized.feed.kind === 'proximity-coupled';
 }

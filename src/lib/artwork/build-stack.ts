@@ -11,3 +11,30 @@ export function buildStack(sized: SizedDesign): StackLayer[] {
 		{ kind: 'copper', id: 'copper-bottom', layerId: 'copper-bottom', zMm: 0, thicknessMm: t, conductivitySPerM: copperConductivitySPerM }
 	];
 }
+
+/** Copper layer ids for a stack of `copperCount` coppers, top to bottom. */
+export function copperLayerIds(copperCount: number): string[] {
+	if (copperCount === 2) return ['copper-top', 'copper-bottom'];
+	return ['copper-top', ...Array.from({ length: copperCount - 2 }, (_, i) => `copper-inner-${i + 1}`), 'copper-bottom'];
+}
+
+/** The stack from the resolved layer stack of the document (top to bottom), z accumulated from the bottom copper's lower face. */
+export function buildLayeredStack(sized: SizedDesign): StackLayer[] {
+	const entries = sized.layerStack;
+	if (!entries) return buildStack(sized);
+	const ids = copperLayerIds(entries.filter((e) => e.kind === 'copper').length);
+	let z = entries.reduce((a, e) => a + (e.kind === 'copper' ? e.thicknessMm : e.heightMm), 0);
+	let copper = 0, dielectric = 0;
+	return entries.map((e): StackLayer => {
+		const thickness = e.kind === 'copper' ? e.thicknessMm : e.heightMm;
+		z -= thickness;
+		const zMm = Math.max(0, z);
+		if (e.kind === 'copper') {
+			const layerId = ids[copper++];
+			return { kind: 'copper', id: layerId, layerId, zMm, thicknessMm: e.thicknessMm, conductivitySPerM: e.conductivitySPerM };
+		}
+		dielectric++;
+		const layer = { kind: 'dielectric' as const, id: `dielectric-${dielectric}`, zMm, thicknessMm: e.heightMm, relativePermittivity: e.relativePermittivity, lossTangent: e.lossTangent };
+		return e.bonding ? { ...layer, bonding: true } : layer;
+	});
+}

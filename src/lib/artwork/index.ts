@@ -2,3 +2,7 @@
 export * from './types';
 export { buildArtwork, PROFILE_STROKE_WIDTH_MM } from './build-artwork';
 export { patchPolygon } from './patch-polygon';
+export { needsExtendedArtwork } from './build-artwork';
+export { copperLayerIds } from './build-stack';
+export { translateShape } from './translate-shape';
+export { layoutCorporateFeed, pieceShape, type CorporateFeedLayout, type NetworkPiece } from './build-corporate-feed';

@@ -12,7 +12,17 @@ export type ShapeRole =
 	| 'ground'
 	| 'clearance'
 	| 'profile'
-	| 'mask-opening';
+	| 'mask-opening'
+	/** The parasitic patch of a stacked pair, on the top copper. */
+	| 'parasitic-patch'
+	/** Aperture-coupled slot cut in the ground between the substrates (clear). */
+	| 'coupling-slot'
+	/** Open stub of an aperture-coupled feed line past the slot. */
+	| 'tuning-stub'
+	/** A Z0 line of an array's corporate feed. */
+	| 'feed-network'
+	/** A λg/4 transformer in an arm of a corporate-feed T-junction. */
+	| 'network-transformer';
 
 /**
  * Dark adds material to the layer's image (copper, or a mask opening on a mask layer);
@@ -43,7 +53,7 @@ export type LayerFunction =
 	| { readonly kind: 'solder-mask'; readonly side: 'top' | 'bottom' };
 
 export interface ArtworkLayer {
-	/** File-name and group id: "copper-top", "copper-bottom", "profile", "mask-top", "mask-bottom". */
+	/** File-name and group id: "copper-top", "copper-inner-1" (three-copper stacks), "copper-bottom", "profile", "mask-top", "mask-bottom". */
 	readonly id: string;
 	/** Human name for titles and DXF. */
 	readonly title: string;
@@ -85,6 +95,8 @@ export type StackLayer =
 			readonly thicknessMm: number;
 			readonly relativePermittivity: number;
 			readonly lossTangent: number;
+			/** Present (true) for a bonding film between cores in an explicit stack. */
+			readonly bonding?: boolean;
 	  };
 
 /** A main size to dimension on drawings: a measured span between two points. */
@@ -105,7 +117,10 @@ export interface Artwork {
 	/** Top to bottom: copper top first, then the rest. */
 	readonly layers: readonly ArtworkLayer[];
 	readonly drills: readonly ArtworkDrill[];
-	/** Top to bottom. */
+	/**
+	 * Top to bottom: the first entry is the top copper and zMm (each slab's bottom face) decreases
+	 * along the list; read it backwards for z increasing from 0 at the bottom copper's lower face.
+	 */
 	readonly stack: readonly StackLayer[];
 	readonly dimensions: readonly ArtworkDimension[];
 	readonly metadata: {

@@ -6,7 +6,13 @@ export type GeometryErrorCode =
 	| 'notch-outside-patch'
 	| 'probe-outside-patch'
 	| 'clearance-outside-ground'
-	| 'degenerate-shape';
+	| 'degenerate-shape'
+	/** An array pitch too small for the elements and the clearance between them. */
+	| 'elements-overlap'
+	/** A corporate-feed arm too short for its λg/4 transformer. */
+	| 'network-arm-too-short'
+	/** The corporate feed would pass too close to an element. */
+	| 'feed-network-crowded';
 
 export class GeometryError extends Error {
 	readonly name = 'GeometryError';

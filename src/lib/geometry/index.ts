@@ -11,3 +11,4 @@ export * from './boolean-ops';
 export * from './geometry-error';
 export * from './ring-is-simple';
 export * from './point-in-ring';
+export * from './translate';

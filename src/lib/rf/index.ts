@@ -36,3 +36,16 @@ export {
 	type MeasuredResponseOptions
 } from './measured-response';
 export { proposeRetune, type RetuneProposal, type RetuneOptions, type DimensionChange } from './retune';
+export { resolveLayerStack, combineDielectrics, type DielectricGroup, type ResolvedStack } from './layer-stack';
+export { apertureStart, SLOT_LENGTH_PATCH_SHARE, SLOT_WIDTH_LENGTH_SHARE, STUB_GUIDED_WAVELENGTH_SHARE, type ApertureStart } from './aperture-coupling';
+export {
+	arrayFactorDirectivity,
+	arrayFactorMagnitude,
+	arrayFactorCutDb,
+	arrayPattern,
+	gratingLobeLimitWavelengths,
+	halfPowerBeamwidthDeg,
+	broadsideLineDirectivityApprox,
+	type ArrayGeometry
+} from './array-factor';
+export { PARASITIC_SPACING_WAVELENGTHS, NETWORK_CLEARANCE_LINE_WIDTHS } from './size-extended';

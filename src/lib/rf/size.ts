@@ -10,6 +10,7 @@ import { probeOffsetMm } from './probe-offset';
 import { microstripSection, quarterWaveTransformer } from './quarter-wave-transformer';
 import { rectangularPatch, type RectangularPatchSize } from './rectangular-patch';
 import { groundSize } from './ground-size';
+import { needsExtendedSizing, sizeExtended } from './size-extended';
 import type { SizedDesign, SizedEstimates, SizedFeed, SizedLine, SizedPatch } from './sized-design';
 import { sizingWarnings, type WarningFacts } from './sizing-warnings';
 import { slotConductance, type SlotConductances } from './slot-conductance';
@@ -162,6 +163,10 @@ function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
 			const l = { ...probeLine, lengthMm: sideMm - transformer.lengthMm };
 			return { feed: { kind: 'quarter-wave', transformer, line: l }, feedRoomMm, facts: { feedWidth: { widthMm: Math.max(transformer.widthMm, l.widthMm), edgeMm: core.feedEdgeMm, notch: false } } };
 		}
+		case 'aperture-coupled':
+		case 'proximity-coupled':
+			// sized by sizeExtended, which hands this function an edge-fed stand-in
+			throw new Error(`attachFeed: ${d.feed} is sized by sizeExtended`);
 		case 'probe': {
 			const pad = d.probe.padDiameterMm ?? d.probe.drillDiameterMm + 2 * PROBE_ANNULAR_RING_MM;
 			const common = { drillDiameterMm: d.probe.drillDiameterMm, padDiameterMm: pad, clearanceDiameterMm: d.probe.clearanceDiameterMm };
@@ -186,6 +191,7 @@ function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
 	}
 }
 
+/** Sizes one single-layer element from a validated document (the original path, untouched by stacks and arrays). */
 function sizeValid(d: DesignInput): SizedDesign {
 	const s = d.substrate;
 	const lambda0 = freeSpaceWavelengthMm(d.frequencyHz);
@@ -238,7 +244,7 @@ function toDocumentPaths(error: InputError): InputError {
 export function size(input: unknown): SizedDesign {
 	const d = parseDesignInput(input);
 	try {
-		return sizeValid(d);
+		return needsExtendedSizing(d) ? sizeExtended(d, sizeValid) : sizeValid(d);
 	} catch (error) {
 		if (error instanceof InputError) throw toDocumentPaths(error);
 		throw error;

@@ -10,7 +10,10 @@ export type WarningCode =
 	| 'ground-margin-small'
 	| 'narrow-bandwidth'
 	| 'probe-near-edge'
-	| 'cp-outside-validity';
+	| 'cp-outside-validity'
+	| 'first-pass-coupling'
+	| 'parasitic-spacing'
+	| 'grating-lobes';
 
 export interface SizingWarning {
 	code: WarningCode;
@@ -79,6 +82,8 @@ export type SizedFeed =
 			transformer: SizedLine;
 			line: SizedLine;
 	  }
+	| SizedApertureFeed
+	| SizedProximityFeed
 	| {
 			kind: 'probe';
 			/**
@@ -91,6 +96,87 @@ export type SizedFeed =
 			padDiameterMm: number;
 			clearanceDiameterMm: number;
 	  };
+
+/** The aperture-coupled feed: a microstrip line on the bottom copper crossing a slot in the middle ground. */
+export interface SizedApertureFeed {
+	kind: 'aperture-coupled';
+	/** The line on the lower dielectric, from the board edge to the slot centre. */
+	line: SizedLine;
+	/** Slot length across the line (along x), width along the line (y). First-pass values. */
+	slotLengthMm: number;
+	slotWidthMm: number;
+	/** Open stub past the slot centre (≈ λg/4 of the line). First-pass value. */
+	stubLengthMm: number;
+}
+
+/** The proximity-coupled feed: a line on the inner copper ending under the patch. */
+export interface SizedProximityFeed {
+	kind: 'proximity-coupled';
+	/** The line on the lower dielectric, from the board edge to its open end under the patch. */
+	line: SizedLine;
+	/** How far the line runs under the patch past the patch's lower edge. First-pass value. */
+	overlapMm: number;
+}
+
+export type SizedLayeredFeed = SizedApertureFeed | SizedProximityFeed;
+
+/** One slab of the resolved stack, top to bottom. */
+export type SizedStackEntry =
+	| { kind: 'copper'; thicknessMm: number; conductivitySPerM: number }
+	| { kind: 'dielectric'; heightMm: number; relativePermittivity: number; lossTangent: number; bonding: boolean };
+
+/** The parasitic patch on the top copper, centred over the driven patch. */
+export interface SizedParasitic {
+	patch: SizedPatch;
+	sizeRatio: number;
+	/** Dielectric height between the driven and the parasitic patch. */
+	spacingMm: number;
+	spacingWavelengths: number;
+}
+
+/** Array-factor figures for isotropic elements; `pattern` is ready to plot. */
+export interface SizedArrayFactor {
+	/** Directivity of the array factor alone (isotropic elements), dBi. */
+	arrayFactorDirectivityDbi: number;
+	/** Estimated array gain: element gain + 10·log10(element count). Neglects coupling and feed loss. */
+	gainDbi: number;
+	/** Half-power beamwidth in the scan plane (x–z) and across it; null when the beam has no −3 dB point in view. */
+	halfPowerBeamwidthXzDeg: number | null;
+	halfPowerBeamwidthYzDeg: number | null;
+	/** Normalised array factor, dB (0 at the beam peak), on the angles −90°…90° in 1° steps. */
+	pattern: { anglesDeg: number[]; xzDb: number[]; yzDb: number[] };
+}
+
+/** The corporate feed: T-junctions whose arms start with a λg/4 transformer to 2·Z0 at the junction. */
+export interface SizedCorporateFeed {
+	/** Impedance of every line and of the common port. */
+	line: SizedLine;
+	/** √(Z0 · 2Z0) λg/4 section in each arm next to the junction. */
+	transformer: SizedLine;
+	/** Impedance each arm presents at the junction (two in parallel make Z0). */
+	branchImpedanceOhm: number;
+	/** Centre-to-centre step between the levels of the tree. */
+	levelPitchMm: number;
+	/** Clearance kept between the network and other copper. */
+	clearanceMm: number;
+	/** Levels of T-junctions from the elements to the port. */
+	junctionLevels: number;
+}
+
+export interface SizedArray {
+	columns: number;
+	rows: number;
+	elementCount: number;
+	spacingXMm: number;
+	spacingYMm: number;
+	spacingXWavelengths: number;
+	spacingYWavelengths: number;
+	scanAngleDeg: number;
+	/** Largest spacing free of grating lobes over the scan range: λ0/(1 + |sin θ0|), in λ0. */
+	gratingLobeLimitWavelengths: number;
+	network: SizedCorporateFeed;
+	factor: SizedArrayFactor;
+}
 
 export interface SizedEstimates {
 	/** Fractional bandwidth for VSWR ≤ 2 (0.02 = 2 %). Estimate. */
@@ -132,4 +218,10 @@ export interface SizedDesign {
 	copperThicknessMm: number;
 	estimates: SizedEstimates;
 	warnings: SizingWarning[];
+	/** The resolved stack, top to bottom: present when the document gives a stack (absent: copper / substrate / copper). */
+	layerStack?: SizedStackEntry[];
+	/** Present for a stacked parasitic patch. */
+	parasitic?: SizedParasitic;
+	/** Present for an array; the element is everything above, and `ground` is one element's ground. */
+	array?: SizedArray;
 }

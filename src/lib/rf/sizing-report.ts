@@ -58,6 +58,12 @@ export function sizingReport(sized: SizedDesign): SizingReport {
 		case 'quarter-wave':
 			Object.assign(out, line('transformer', f.transformer), line('feedLine', f.line));
 			break;
+		case 'aperture-coupled':
+			Object.assign(out, line('feedLine', f.line), { slotLengthMm: f.slotLengthMm, slotWidthMm: f.slotWidthMm, stubLengthMm: f.stubLengthMm });
+			break;
+		case 'proximity-coupled':
+			Object.assign(out, line('feedLine', f.line), { overlapMm: f.overlapMm });
+			break;
 		case 'probe':
 			Object.assign(out, {
 				probeOffsetMm: Math.hypot(f.offsetXMm, f.offsetYMm),
@@ -84,5 +90,9 @@ export function sizingReport(sized: SizedDesign): SizingReport {
 		},
 		warnings: sized.warnings
 	});
+	// present only for layered designs and arrays, so single-layer reports keep their keys
+	if (sized.layerStack) out.layerStack = sized.layerStack;
+	if (sized.parasitic) out.parasitic = sized.parasitic;
+	if (sized.array) out.array = sized.array;
 	return out as SizingReport;
 }

@@ -6,10 +6,19 @@ const SPEED_OF_LIGHT_M_PER_S = 299_792_458;
 
 export const patchShapes = ['rectangular', 'circular', 'truncated-corner', 'nearly-square'] as const;
 export const feedKinds = ['inset', 'probe', 'edge', 'quarter-wave'] as const;
+/**
+ * Feeds that need a stack of three copper layers: aperture-coupled (patch on top, coupling slot in
+ * the middle ground, microstrip feed on the bottom) and proximity-coupled (feed line between the two
+ * dielectrics ending under the patch, ground at the bottom).
+ */
+export const layeredFeedKinds = ['aperture-coupled', 'proximity-coupled'] as const;
+/** Every feed the document accepts: the single-layer ones, then the layered ones. */
+export const allFeedKinds = [...feedKinds, ...layeredFeedKinds] as const;
 export const handednesses = ['rhcp', 'lhcp'] as const;
 
 export type PatchShape = (typeof patchShapes)[number];
-export type FeedKind = (typeof feedKinds)[number];
+export type FeedKind = (typeof allFeedKinds)[number];
+export type LayeredFeedKind = (typeof layeredFeedKinds)[number];
 export type Handedness = (typeof handednesses)[number];
 
 /**
@@ -22,6 +31,20 @@ export const allowedFeeds: Record<PatchShape, readonly FeedKind[]> = {
 	circular: ['probe', 'edge', 'quarter-wave'],
 	'nearly-square': ['probe']
 };
+
+/** Layered feeds each shape supports (the slot and the line under the patch are built for the rectangular patch). */
+export const allowedLayeredFeeds: Record<PatchShape, readonly FeedKind[]> = {
+	rectangular: layeredFeedKinds,
+	'truncated-corner': [],
+	circular: [],
+	'nearly-square': []
+};
+
+/** Feeds whose line is microstrip on one copper layer: what a corporate array feed and a stacked parasitic patch can be fed by. */
+export const microstripFeedKinds: readonly FeedKind[] = ['inset', 'edge', 'quarter-wave', 'aperture-coupled', 'proximity-coupled'];
+
+/** Largest element count along one array axis. */
+export const MAX_ARRAY_AXIS_COUNT = 64;
 
 /** The feed to choose when only a shape is given (the first the shape supports, inset for the rest). */
 export function defaultFeedFor(shape: PatchShape): FeedKind {
@@ -70,14 +93,77 @@ export const probeOptionsSchema = z.strictObject({
 	clearanceDiameterMm: bounded(0.2, 30).default(4.1)
 });
 
-export const designInputSchema = z
-	.strictObject({
+/** One copper layer of an explicit stack (top to bottom). */
+export const stackCopperSchema = z.strictObject({
+	kind: z.literal('copper'),
+	/** Finished copper thickness; default substrate.copperThicknessUm. */
+	thicknessUm: bounded(1, 210).optional()
+});
+
+/** One dielectric layer of an explicit stack: a core, or a bonding film (prepreg) between cores. */
+export const stackDielectricSchema = z.strictObject({
+	kind: z.literal('dielectric'),
+	relativePermittivity: bounded(1, 30, { exclusiveMin: true }),
+	lossTangent: bounded(0, 1, { exclusiveMax: true }).default(0.0009),
+	heightMm: bounded(0, 100, { exclusiveMin: true }),
+	/** A bonding film (prepreg, adhesive) rather than a core; drawn and listed the same, named apart in the notes. */
+	bonding: z.boolean().default(false)
+});
+
+/**
+ * An ordered stack, top to bottom: copper, one or more dielectrics (cores and bonding films),
+ * copper, … Starts and ends with copper; two coppers are never adjacent. Dielectrics between the
+ * same two coppers act as one layer of thickness Σh and series permittivity Σh / Σ(h/εr).
+ */
+export const layerStackSchema = z
+	.array(z.discriminatedUnion('kind', [stackCopperSchema, stackDielectricSchema]))
+	.min(3, { error: 'needs at least copper, dielectric, copper; allowed length [3, 15]' })
+	.max(15, { error: 'at most 15 layers; allowed length [3, 15]' });
+
+/** Starting values of the aperture-coupled feed; each defaults to the published first-pass rule (see rf/aperture-coupling.ts). */
+export const slotOptionsSchema = z.strictObject({
+	/** Slot length across the feed line (parallel to the radiating edges). */
+	lengthMm: bounded(0.1, 1000).optional(),
+	/** Slot width along the feed line. */
+	widthMm: bounded(0.01, 100).optional(),
+	/** Open stub of the feed line past the slot centre. */
+	stubLengthMm: bounded(0, 1000).optional()
+});
+
+export const proximityOptionsSchema = z.strictObject({
+	/** How far the feed line runs under the patch past its edge; default half the patch length (to the centre). */
+	overlapMm: bounded(0, 1000).optional()
+});
+
+export const parasiticOptionsSchema = z.strictObject({
+	/** Parasitic patch size over the driven patch's, both sides scaled alike. */
+	sizeRatio: bounded(0.8, 1.3).default(1.07)
+});
+
+const axisCount = bounded(1, MAX_ARRAY_AXIS_COUNT).refine(Number.isInteger, { error: `must be a whole number; allowed range [1, ${MAX_ARRAY_AXIS_COUNT}]` });
+
+export const arrayOptionsSchema = z.strictObject({
+	/** Elements along x (the patch width direction). A power of two for the corporate feed. */
+	columns: axisCount,
+	/** Elements along y (the feed direction). A power of two for the corporate feed. */
+	rows: axisCount.default(1),
+	/** Element pitch along x in free-space wavelengths λ0. */
+	spacingXWavelengths: bounded(0.3, 2).default(0.7),
+	/** Element pitch along y in free-space wavelengths λ0. */
+	spacingYWavelengths: bounded(0.3, 2).default(0.7),
+	/** Largest scan angle from broadside the array must reach (any plane); the pattern is steered to it in the x–z plane. */
+	scanAngleDeg: bounded(0, 80).default(0)
+});
+
+const isPowerOfTwo = (n: number) => Number.isInteger(n) && n >= 1 && (n & (n - 1)) === 0;
+
+const designInputObject = z.strictObject({
 		schemaVersion: z.literal(1).default(1),
 		name: z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).default('Untitled patch'),
 		/** Target resonant frequency f0. */
 		frequencyHz: bounded(100e6, 100e9),
 		shape: z.enum(patchShapes).default('rectangular'),
-		feed: z.enum(feedKinds).default('inset'),
+		feed: z.enum(allFeedKinds).default('inset'),
 		substrate: substrateSchema,
 		/** Input resistance the feed point should present (usually the line's Z0). */
 		targetImpedanceOhm: bounded(10, 200).default(50),
@@ -92,9 +178,20 @@ export const designInputSchema = z
 		/** Sense of circular polarisation for truncated-corner and nearly-square patches. */
 		handedness: z.enum(handednesses).default('rhcp'),
 		/** Add solder-mask layers to the exports. */
-		solderMask: z.boolean().default(false)
-	})
-	.superRefine((d, ctx) => {
+		solderMask: z.boolean().default(false),
+		/** Explicit stack, top to bottom; absent: copper / substrate / copper. With a stack, its dielectrics' εr, tanδ and h are used instead of the substrate's. */
+		stack: layerStackSchema.optional(),
+		/** Aperture-coupled starting sizes (feed "aperture-coupled"). */
+		slot: slotOptionsSchema.optional(),
+		/** Proximity-coupled starting overlap (feed "proximity-coupled"). */
+		proximity: proximityOptionsSchema.optional(),
+		/** A parasitic patch on the top copper over the driven patch (needs a three-copper stack). */
+		parasitic: parasiticOptionsSchema.optional(),
+		/** Repeat the element as a 1×N or N×M array with a corporate feed. */
+		array: arrayOptionsSchema.optional()
+	});
+
+export const designInputSchema = designInputObject.superRefine((d, ctx) => {
 		const wavelengthMm = (SPEED_OF_LIGHT_M_PER_S / d.frequencyHz) * 1000;
 		if (d.substrate.heightMm >= wavelengthMm / 4) {
 			ctx.addIssue({
@@ -107,7 +204,7 @@ export const designInputSchema = z
 		if (d.patchWidthMm !== undefined && d.shape !== 'rectangular') {
 			ctx.addIssue({ code: 'custom', path: ['patchWidthMm'], input: d.patchWidthMm, message: 'only a rectangular patch takes a fixed width' });
 		}
-		const feedsForShape = allowedFeeds[d.shape];
+		const feedsForShape = [...allowedFeeds[d.shape], ...allowedLayeredFeeds[d.shape]];
 		if (!feedsForShape.includes(d.feed)) {
 			ctx.addIssue({
 				code: 'custom',
@@ -116,6 +213,7 @@ export const designInputSchema = z
 				message: `a ${d.shape} patch takes one of: ${feedsForShape.join(', ')}`
 			});
 		}
+		layeredRules(d, ctx);
 		if (d.probe.clearanceDiameterMm <= d.probe.drillDiameterMm) {
 			ctx.addIssue({
 				code: 'custom',
@@ -130,3 +228,44 @@ export const designInputSchema = z
 export type DesignInputDocument = z.input<typeof designInputSchema>;
 /** The document after validation: every default filled in. */
 export type DesignInput = z.output<typeof designInputSchema>;
+
+type ParsedDocument = z.output<typeof designInputObject>;
+type RefineContext = z.core.$RefinementCtx<ParsedDocument>;
+
+/** How many copper layers a document's feed and parasitic patch need. */
+export function requiredCopperCount(d: Pick<ParsedDocument, 'feed' | 'parasitic'>): number {
+	return (layeredFeedKinds as readonly string[]).includes(d.feed) || d.parasitic ? 3 : 2;
+}
+
+/** Rules of the stack, the layered feeds, the parasitic patch and the array. */
+function layeredRules(d: ParsedDocument, ctx: RefineContext): void {
+	const issue = (path: (string | number)[], input: unknown, message: string) => ctx.addIssue({ code: 'custom', path, input, message });
+	const need = requiredCopperCount(d);
+	if (d.stack) {
+		const s = d.stack;
+		if (s[0].kind !== 'copper') issue(['stack', 0, 'kind'], s[0].kind, 'the stack must start with copper (top to bottom)');
+		if (s[s.length - 1].kind !== 'copper') issue(['stack', s.length - 1, 'kind'], s[s.length - 1].kind, 'the stack must end with copper (top to bottom)');
+		s.forEach((layer, i) => {
+			if (i > 0 && layer.kind === 'copper' && s[i - 1].kind === 'copper') issue(['stack', i], layer.kind, 'two copper layers need a dielectric between them');
+		});
+		const coppers = s.filter((l) => l.kind === 'copper').length;
+		if (coppers !== need) issue(['stack'], d.stack, `a ${d.feed} feed${d.parasitic ? ' with a parasitic patch' : ''} needs exactly ${need} copper layers; this stack has ${coppers}`);
+	} else if (need === 3) {
+		issue(['stack'], undefined, `required: a ${d.feed} feed${d.parasitic ? ' with a parasitic patch' : ''} needs a stack of 3 copper layers (copper, dielectric, copper, dielectric, copper)`);
+	}
+	if (d.slot && d.feed !== 'aperture-coupled') issue(['slot'], d.slot, 'only an aperture-coupled feed takes slot options');
+	if (d.proximity && d.feed !== 'proximity-coupled') issue(['proximity'], d.proximity, 'only a proximity-coupled feed takes proximity options');
+	if (d.parasitic && !['inset', 'edge', 'quarter-wave'].includes(d.feed)) {
+		issue(['parasitic'], d.parasitic, 'a parasitic patch takes a driven patch fed by microstrip on the inner copper: feed inset, edge or quarter-wave');
+	}
+	if (d.array) {
+		if (!microstripFeedKinds.includes(d.feed)) issue(['feed'], d.feed, `an array's corporate feed is microstrip; choose one of: ${microstripFeedKinds.join(', ')}`);
+		for (const axis of ['columns', 'rows'] as const) {
+			const n = d.array[axis];
+			if (!isPowerOfTwo(n)) {
+				const lower = 2 ** Math.floor(Math.log2(n));
+				issue(['array', axis], n, `must be a power of two (1, 2, 4, … ${MAX_ARRAY_AXIS_COUNT}) for a corporate feed of equal T-junction splits; nearest: ${lower} or ${lower * 2}`);
+			}
+		}
+	}
+}

@@ -8,7 +8,7 @@ export const dxfLayerName = (layerId: string) => layerId.toUpperCase();
 export const DXF_PLATED_DRILL_LAYER = 'DRILL-PLATED';
 export const DXF_NON_PLATED_DRILL_LAYER = 'DRILL-NON-PLATED';
 
-const COLORS: Record<string, number> = { 'copper-top': 1, 'copper-bottom': 5, profile: 7, 'mask-top': 3, 'mask-bottom': 4 };
+const COLORS: Record<string, number> = { 'copper-top': 1, 'copper-bottom': 5, profile: 7, 'mask-top': 3, 'mask-bottom': 4, 'copper-inner-1': 6 };
 
 /** A contour of two arcs about one centre, each half a turn, is a whole circle. */
 function asCircle(c: Contour): { center: readonly [number, number]; radiusMm: number } | null {

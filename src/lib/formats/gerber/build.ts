@@ -27,6 +27,9 @@ function apertureFunction(shape: ArtworkShape, layer: ArtworkLayer): string | nu
 			return 'AntiPad';
 		case 'profile':
 			return 'Profile';
+		case 'coupling-slot':
+			// a clear cut in the ground plane: no copper, so no conductor function
+			return null;
 		default:
 			return 'Conductor';
 	}

@@ -10,6 +10,7 @@ export const SVG_MARGINS_MM = { left: 16, right: 14, top: 12, bottom: 40 } as co
 const STYLE: Record<string, { fill: string; opacity: string }> = {
 	'copper-top': { fill: '#b87333', opacity: '1' },
 	'copper-bottom': { fill: '#5a7fa8', opacity: '0.35' },
+	'copper-inner-1': { fill: '#8a5a9e', opacity: '0.55' },
 	'mask-top': { fill: '#2e8b57', opacity: '0.3' },
 	'mask-bottom': { fill: '#2e8b57', opacity: '0.3' }
 };

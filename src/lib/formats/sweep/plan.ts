@@ -20,7 +20,15 @@ export const sweepableFields = [
 	'inset.notchGapMm',
 	'probe.drillDiameterMm',
 	'probe.padDiameterMm',
-	'probe.clearanceDiameterMm'
+	'probe.clearanceDiameterMm',
+	'slot.lengthMm',
+	'slot.widthMm',
+	'slot.stubLengthMm',
+	'proximity.overlapMm',
+	'parasitic.sizeRatio',
+	'array.spacingXWavelengths',
+	'array.spacingYWavelengths',
+	'array.scanAngleDeg'
 ] as const;
 export type SweepableField = (typeof sweepableFields)[number];
 

@@ -62,7 +62,12 @@ export const sweepJsonSchema = {
 						board: { type: 'object', required: ['widthMm', 'lengthMm'], additionalProperties: false, properties: { widthMm: mm, lengthMm: mm } },
 						layers: { type: 'array', minItems: 1, items: { $ref: '#/$defs/layer' } },
 						drills: { type: 'array', items: { $ref: '#/$defs/drill' } },
-						stack: { type: 'array', minItems: 1, items: { $ref: '#/$defs/stackLayer' } }
+						stack: {
+							type: 'array',
+							minItems: 1,
+							description: 'Every copper and dielectric layer, top to bottom: the first entry is the top copper and zMm (each slab\'s bottom face, 0 at the bottom copper\'s lower face) decreases along the list, so read backwards z increases; each slab starts where the one below it ends.',
+							items: { $ref: '#/$defs/stackLayer' }
+						}
 					}
 				},
 				{
@@ -94,7 +99,7 @@ export const sweepJsonSchema = {
 				freeSpaceWavelengthMm: { type: 'number', exclusiveMinimum: 0 },
 				effectivePermittivity: { type: 'number', minimum: 1 },
 				patch: { type: 'object', required: ['kind'], properties: { kind: { enum: ['rectangular', 'circular', 'truncated-corner', 'nearly-square'] } } },
-				feed: { type: 'object', required: ['kind'], properties: { kind: { enum: ['edge', 'inset', 'quarter-wave', 'probe'] } } },
+				feed: { type: 'object', required: ['kind'], properties: { kind: { enum: ['edge', 'inset', 'quarter-wave', 'probe', 'aperture-coupled', 'proximity-coupled'] } } },
 				ground: { type: 'object', required: ['widthMm', 'lengthMm', 'marginMm'], properties: { widthMm: mm, lengthMm: mm, marginMm: mm } },
 				estimates: { type: 'object', additionalProperties: num }
 			}
@@ -123,7 +128,9 @@ export const sweepJsonSchema = {
 			additionalProperties: false,
 			properties: {
 				id: { type: 'string' },
-				role: { enum: ['patch', 'feed-line', 'transformer', 'notch', 'probe-pad', 'ground', 'clearance', 'profile', 'mask-opening'] },
+				role: {
+					enum: ['patch', 'feed-line', 'transformer', 'notch', 'probe-pad', 'ground', 'clearance', 'profile', 'mask-opening', 'parasitic-patch', 'coupling-slot', 'tuning-stub', 'feed-network', 'network-transformer']
+				},
 				polarity: { enum: ['dark', 'clear'] },
 				geometry: {
 					oneOf: [
@@ -194,7 +201,15 @@ export const sweepJsonSchema = {
 					type: 'object',
 					required: ['kind', 'id', 'zMm', 'thicknessMm', 'relativePermittivity', 'lossTangent'],
 					additionalProperties: false,
-					properties: { kind: { const: 'dielectric' }, id: { type: 'string' }, zMm: mm, thicknessMm: { type: 'number', exclusiveMinimum: 0 }, relativePermittivity: { type: 'number', minimum: 1 }, lossTangent: { type: 'number', minimum: 0 } }
+					properties: {
+						kind: { const: 'dielectric' },
+						id: { type: 'string' },
+						zMm: mm,
+						thicknessMm: { type: 'number', exclusiveMinimum: 0 },
+						relativePermittivity: { type: 'number', minimum: 1 },
+						lossTangent: { type: 'number', minimum: 0 },
+						bonding: { type: 'boolean', description: 'true for a bonding film (prepreg) between cores' }
+					}
 				}
 			]
 		}
