@@ -5,7 +5,7 @@ import { size } from '../../rf';
 import { toDxf } from '../dxf';
 import { toExcellon } from '../excellon';
 import type { ExportMeta } from '../export-meta';
-import { buildFabNotes } from '../fab-notes';
+import { buildFabNotes, type FabNotesWaiver } from '../fab-notes';
 import { toGerber } from '../gerber';
 import { buildManifest, serializeManifest, type ExportFile } from '../manifest';
 import { toSvg, type SvgWindow } from '../svg';
@@ -16,6 +16,8 @@ import { exportFileName } from './file-names';
 export interface BuildFilesEnvironment {
 	/** Needed for 'svg': svgdom's createSVGWindow() in Node, `window` in a browser. */
 	readonly svgWindow?: SvgWindow;
+	/** Waived design-rule violations, printed in the fab notes' cautions (none: the notes are as before). */
+	readonly waiver?: FabNotesWaiver;
 }
 
 const encoder = new TextEncoder();
@@ -44,7 +46,7 @@ export function buildFiles(sized: SizedDesign, meta: ExportMeta, formats: readon
 	if (want('notes')) {
 		const notesName = exportFileName(meta, 'fab-notes', 'txt');
 		const names = [...files.map((f) => f.name), notesName, manifestName];
-		files.push(text(notesName, buildFabNotes(artwork, meta, { fileNames: names, warnings: sized.warnings.map((w) => w.message), solderMask: sized.input.solderMask })));
+		files.push(text(notesName, buildFabNotes(artwork, meta, { fileNames: names, warnings: sized.warnings.map((w) => w.message), solderMask: sized.input.solderMask, ...(env.waiver ? { waiver: env.waiver } : {}) })));
 	}
 	files.push(text(manifestName, serializeManifest(buildManifest(files, meta))));
 	return files;

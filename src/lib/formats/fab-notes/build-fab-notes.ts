@@ -15,6 +15,22 @@ export interface FabNotesExtras {
 	/** Sizing and rule warnings to repeat as cautions. */
 	readonly warnings: readonly string[];
 	readonly solderMask: boolean;
+	/** Design-rule violations the team waived for this export; absent for a clean design (the notes are then unchanged). */
+	readonly waiver?: FabNotesWaiver;
+}
+
+/** A recorded waiver: who decided is in the export record; the fab reads why, and what was waived. */
+export interface FabNotesWaiver {
+	readonly reason: string;
+	/** Name of the fab profile the artwork was checked against. */
+	readonly profileName: string;
+	/** One sentence per waived violation. */
+	readonly violations: readonly string[];
+}
+
+function waiverCautions(w: FabNotesWaiver): string[] {
+	const count = `${w.violations.length} design-rule violation${w.violations.length === 1 ? '' : 's'}`;
+	return [`DESIGN-RULE WAIVER: ${count} against the "${w.profileName}" profile accepted by the design team. Reason: ${w.reason.replace(/\s+/g, ' ').trim()}`, ...w.violations.map((v) => `Waived: ${v}`)];
 }
 
 const n = (v: number, digits = 3) => String(Number(v.toFixed(digits)));
@@ -60,7 +76,8 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 		'Do not scale, mirror or rotate the artwork; top copper is viewed from the top.',
 		'Hold etched feature tolerance at ±0.025 mm or better on patch and feed edges; report over-etch.',
 		'Do not add solder mask, silkscreen or copper over the patch and feed unless the mask layers say so.',
-		...extras.warnings
+		...extras.warnings,
+		...(extras.waiver ? waiverCautions(extras.waiver) : [])
 	]
 		.map((c) => `   - ${c}`)
 		.join('\n');

@@ -3,6 +3,7 @@ import type { ApiTokenTable } from './api-token.table';
 import type { AppUserTable } from './app-user.table';
 import type { DesignTable, RevisionTable } from './design.table';
 import type { ExportRecordTable } from './export-record.table';
+import type { FabProfileTable } from './fab-profile.table';
 import type { LaminateTable } from './laminate.table';
 import type { MeasurementTable } from './measurement.table';
 import type { PasswordResetTable } from './password-reset.table';
@@ -25,4 +26,5 @@ export interface Database {
 	api_token: ApiTokenTable;
 	sweep_plan: SweepPlanTable;
 	measurement: MeasurementTable;
+	fab_profile: FabProfileTable;
 }

@@ -3,6 +3,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Kysely } from 'kysely';
 import { InputError } from '../../schemas';
+import type { FabProfile } from '../../schemas/fab-profile';
 import type { Database } from '../db/database';
 import * as designQueries from '../db/design.queries';
 import { revisionLabel } from './revision-label';
@@ -18,6 +19,8 @@ export interface SaveRevisionOptions {
 	note?: string;
 	/** Set by a retune: the measurement this revision was retuned from (stored at insert; revisions never change). */
 	retunedFromMeasurementId?: string;
+	/** The fab profile values this revision is checked against (stored at insert; absent: the database's built-in default). */
+	fabProfile?: FabProfile;
 }
 
 export interface SavedRevision {
@@ -49,7 +52,8 @@ export async function saveRevision(db: Kysely<Database>, opts: SaveRevisionOptio
 			results: JSON.stringify(sized),
 			note,
 			created_by: opts.userId,
-			...(opts.retunedFromMeasurementId ? { retuned_from_measurement_id: opts.retunedFromMeasurementId } : {})
+			...(opts.retunedFromMeasurementId ? { retuned_from_measurement_id: opts.retunedFromMeasurementId } : {}),
+			...(opts.fabProfile ? { fab_profile: JSON.stringify(opts.fabProfile) } : {})
 		});
 		return { id, label, parentLabel: parent.label };
 	});

@@ -11,11 +11,15 @@ import {
 	type ExportFile,
 	type ExportFormat,
 	type ExportMeta,
+	type FabNotesWaiver,
 	type SvgWindow
 } from '$lib/formats';
+import { buildArtwork } from '$lib/artwork';
 import type { SizedDesign } from '$lib/rf';
 import type { ExportKind } from '$lib/schemas/api';
+import type { ExportDependencies } from './export-dependencies';
 import type { ExportTarget } from './export-target';
+import { assertReadBack, readBackFiles } from './read-back-gate';
 
 export interface BuiltExport {
 	kind: ExportKind;
@@ -57,13 +61,29 @@ function isManifest(meta: ExportMeta, file: ExportFile): boolean {
 	return file.name === exportFileName(meta, 'manifest', 'json');
 }
 
-export async function buildExport(target: ExportTarget, kind: ExportKind): Promise<BuiltExport> {
+/** Kinds whose delivery holds Gerber or drill files: these are read back before they are offered. */
+const fabKinds: readonly ExportKind[] = ['bundle', 'gerber', 'drill'];
+
+export interface BuildExportOptions {
+	/** Waived design-rule violations, printed in the fab notes. */
+	waiver?: FabNotesWaiver;
+	deps?: ExportDependencies;
+}
+
+export async function buildExport(target: ExportTarget, kind: ExportKind, opts: BuildExportOptions = {}): Promise<BuiltExport> {
 	const meta = exportMetaOf(target);
 	// The sized design stored with the revision: what the revision is, whatever later engines compute.
 	const sized = target.revision.results as SizedDesign;
 	const formats: readonly ExportFormat[] = kind === 'bundle' ? exportFormats : [kind];
-	const env = formats.includes('svg') ? { svgWindow: createSVGWindow() as unknown as SvgWindow } : {};
-	const files = buildFiles(sized, meta, formats, env);
+	const env = { ...(formats.includes('svg') ? { svgWindow: createSVGWindow() as unknown as SvgWindow } : {}), ...(opts.waiver ? { waiver: opts.waiver } : {}) };
+	const written = buildFiles(sized, meta, formats, env);
+	const files = opts.deps?.corruptFiles ? opts.deps.corruptFiles(written) : written;
+	if (fabKinds.includes(kind)) {
+		// The Gerber + drill set this delivery belongs to, so that a Gerber-only download is judged with its holes.
+		const companions = kind === 'bundle' ? [] : buildFiles(sized, meta, ['gerber', 'drill']);
+		const context = { designId: target.design.id, revisionId: target.revision.id, revision: target.revision.label, kind };
+		assertReadBack(buildArtwork(sized), readBackFiles(files, companions), context, opts.deps?.logError);
+	}
 
 	if (kind === 'bundle') {
 		return { kind, fileName: bundleFileName(meta), contentType: contentTypes.zip, body: await buildBundle(files, meta.revisionDate), files };

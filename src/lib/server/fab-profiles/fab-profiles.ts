@@ -1,0 +1,67 @@
+// A team's fab profiles: the built-in one first (every team has it, no row), then the team's own, each validated on the way in and out.
+import { randomUUID } from 'node:crypto';
+import type { Kysely } from 'kysely';
+import { InputError } from '../../schemas/input-error';
+import { parseFabProfile, STANDARD_QUICK_TURN_PROFILE, type FabProfile } from '../../schemas/fab-profile';
+import type { Database } from '../db/database';
+import * as fabProfileQueries from '../db/fab-profile.queries';
+
+/** The id the built-in profile answers to in forms and lists (never a row id: rows use UUIDs). */
+export const BUILT_IN_FAB_PROFILE_ID = 'built-in';
+
+export interface TeamFabProfile {
+	id: string;
+	profile: FabProfile;
+	/** True for the profile that comes with the product (not stored per team, not editable). */
+	builtIn: boolean;
+}
+
+export const builtInFabProfile: TeamFabProfile = { id: BUILT_IN_FAB_PROFILE_ID, profile: STANDARD_QUICK_TURN_PROFILE, builtIn: true };
+
+export async function listFabProfiles(db: Kysely<Database>, teamId: string): Promise<TeamFabProfile[]> {
+	const rows = await fabProfileQueries.listFabProfilesByTeam(db, teamId);
+	return [builtInFabProfile, ...rows.map((r) => ({ id: r.id, profile: parseFabProfile(r.properties), builtIn: false }))];
+}
+
+const nameTaken = (name: string) => new InputError([{ path: 'name', value: name, message: 'a fab profile with this name is already in the team’s list' }]);
+
+/** Adds a profile to a team; bad values or a name already taken are an InputError (nothing written). */
+export async function addFabProfile(db: Kysely<Database>, opts: { teamId: string; userId: string; raw: unknown }): Promise<TeamFabProfile> {
+	const profile = parseFabProfile(opts.raw);
+	if (profile.name === STANDARD_QUICK_TURN_PROFILE.name || (await fabProfileQueries.findFabProfileByTeamAndName(db, opts.teamId, profile.name))) throw nameTaken(profile.name);
+	const id = randomUUID();
+	try {
+		await fabProfileQueries.insertFabProfile(db, { id, team_id: opts.teamId, name: profile.name, properties: JSON.stringify(profile), created_by: opts.userId });
+	} catch (err) {
+		// Two people adding one name at once: the unique constraint decides.
+		if ((err as { code?: string }).code === '23505') throw nameTaken(profile.name);
+		throw err;
+	}
+	return { id, profile, builtIn: false };
+}
+
+/** The values of the profile a form picked (the built-in, or one of the team's); an unknown id is an InputError. */
+export async function resolveFabProfileChoice(db: Kysely<Database>, teamId: string, id: string | null | undefined): Promise<FabProfile> {
+	if (!id || id === BUILT_IN_FAB_PROFILE_ID) return STANDARD_QUICK_TURN_PROFILE;
+	const row = await fabProfileQueries.findFabProfileByTeamAndId(db, teamId, id);
+	if (!row) throw new InputError([{ path: 'fabProfileId', value: id, message: 'must be the built-in profile or one of the team’s fab profiles' }]);
+	return parseFabProfile(row.properties);
+}
+
+export interface RecordedFabProfile {
+	profile: FabProfile;
+	/** False for revisions older than the gate: nothing was recorded, the built-in is used. */
+	recorded: boolean;
+}
+
+/** The profile a revision recorded when it was saved (the built-in for older revisions). */
+export async function revisionFabProfile(db: Kysely<Database>, revisionId: string): Promise<RecordedFabProfile> {
+	const stored = await fabProfileQueries.findFabProfileByRevisionId(db, revisionId);
+	return stored ? { profile: parseFabProfile(stored), recorded: true } : { profile: STANDARD_QUICK_TURN_PROFILE, recorded: false };
+}
+
+/** Which of the team's profiles has these values (to preselect the parent's pick in a form); the built-in when none does. */
+export function matchingFabProfileId(profiles: readonly TeamFabProfile[], profile: FabProfile): string {
+	const same = (a: FabProfile, b: FabProfile) => JSON.stringify(Object.entries(a).sort()) === JSON.stringify(Object.entries(b).sort());
+	return profiles.find((p) => same(p.profile, profile))?.id ?? BUILT_IN_FAB_PROFILE_ID;
+}

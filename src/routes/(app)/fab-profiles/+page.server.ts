@@ -1,0 +1,38 @@
+// The current team's fab profiles: the built-in one and the team's own; editors add entries.
+import { fail } from '@sveltejs/kit';
+import { authorize, can } from '$lib/server/access';
+import { getDb } from '$lib/server/db';
+import { requireTeamRole, requireUser } from '$lib/server/designs/design-access';
+import { addFabProfile, listFabProfiles } from '$lib/server/fab-profiles';
+import { currentTeam } from '$lib/server/teams/current-team';
+import { InputError } from '$lib/schemas';
+import type { Actions, PageServerLoad } from './$types';
+
+const lengthKeys = ['minTraceWidthMm', 'minSpacingMm', 'minDrillMm', 'minAnnularRingMm', 'copperToEdgeMm', 'minSlotWidthMm', 'etchToleranceMm', 'platedDrillToleranceMm', 'nonPlatedDrillToleranceMm'] as const;
+
+export const load: PageServerLoad = async (event) => {
+	const user = requireUser(event);
+	const { current } = await currentTeam(user.id, event.cookies);
+	if (!current) return { team: null, profiles: [], canAdd: false };
+	authorize(current.role, 'team.read');
+	// Adding to the team's fab list is library work like adding a laminate: the same right.
+	return { team: current, profiles: await listFabProfiles(getDb(), current.id), canAdd: can(current.role, 'laminate.write') };
+};
+
+export const actions: Actions = {
+	add: async (event) => {
+		const data = await event.request.formData();
+		const teamId = String(data.get('teamId') ?? '');
+		const { user } = await requireTeamRole(event, teamId, 'laminate.write');
+		const values = Object.fromEntries(['name', ...lengthKeys].map((k) => [k, String(data.get(k) ?? '')]));
+		const num = (t: string) => (t.trim() === '' ? undefined : Number(t));
+		const raw = { name: values.name, ...Object.fromEntries(lengthKeys.map((k) => [k, num(values[k])])) };
+		try {
+			const added = await addFabProfile(getDb(), { teamId, userId: user.id, raw });
+			return { added: added.profile.name };
+		} catch (err) {
+			if (err instanceof InputError) return fail(400, { values, issues: err.issues.map((i) => ({ path: i.path, message: i.message })) });
+			throw err;
+		}
+	}
+};
