@@ -1,27 +1,56 @@
 // `export design.json --out DIR|FILE.zip`: the shared export pipeline, with the CLI doing only reading and writing.
+// A design that breaks its fab profile is refused (exit 3, the violations as JSON) unless --waive gives a reason;
+// every Gerber and drill file is read back and compared with the artwork before anything is written.
+import { randomUUID } from 'node:crypto';
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { createSVGWindow } from 'svgdom';
-import { buildBundle, buildFilesFromInput, exportFormats, parseExportFormats } from '../../lib/formats/bundle';
+import { buildArtwork } from '../../lib/artwork';
+import { checkArtwork } from '../../lib/drc';
+import { buildBundle, buildFiles, exportFormats, parseExportFormats } from '../../lib/formats/bundle';
 import { createExportMeta } from '../../lib/formats/export-meta';
+import type { ExportFile } from '../../lib/formats/manifest';
+import { checkReadBack, isFabFileName } from '../../lib/formats/readback';
 import type { SvgWindow } from '../../lib/formats/svg';
 import { GeometryError } from '../../lib/geometry';
+import { size } from '../../lib/rf';
 import { InputError, formatIssue, parseDesignInput } from '../../lib/schemas';
+import { parseFabProfile, STANDARD_QUICK_TURN_PROFILE } from '../../lib/schemas/fab-profile';
 
 export const summary = 'write Gerber, drill, DXF, SVG, sweep JSON and fab notes for a design, or one zip of them';
 
+/** Same bounds as a waiver recorded by the web app (src/lib/server/exports/waiver-reason.ts). */
+const WAIVER_MIN_CHARS = 5;
+const WAIVER_MAX_CHARS = 500;
+
 export const help = `Usage: npm run cli -- export design.json --out DIR|FILE.zip [--formats LIST] [--revision LABEL] [--date YYYY-MM-DD]
+                            [--profile profile.json] [--waive "reason"]
 
 Sizes the design and writes its files into DIR, or into one zip when --out ends in .zip.
 Every export includes a manifest (names, sizes, SHA-256). The same input, revision and date give
 the same bytes every time.
 
+Before anything is written the artwork is checked against a fab profile (as \`check\` does): a design
+that breaks a rule is refused with the violations as JSON on stdout, unless --waive says why they
+are acceptable; the reason and every waived violation are then printed in the fab notes. Every
+Gerber and drill file is also read back (@tracespace/parser) and compared with the artwork.
+
   --out PATH        a folder (created if missing) or a .zip file
   --formats LIST    comma-separated, from: ${exportFormats.join(', ')} (default: all)
   --revision LABEL  revision label used in file names and headers (default A)
   --date DATE       revision date written into the files (default 2000-01-01; no clock is read)
+  --profile FILE    a fab profile JSON (see \`check --help\`); default: the built-in
+                    "${STANDARD_QUICK_TURN_PROFILE.name}" profile
+  --waive REASON    export despite design-rule violations, for this reason (${WAIVER_MIN_CHARS}–${WAIVER_MAX_CHARS} characters)
 
-Exit codes: 0 ok; 2 bad input (one line naming the field, the value and the allowed range), nothing written.`;
+Exit codes: 0 ok; 2 bad input (one line naming the field, the value and the allowed range);
+3 design-rule violations without --waive (the JSON on stdout); 1 the files failed their read-back
+(a bug: nothing is written, a support id is printed). Nothing is written unless the exit code is 0.`;
+
+/** TEST ONLY: rewrites the built files before the read-back check (tests call run() in-process with it). */
+export interface ExportCommandDependencies {
+	readonly corruptFiles?: (files: ExportFile[]) => ExportFile[];
+}
 
 /** A bad command line or unreadable file: reported as one line, exit 2. */
 export class UsageError extends Error {}
@@ -32,6 +61,8 @@ interface ExportArgs {
 	formats: string;
 	revision: string;
 	date: string;
+	profile: string | null;
+	waive: string | null;
 }
 
 function parseArgs(argv: string[]): ExportArgs {
@@ -39,17 +70,17 @@ function parseArgs(argv: string[]): ExportArgs {
 	const opts: Record<string, string> = {};
 	for (let i = 0; i < argv.length; i++) {
 		const arg = argv[i];
-		if (['--out', '--formats', '--revision', '--date'].includes(arg)) {
+		if (['--out', '--formats', '--revision', '--date', '--profile', '--waive'].includes(arg)) {
 			const v = argv[++i];
 			if (v === undefined) throw new UsageError(`${arg} needs a value`);
 			opts[arg.slice(2)] = v;
-		} else if (arg.startsWith('--')) throw new UsageError(`unknown option "${arg}"; one of --out, --formats, --revision, --date`);
+		} else if (arg.startsWith('--')) throw new UsageError(`unknown option "${arg}"; one of --out, --formats, --revision, --date, --profile, --waive`);
 		else if (file === undefined) file = arg;
 		else throw new UsageError(`one design file only; also got "${arg}"`);
 	}
 	if (file === undefined) throw new UsageError('a design file is required: npm run cli -- export design.json --out DIR|FILE.zip');
 	if (!opts.out) throw new UsageError('--out DIR|FILE.zip is required');
-	return { file, out: opts.out, formats: opts.formats ?? exportFormats.join(','), revision: opts.revision ?? 'A', date: opts.date ?? '2000-01-01' };
+	return { file, out: opts.out, formats: opts.formats ?? exportFormats.join(','), revision: opts.revision ?? 'A', date: opts.date ?? '2000-01-01', profile: opts.profile ?? null, waive: opts.waive ?? null };
 }
 
 export function readJson(path: string, what: string): unknown {
@@ -67,22 +98,55 @@ export function readJson(path: string, what: string): unknown {
 	}
 }
 
-export async function run(argv: string[]): Promise<number> {
+function parseWaive(raw: string | null): string | null {
+	if (raw === null) return null;
+	const reason = raw.replace(/\s+/g, ' ').trim();
+	if (reason.length < WAIVER_MIN_CHARS || reason.length > WAIVER_MAX_CHARS) {
+		throw new InputError([{ path: '--waive', value: raw, message: `must say why, in ${WAIVER_MIN_CHARS}–${WAIVER_MAX_CHARS} characters; allowed range [${WAIVER_MIN_CHARS}, ${WAIVER_MAX_CHARS}] characters` }]);
+	}
+	return reason;
+}
+
+export async function run(argv: string[], deps: ExportCommandDependencies = {}): Promise<number> {
 	try {
 		const args = parseArgs(argv);
 		const raw = readJson(args.file, 'design file');
 		const formats = parseExportFormats(args.formats, '--formats');
+		const waive = parseWaive(args.waive);
+		const profile = args.profile ? parseFabProfile(readJson(args.profile, 'fab profile')) : STANDARD_QUICK_TURN_PROFILE;
 		const input = parseDesignInput(raw);
 		const meta = createExportMeta({ designName: input.name, revisionLabel: args.revision, revisionDate: args.date });
-		const files = buildFilesFromInput(raw, meta, formats, { svgWindow: createSVGWindow() as unknown as SvgWindow });
-		// everything is built before anything is written: bad input leaves no partial output
+		const sized = size(raw);
+		const artwork = buildArtwork(sized);
+		const violations = checkArtwork(artwork, profile);
+		if (violations.length > 0 && waive === null) {
+			process.stdout.write(`${JSON.stringify({ design: input.name, profile, clean: false, violations }, null, 2)}\n`);
+			console.error(`refused: ${violations.length} design-rule violation(s) of the "${profile.name}" profile; nothing written (fix them, or give --waive "reason")`);
+			return 3;
+		}
+		const waiver = violations.length > 0 && waive ? { reason: waive, profileName: profile.name, violations: violations.map((v) => v.message) } : undefined;
+		const written = buildFiles(sized, meta, formats, { svgWindow: createSVGWindow() as unknown as SvgWindow, ...(waiver ? { waiver } : {}) });
+		const files = deps.corruptFiles ? deps.corruptFiles(written) : written;
+		if (files.some((f) => isFabFileName(f.name))) {
+			// judged with the complete Gerber + drill set, the delivered files taking the place of their twins
+			const names = new Set(files.map((f) => f.name));
+			const companions = buildFiles(sized, meta, ['gerber', 'drill']).filter((f) => isFabFileName(f.name) && !names.has(f.name));
+			const readBack = checkReadBack(artwork, [...files.filter((f) => isFabFileName(f.name)), ...companions]);
+			if (!readBack.ok) {
+				const supportId = randomUUID();
+				console.error(JSON.stringify({ event: 'export.read-back-mismatch', supportId, mismatches: readBack.mismatches }));
+				console.error(`internal error: the files failed their read-back self-check and nothing was written; please report support id ${supportId}`);
+				return 1;
+			}
+		}
+		// everything is built and checked before anything is written: bad input leaves no partial output
 		if (args.out.toLowerCase().endsWith('.zip')) {
 			writeFileSync(args.out, await buildBundle(files, meta.revisionDate));
-			console.log(`wrote ${args.out} (${files.length} files)`);
+			console.log(`wrote ${args.out} (${files.length} files)${waiver ? `; ${violations.length} violation(s) waived` : ''}`);
 		} else {
 			mkdirSync(args.out, { recursive: true });
 			for (const f of files) writeFileSync(join(args.out, f.name), f.bytes);
-			console.log(`wrote ${files.length} files to ${args.out}`);
+			console.log(`wrote ${files.length} files to ${args.out}${waiver ? `; ${violations.length} violation(s) waived` : ''}`);
 		}
 		return 0;
 	} catch (err) {

@@ -1,10 +1,13 @@
-// `cli export` in a fresh tsx process: the files the shared pipeline makes, the same bytes as in-process, exit 2 on bad input.
+// `cli export` in a fresh tsx process: the files the shared pipeline makes, the same bytes as in-process, exit 2 on bad input,
+// exit 3 with the violations unless --waive (which lands in the fab notes); the read-back self-check in-process with a test-only hook.
 import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { existsSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
+import * as exportCommand from '../../../src/cli/commands/export';
+import { STANDARD_QUICK_TURN_PROFILE } from '../../../src/lib/schemas/fab-profile';
 import { goldenBundle, goldenDesign } from '../../fixtures/bundle/golden-bundle';
 
 function cli(args: string[]) {
@@ -49,6 +52,86 @@ describe('cli export', () => {
 		expect(r.code).toBe(2);
 		expect(r.err.trim().split('\n').length).toBe(1);
 		expect(r.err.trim()).toMatch(pattern);
+		expect(existsSync(out)).toBe(false);
+	});
+});
+
+describe('cli export: the design-rule gate and the read-back self-check', () => {
+	// The golden design with a 0.15 mm inset notch gap: under the built-in 0.2 mm minimum slot, one violation per side.
+	const narrow = join(dir, 'narrow-notch.json');
+	writeFileSync(narrow, JSON.stringify({ ...goldenDesign, feed: 'inset', inset: { notchGapMm: 0.15 } }));
+	// A profile whose smallest drill (2 mm) is larger than the golden design's 1.3 mm probe hole.
+	const coarse = join(dir, 'coarse-profile.json');
+	writeFileSync(coarse, JSON.stringify({ ...STANDARD_QUICK_TURN_PROFILE, name: 'coarse test fab', minDrillMm: 2 }));
+
+	it('refuses a violating design with exit 3, the violations as JSON on stdout, and writes nothing', () => {
+		const out = join(dir, 'refused.zip');
+		const r = cli([narrow, '--out', out]);
+		expect(r.code).toBe(3);
+		const body = JSON.parse(r.out);
+		expect(body.clean).toBe(false);
+		expect(body.profile).toEqual(STANDARD_QUICK_TURN_PROFILE);
+		expect(body.violations.map((v: { ruleId: string }) => v.ruleId)).toEqual(['slot-width', 'slot-width']);
+		expect(body.violations[0]).toMatchObject({ layerId: 'copper-top', requiredMm: 0.2 });
+		expect(r.err.trim().split('\n')).toHaveLength(1);
+		expect(existsSync(out)).toBe(false);
+	});
+
+	it('checks against --profile: a minimum drill above the probe hole fires drill-size on the clean golden design', () => {
+		const out = join(dir, 'coarse-out');
+		const r = cli([design, '--out', out, '--profile', coarse]);
+		expect(r.code).toBe(3);
+		const body = JSON.parse(r.out);
+		expect(body.profile.name).toBe('coarse test fab');
+		expect(body.violations.map((v: { ruleId: string; measuredMm: number }) => [v.ruleId, v.measuredMm])).toEqual([['drill-size', 1.3]]);
+		expect(existsSync(out)).toBe(false);
+	});
+
+	it('exports a violating design given --waive, the reason and each waived violation in the fab notes', () => {
+		const out = join(dir, 'waived');
+		const r = cli([narrow, '--out', out, '--formats', 'drill,notes', '--waive', 'Board house confirmed 0.15 mm gaps', '--revision', 'C', '--date', '2026-11-21']);
+		expect(r.err).toBe('');
+		expect(r.code).toBe(0);
+		expect(r.out).toMatch(/2 violation\(s\) waived/);
+		const notes = readFileSync(join(out, 'sunroof-gnss-C.fab-notes.txt'), 'utf8');
+		expect(notes).toContain(`   - DESIGN-RULE WAIVER: 2 design-rule violations against the "${STANDARD_QUICK_TURN_PROFILE.name}" profile accepted by the design team. Reason: Board house confirmed 0.15 mm gaps`);
+		expect(notes.match(/^ {3}- Waived: /gm)).toHaveLength(2);
+	});
+
+	it('leaves a clean design’s bytes alone when --waive is given (nothing to waive): still the golden bundle', async () => {
+		const out = join(dir, 'clean-waived.zip');
+		const r = cli([design, '--out', out, '--revision', 'B', '--date', '2026-11-20', '--waive', 'no reason needed']);
+		expect(r.code).toBe(0);
+		expect(sha(readFileSync(out))).toBe(sha(await goldenBundle()));
+	});
+
+	it('exits 2 with one line for a waiver without a real reason', () => {
+		const r = cli([narrow, '--out', join(dir, 'never-w'), '--waive', ' ok ']);
+		expect(r.code).toBe(2);
+		expect(r.err.trim()).toMatch(/^--waive: " ok " — must say why/);
+	});
+
+	it('exits 1 with a support id and writes nothing when a Gerber fails its read-back (test-only corruption)', async () => {
+		const out = join(dir, 'corrupt-out');
+		const errors: string[] = [];
+		const spyErr = vi.spyOn(console, 'error').mockImplementation((...a: unknown[]) => void errors.push(a.join(' ')));
+		const spyLog = vi.spyOn(console, 'log').mockImplementation(() => undefined);
+		try {
+			// shift every coordinate of the top copper by 1 mm in x: a writer bug a fab would build
+			const corruptFiles = (files: { name: string; bytes: Uint8Array }[]) =>
+				files.map((f) => (f.name.endsWith('.copper-top.gbr') ? { name: f.name, bytes: new TextEncoder().encode(new TextDecoder().decode(f.bytes).replace(/^X(-?\d+)Y/gm, (_, x: string) => `X${BigInt(x) + 1_000_000n}Y`)) } : f));
+			const code = await exportCommand.run([design, '--out', out, '--formats', 'gerber'], { corruptFiles });
+			expect(code).toBe(1);
+		} finally {
+			spyErr.mockRestore();
+			spyLog.mockRestore();
+		}
+		const last = errors.at(-1)!;
+		const supportId = /support id ([0-9a-f-]{36})$/.exec(last)?.[1];
+		expect(supportId).toBeDefined();
+		const logged = JSON.parse(errors.find((e) => e.startsWith('{'))!);
+		expect(logged).toMatchObject({ event: 'export.read-back-mismatch', supportId });
+		expect(logged.mismatches.some((m: { layerKey: string }) => m.layerKey === 'copper-L1')).toBe(true);
 		expect(existsSync(out)).toBe(false);
 	});
 });
