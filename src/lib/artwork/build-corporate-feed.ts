@@ -1,5 +1,5 @@
 // The corporate feed of an array: binary trees of T-junctions (λg/4 transformers in the arms) from every element's feed point to one port.
-import { GeometryError, createRectangleContour, type Bounds, type Point } from '../geometry';
+import { GeometryError, createPolygonContour, type Bounds, type Point } from '../geometry';
 import type { SizedArray } from '../rf/sized-design';
 import type { ArtworkShape } from './types';
 
@@ -144,7 +144,10 @@ export function pieceShape(p: NetworkPiece, id: string, dx = 0, dy = 0): Artwork
 		minX = x0 - h;
 		maxX = x0 + h;
 	}
-	return { id, role: p.role, polarity: 'dark', geometry: { kind: 'region', region: { outer: createRectangleContour(minX + dx, minY + dy, maxX - minX, maxY - minY), holes: [] } } };
+	// corners computed directly (not origin + size) so pieces meeting end to end share exact coordinates
+	const ax0 = minX + dx, ax1 = maxX + dx, ay0 = minY + dy, ay1 = maxY + dy;
+	const outer = createPolygonContour([[ax0, ay0], [ax1, ay0], [ax1, ay1], [ax0, ay1]]);
+	return { id, role: p.role, polarity: 'dark', geometry: { kind: 'region', region: { outer, holes: [] } } };
 }
 
 /** Bounds of a piece's rectangle. */

@@ -23,12 +23,17 @@ export function buildLayeredStack(sized: SizedDesign): StackLayer[] {
 	const entries = sized.layerStack;
 	if (!entries) return buildStack(sized);
 	const ids = copperLayerIds(entries.filter((e) => e.kind === 'copper').length);
-	let z = entries.reduce((a, e) => a + (e.kind === 'copper' ? e.thicknessMm : e.heightMm), 0);
+	// z accumulated from the bottom up, so the bottom copper sits exactly at 0 and each slab starts where the one below ends
+	const zs: number[] = new Array(entries.length);
+	let z = 0;
+	for (let i = entries.length - 1; i >= 0; i--) {
+		zs[i] = z;
+		const e = entries[i];
+		z += e.kind === 'copper' ? e.thicknessMm : e.heightMm;
+	}
 	let copper = 0, dielectric = 0;
-	return entries.map((e): StackLayer => {
-		const thickness = e.kind === 'copper' ? e.thicknessMm : e.heightMm;
-		z -= thickness;
-		const zMm = Math.max(0, z);
+	return entries.map((e, i): StackLayer => {
+		const zMm = zs[i];
 		if (e.kind === 'copper') {
 			const layerId = ids[copper++];
 			return { kind: 'copper', id: layerId, layerId, zMm, thicknessMm: e.thicknessMm, conductivitySPerM: e.conductivitySPerM };

@@ -50,13 +50,16 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 		.map((l) =>
 			l.kind === 'copper'
 				? `   - ${l.id.padEnd(14)} copper      ${n(l.thicknessMm * 1000, 1)} µm   (layer ${l.layerId})`
-				: `   - ${l.id.padEnd(14)} dielectric  ${n(l.thicknessMm)} mm   εr ${l.relativePermittivity}, tanδ ${l.lossTangent}`
+				: `   - ${l.id.padEnd(14)} dielectric  ${n(l.thicknessMm)} mm   εr ${l.relativePermittivity}, tanδ ${l.lossTangent}${l.bonding ? ' (bonding film)' : ''}`
 		)
 		.join('\n');
 	const dielectric = stack.find((l) => l.kind === 'dielectric');
 	const copper = stack.find((l) => l.kind === 'copper');
+	const dielectricCount = stack.filter((l) => l.kind === 'dielectric').length;
 	const laminate =
-		dielectric && dielectric.kind === 'dielectric'
+		dielectricCount > 1
+			? `${dielectricCount} dielectric layers and ${artwork.metadata.copperLayerCount} copper layers, each with its own εr, tanδ and thickness as listed in the stack above (top to bottom); build them in that order.`
+			: dielectric && dielectric.kind === 'dielectric'
 			? `Relative permittivity εr ${dielectric.relativePermittivity} at the design frequency, loss tangent ${dielectric.lossTangent}, core thickness ${n(dielectric.thicknessMm)} mm.`
 			: 'No dielectric in the stack.';
 	const copperUm = copper ? copper.thicknessMm * 1000 : 0;

@@ -1,0 +1,85 @@
+// Layered designs and arrays through every writer, read back by the outside references: @tracespace/parser (Gerber), dxf-parser, ajv (sweep JSON Schema).
+import Ajv2020 from 'ajv/dist/2020';
+import DxfParser from 'dxf-parser';
+import { createSVGWindow } from 'svgdom';
+import { describe, expect, it } from 'vitest';
+import { buildArtwork } from '../../../../src/lib/artwork';
+import { buildDxfCommands, buildFiles, buildSweepDocument, createExportMeta, dxfLayerName, serializeSweep, sweepJsonSchema, toDxf, toGerber } from '../../../../src/lib/formats';
+import { size } from '../../../../src/lib/rf';
+import { layeredCases } from '../../../fixtures/designs/layered-cases';
+import { readBackGerber } from '../gerber/read-back';
+
+const meta = createExportMeta({ designName: 'Layered demo', revisionLabel: 'A', revisionDate: '2026-12-02' });
+const ajv = new Ajv2020({ allErrors: true, strict: true, strictTypes: false, strictTuples: false });
+const validate = ajv.compile(sweepJsonSchema as object);
+const cases = layeredCases.map((c) => ({ ...c, sized: size(c.doc), artwork: buildArtwork(size(c.doc)) }));
+
+describe('layered designs and arrays in every format', () => {
+	it.each(cases)('$name: every Gerber layer parses completely with @tracespace/parser and reads back its regions', ({ artwork }) => {
+		for (const layer of artwork.layers) {
+			const read = readBackGerber(toGerber(artwork, layer.id, meta));
+			// @tracespace/parser: a complete parse has filetype gerber and reaches M02
+			expect(read.tree.filetype).toBe('gerber');
+			expect(read.tree.done).toBe(true);
+			expect(read.tree.children.filter((n) => n.type === 'unimplemented' && !/^%T[FAD]/.test(n.value))).toEqual([]);
+			if (layer.function.kind !== 'profile') {
+				const contours = layer.shapes.flatMap((s) => (s.geometry.kind === 'region' ? [s.geometry.region.outer, ...s.geometry.region.holes] : []));
+				expect(read.regions.length).toBe(contours.length);
+				expect(read.regions.filter((r) => r.polarity === 'clear').length).toBe(layer.shapes.filter((s) => s.polarity === 'clear' && s.geometry.kind === 'region').length);
+			}
+		}
+	});
+
+	it.each(cases.filter((c) => c.artwork.metadata.copperLayerCount === 3))('$name: copper file functions L1 Top, L2 Inr, L3 Bot (Gerber Layer Format Specification §5.6.3)', ({ artwork }) => {
+		const fileFunction = (id: string) => readBackGerber(toGerber(artwork, id, meta)).fileAttributes.find((a) => a.startsWith('%TF.FileFunction'));
+		expect(fileFunction('copper-top')).toBe('%TF.FileFunction,Copper,L1,Top*%');
+		expect(fileFunction('copper-inner-1')).toBe('%TF.FileFunction,Copper,L2,Inr*%');
+		expect(fileFunction('copper-bottom')).toBe('%TF.FileFunction,Copper,L3,Bot*%');
+	});
+
+	it.each(cases)('$name: DXF read back by dxf-parser holds every layer with its entity count', ({ artwork }) => {
+		// eslint-disable-next-line @typescript-eslint/no-explicit-any
+		const dxf: any = new DxfParser().parseSync(toDxf(artwork));
+		const expected = buildDxfCommands(artwork).flatMap((c) => (c.type === 'layer' ? [] : [c]));
+		expect(dxf.entities.length).toBe(expected.length);
+		for (const layer of artwork.layers) {
+			const name = dxfLayerName(layer.id);
+			expect(Object.keys(dxf.tables.layer.layers)).toContain(name);
+			expect(dxf.entities.filter((e: { layer: string }) => e.layer === name).length).toBe(expected.filter((c) => c.layer === name).length);
+		}
+		expect(dxf.header.$EXTMAX.x).toBeCloseTo(artwork.board.widthMm, 5);
+		expect(dxf.header.$EXTMAX.y).toBeCloseTo(artwork.board.lengthMm, 5);
+	});
+
+	it.each(cases)('$name: sweep JSON validates with ajv and lists every layer of the stack, each slab on the one below (z increasing bottom up)', ({ doc }) => {
+		const sweep = JSON.parse(serializeSweep(buildSweepDocument(doc, { axes: [{ field: 'frequencyHz', values: [2.4e9, 2.45e9] }] }, meta)));
+		expect(validate(sweep)).toBe(true);
+		expect(validate.errors ?? []).toEqual([]);
+		for (const point of sweep.points) {
+			expect(point.status).toBe('sized');
+			const stack = point.stack as { kind: string; zMm: number; thicknessMm: number }[];
+			const resolved = size(doc).layerStack;
+			expect(stack.length).toBe(resolved ? resolved.length : 3);
+			// the document's order convention is top to bottom; reversed, z rises from 0 with no gap or overlap
+			const up = [...stack].reverse();
+			expect(up[0].zMm).toBe(0);
+			for (let i = 1; i < up.length; i++) {
+				expect(up[i].zMm).toBeGreaterThan(up[i - 1].zMm);
+				expect(up[i].zMm).toBeCloseTo(up[i - 1].zMm + up[i - 1].thicknessMm, 12);
+			}
+			expect(point.layers.filter((l: { function: { kind: string } }) => l.function.kind === 'copper').length).toBe(stack.filter((s) => s.kind === 'copper').length);
+		}
+	});
+
+	it('writes the whole bundle of a 2×4 aperture-coupled array: three copper Gerbers, DXF, SVG, sweep, notes with the bonding film', () => {
+		const c = cases.find((x) => x.name === '2×4 aperture-coupled array')!;
+		const files = buildFiles(c.sized, meta, undefined, { svgWindow: createSVGWindow() });
+		const names = files.map((f) => f.name);
+		expect(names).toEqual(
+			['copper-top.gbr', 'copper-inner-1.gbr', 'copper-bottom.gbr', 'profile.gbr', 'drawing.dxf', 'drawing.svg', 'design.sweep.json', 'fab-notes.txt', 'manifest.json'].map((n) => `layered-demo-A.${n}`)
+		);
+		const notes = new TextDecoder().decode(files.find((f) => f.name.endsWith('fab-notes.txt'))!.bytes);
+		expect(notes).toContain('copper-inner-1');
+		expect(notes).toContain('bonding film');
+	});
+});
