@@ -1,23 +1,61 @@
 // Every request: who is asking (session or API token) on locals, security headers on the answer;
+// a database that cannot be reached: 503 "try again shortly" (JSON under /api/v1), never a 500;
 // every unexpected error: logged with an id support can find.
-import type { Handle, HandleServerError } from '@sveltejs/kit';
+import { isHttpError, json, type Handle, type HandleServerError } from '@sveltejs/kit';
 import { identify } from '$lib/server/auth/request-identity';
+import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from '$lib/server/db';
+import { refuseUnreadableForm } from '$lib/server/http/form-body-guard';
 
-export const handle: Handle = async ({ event, resolve }) => {
-	const identity = event.url.pathname === '/healthz' ? { user: null, sessionId: null, apiToken: null } : await identify(event.request, event.cookies);
-	event.locals.user = identity.user;
-	event.locals.sessionId = identity.sessionId;
-	event.locals.apiToken = identity.apiToken;
-	event.locals.identity = identity;
-	const response = await resolve(event);
+const RETRY_AFTER_SECONDS = '5';
+
+function unavailable(pathname: string): Response | null {
+	if (!pathname.startsWith('/api/')) return null;
+	return json({ error: DATABASE_UNAVAILABLE_MESSAGE, issues: [] }, { status: 503, headers: { 'retry-after': RETRY_AFTER_SECONDS } });
+}
+
+/**
+ * Under /api/ every answer is JSON: SvelteKit's own HTML refusals (an address that is not valid
+ * percent-encoded UTF-8, a method no route has) become { error, issues } with the same status.
+ */
+function apiJson(pathname: string, response: Response): Response {
+	if (!pathname.startsWith('/api/') || response.status < 400 || !(response.headers.get('content-type') ?? '').startsWith('text/html')) return response;
+	const message = response.status === 400 ? 'the address could not be read: it must be valid percent-encoded UTF-8' : response.status === 404 ? 'Not found' : `The request was refused (${response.status})`;
+	return json({ error: message, issues: response.status === 400 ? [{ path: 'url', message }] : [] }, { status: response.status });
+}
+
+function secure(response: Response): Response {
 	response.headers.set('x-content-type-options', 'nosniff');
 	response.headers.set('referrer-policy', 'same-origin');
 	response.headers.set('x-frame-options', 'DENY');
+	if (response.status === 503 && !response.headers.has('retry-after')) response.headers.set('retry-after', RETRY_AFTER_SECONDS);
 	return response;
+}
+
+export const handle: Handle = async ({ event, resolve }) => {
+	try {
+		const identity = event.url.pathname === '/healthz' ? { user: null, sessionId: null, apiToken: null } : await identify(event.request, event.cookies);
+		event.locals.user = identity.user;
+		event.locals.sessionId = identity.sessionId;
+		event.locals.apiToken = identity.apiToken;
+		event.locals.identity = identity;
+		const unreadable = await refuseUnreadableForm(event);
+		if (unreadable) return secure(unreadable);
+		return secure(apiJson(event.url.pathname, await resolve(event)));
+	} catch (err) {
+		// identify() could not reach PostgreSQL: a JSON 503 for the API; pages get kit's 503 error page.
+		if (isDatabaseUnavailable(err)) {
+			const api = unavailable(event.url.pathname);
+			if (api) return secure(api);
+		}
+		throw err;
+	}
 };
 
 export const handleError: HandleServerError = ({ error, event, status }) => {
 	const errorId = crypto.randomUUID();
-	if (status !== 404) console.error(`[${errorId}] ${event.request.method} ${event.url.pathname}:`, error);
-	return { message: status === 404 ? 'Not found' : 'Something went wrong on our side.', errorId };
+	if (isDatabaseUnavailable(error) || (isHttpError(error) && error.status === 503)) return { message: DATABASE_UNAVAILABLE_MESSAGE, errorId };
+	// SvelteKit's own refusals (404 no such route or action, 415 not form data, 413 body too large) say what was wrong.
+	if (status < 500) return { message: status === 404 ? 'Not found' : error instanceof Error && error.message ? error.message : 'The request was refused', errorId };
+	console.error(`[${errorId}] ${event.request.method} ${event.url.pathname}:`, error);
+	return { message: 'Something went wrong on our side.', errorId };
 };

@@ -5,7 +5,8 @@ export type AccountErrorCode =
 	| 'link-invalid' // a reset or invite link that is unknown, used or expired
 	| 'last-owner' // the change would leave the team without an owner
 	| 'not-member' // the person named is not a member of this team
-	| 'not-found'; // the invitation or token named does not exist (for this team or person)
+	| 'not-found' // the invitation or token named does not exist (for this team or person)
+	| 'limit-reached'; // a per-person limit (teams, live API tokens) is used up
 
 export class AccountError extends Error {
 	readonly name = 'AccountError';

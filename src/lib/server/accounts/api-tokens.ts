@@ -3,6 +3,9 @@ import { randomUUID } from 'node:crypto';
 import { generateSecret, hashSecret } from '../auth/api-token';
 import { getDb } from '../db';
 import * as tokenQueries from '../db/token.queries';
+import * as limitQueries from '../db/limits.queries';
+import { recordAuditEvent } from '../audit/record-audit-event';
+import { LIMITS, tokenLimitMessage } from '../http/limits';
 import { parseWith } from '$lib/schemas/input-error';
 import { createTokenSchema } from '$lib/schemas/account';
 import { AccountError } from './account-error';
@@ -21,7 +24,14 @@ export async function createApiToken(userId: string, teamId: string, raw: { name
 	const { name } = parseWith(createTokenSchema, raw);
 	const secret = generateSecret();
 	const id = randomUUID();
-	await tokenQueries.insertApiToken(getDb(), { id, team_id: teamId, user_id: userId, name, token_hash: hashSecret(secret) });
+	await getDb()
+		.transaction()
+		.execute(async (trx) => {
+			await limitQueries.lockUserById(trx, userId);
+			if ((await limitQueries.countLiveTokensByUser(trx, userId)) >= LIMITS.liveTokensPerPerson) throw new AccountError('limit-reached', tokenLimitMessage);
+			await tokenQueries.insertApiToken(trx, { id, team_id: teamId, user_id: userId, name, token_hash: hashSecret(secret) });
+			await recordAuditEvent({ kind: 'token.created', teamId, actorUserId: userId, details: { tokenId: id, name } }, trx);
+		});
 	return { id, name, secret };
 }
 
@@ -37,5 +47,11 @@ export async function findOwnApiTokenTeam(userId: string, tokenId: string): Prom
 }
 
 export async function revokeApiToken(userId: string, tokenId: string, now = new Date()): Promise<void> {
-	if (!(await tokenQueries.revokeTokenByIdAndUser(getDb(), tokenId, userId, now))) throw new AccountError('not-found', 'Token not found');
+	await getDb()
+		.transaction()
+		.execute(async (trx) => {
+			const token = await tokenQueries.findTokenByIdAndUser(trx, tokenId, userId);
+			if (!token || !(await tokenQueries.revokeTokenByIdAndUser(trx, tokenId, userId, now))) throw new AccountError('not-found', 'Token not found');
+			await recordAuditEvent({ kind: 'token.revoked', teamId: token.team_id, actorUserId: userId, details: { tokenId } }, trx);
+		});
 }

@@ -10,7 +10,8 @@ const statusOf: Record<AccountErrorCode, number> = {
 	'link-invalid': 410,
 	'last-owner': 409,
 	'not-member': 404,
-	'not-found': 404
+	'not-found': 404,
+	'limit-reached': 409
 };
 
 export interface FormProblem {

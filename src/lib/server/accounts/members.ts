@@ -4,6 +4,7 @@ import type { TeamRole } from '../db/team.table';
 import { getDb } from '../db';
 import * as memberQueries from '../db/member.queries';
 import * as tokenQueries from '../db/token.queries';
+import { recordAuditEvent } from '../audit/record-audit-event';
 import { parseWith } from '$lib/schemas/input-error';
 import { changeRoleSchema, memberRefSchema } from '$lib/schemas/account';
 import { AccountError } from './account-error';
@@ -23,7 +24,8 @@ export async function listTeamMembers(teamId: string): Promise<TeamMember[]> {
 
 const LAST_OWNER = 'A team needs at least one owner: make someone else an owner first.';
 
-export async function changeMemberRole(teamId: string, raw: { userId: unknown; role: unknown }): Promise<void> {
+/** `actorId`: who made the change, for the team's audit log. */
+export async function changeMemberRole(teamId: string, raw: { userId: unknown; role: unknown }, actorId: string | null = null): Promise<void> {
 	const { userId, role } = parseWith(changeRoleSchema, raw);
 	await getDb()
 		.transaction()
@@ -35,11 +37,12 @@ export async function changeMemberRole(teamId: string, raw: { userId: unknown; r
 				throw new AccountError('last-owner', LAST_OWNER);
 			}
 			await memberQueries.updateMemberRole(trx, teamId, userId, role);
+			if (current.role !== role) await recordAuditEvent({ kind: 'member.role-changed', teamId, actorUserId: actorId, details: { memberId: userId, memberEmail: current.email, from: current.role, to: role } }, trx);
 		});
 }
 
 /** Removes a member (and revokes the API tokens they made for this team). */
-export async function removeMember(teamId: string, raw: { userId: unknown }, now = new Date()): Promise<void> {
+export async function removeMember(teamId: string, raw: { userId: unknown }, now = new Date(), actorId: string | null = null): Promise<void> {
 	const { userId } = parseWith(memberRefSchema, raw);
 	await getDb()
 		.transaction()
@@ -50,5 +53,6 @@ export async function removeMember(teamId: string, raw: { userId: unknown }, now
 			if (current.role === 'owner' && (await memberQueries.countOwnersByTeam(trx, teamId)) <= 1) throw new AccountError('last-owner', LAST_OWNER);
 			await memberQueries.deleteMember(trx, teamId, userId);
 			await tokenQueries.revokeTokensByTeamAndUser(trx, teamId, userId, now);
+			await recordAuditEvent({ kind: 'member.removed', teamId, actorUserId: actorId, details: { memberId: userId, memberEmail: current.email, role: current.role } }, trx);
 		});
 }

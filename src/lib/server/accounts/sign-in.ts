@@ -4,6 +4,7 @@ import { randomBytes } from 'node:crypto';
 import { hashPassword, verifyPassword } from '../auth/password';
 import { getDb } from '../db';
 import * as userQueries from '../db/user.queries';
+import { recordAuditEvent } from '../audit/record-audit-event';
 import { signInSchema } from '$lib/schemas/account';
 import { AccountError, WRONG_CREDENTIALS_MESSAGE } from './account-error';
 import type { AccountUser } from './sign-up';
@@ -26,6 +27,10 @@ export async function checkCredentials(raw: { email: unknown; password: unknown 
 	const { email, password } = parsed.data;
 	const user = await userQueries.findUserByEmail(getDb(), email);
 	const ok = await verifyPassword(user?.password_hash ?? (await decoy()), password);
-	if (!user || !ok) throw new AccountError('wrong-credentials', WRONG_CREDENTIALS_MESSAGE);
+	if (!user || !ok) {
+		// The account's id when it exists (its team owners see it); the e-mail tried otherwise.
+		await recordAuditEvent({ kind: 'signin.failed', teamId: null, actorUserId: user?.id ?? null, details: user ? {} : { email } });
+		throw new AccountError('wrong-credentials', WRONG_CREDENTIALS_MESSAGE);
+	}
 	return { id: user.id, email: user.email, displayName: user.display_name };
 }

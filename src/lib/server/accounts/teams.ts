@@ -2,6 +2,9 @@
 import { randomUUID } from 'node:crypto';
 import { getDb } from '../db';
 import * as memberQueries from '../db/member.queries';
+import * as limitQueries from '../db/limits.queries';
+import { LIMITS, teamLimitMessage } from '../http/limits';
+import { AccountError } from './account-error';
 import { parseWith } from '$lib/schemas/input-error';
 import { createTeamSchema } from '$lib/schemas/account';
 
@@ -11,6 +14,8 @@ export async function createTeam(userId: string, raw: { name: unknown }): Promis
 	await getDb()
 		.transaction()
 		.execute(async (trx) => {
+			await limitQueries.lockUserById(trx, userId);
+			if ((await limitQueries.countTeamsByUser(trx, userId)) >= LIMITS.teamsPerPerson) throw new AccountError('limit-reached', teamLimitMessage);
 			await memberQueries.insertTeam(trx, id, name);
 			await memberQueries.insertMember(trx, id, userId, 'owner');
 		});

@@ -1,9 +1,14 @@
-// The one pool and the one Kysely instance of this process, created on first use.
+// The one pool and the one Kysely instance of this process, created on first use. Every way into the
+// pool (connect, query, and the queries of a checked-out client) turns connection-class errors into
+// HttpError 503 (database-unavailable.ts), so a stopped PostgreSQL answers "try again shortly", and
+// the pool reconnects by itself once the server is back.
 import { Kysely, PostgresDialect } from 'kysely';
 import pg from 'pg';
 import type { Database } from './database';
+import { toDatabaseUnavailable } from './database-unavailable';
 
 export type { Database } from './database';
+export { isDatabaseUnavailable, DATABASE_UNAVAILABLE_MESSAGE } from './database-unavailable';
 
 let pool: pg.Pool | undefined;
 let db: Kysely<Database> | undefined;
@@ -14,15 +19,57 @@ function databaseUrl(): string {
 	return url;
 }
 
+const guarded = Symbol('fringefield.guarded');
+
+type Queryable = { query: (...args: unknown[]) => unknown; [guarded]?: true };
+
+/** Wraps `target.query` (promise form only; the callback form is left to pg) once. */
+function guardQuery(target: Queryable): void {
+	if (target[guarded]) return;
+	target[guarded] = true;
+	const query = target.query.bind(target);
+	target.query = (...args: unknown[]) => {
+		const result = query(...args);
+		if (result && typeof (result as Promise<unknown>).then === 'function' && typeof (result as Promise<unknown>).catch === 'function') {
+			return (result as Promise<unknown>).catch((err: unknown) => {
+				throw toDatabaseUnavailable(err);
+			});
+		}
+		return result;
+	};
+}
+
+function guardPool(p: pg.Pool): pg.Pool {
+	const connect = p.connect.bind(p) as (cb?: unknown) => unknown;
+	(p as unknown as { connect: (cb?: unknown) => unknown }).connect = (cb?: unknown) => {
+		if (typeof cb === 'function') return connect(cb);
+		return (connect() as Promise<pg.PoolClient>).then(
+			(client) => {
+				guardQuery(client as unknown as Queryable);
+				return client;
+			},
+			(err: unknown) => {
+				throw toDatabaseUnavailable(err);
+			}
+		);
+	};
+	guardQuery(p as unknown as Queryable);
+	return p;
+}
+
 export function getPool(): pg.Pool {
-	pool ??= new pg.Pool({
-		connectionString: databaseUrl(),
-		max: Number(process.env.DATABASE_POOL_SIZE || 10),
-		connectionTimeoutMillis: 5000,
-		idleTimeoutMillis: 30_000
-	});
-	// A dropped connection must not crash the process; the next query reconnects.
-	pool.on('error', (err) => console.error(`database pool: ${err.message}`));
+	if (!pool) {
+		pool = guardPool(
+			new pg.Pool({
+				connectionString: databaseUrl(),
+				max: Number(process.env.DATABASE_POOL_SIZE || 10),
+				connectionTimeoutMillis: 5000,
+				idleTimeoutMillis: 30_000
+			})
+		);
+		// A dropped connection must not crash the process; the next query reconnects.
+		pool.on('error', (err) => console.error(`database pool: ${err.message}`));
+	}
 	return pool;
 }
 
@@ -34,7 +81,9 @@ export function getDb(): Kysely<Database> {
 /** Ends the pool (tests and scripts). */
 export async function closeDb(): Promise<void> {
 	const current = db;
+	const currentPool = pool;
 	db = undefined;
 	pool = undefined;
-	await current?.destroy();
+	if (current) await current.destroy();
+	else await currentPool?.end();
 }

@@ -2,6 +2,7 @@
 import { randomUUID } from 'node:crypto';
 import { getDb } from '../db';
 import * as exportQueries from '../db/export.queries';
+import { recordAuditEvent } from '../audit/record-audit-event';
 import type { ExportedFile, ExportVia } from '../db/export-record.table';
 import type { ExportTarget } from './export-target';
 
@@ -17,17 +18,26 @@ export interface ExportRecordInput {
 }
 
 export async function recordExport(input: ExportRecordInput): Promise<{ id: string; createdAt: Date }> {
-	const row = await exportQueries.insertExportRecord(getDb(), {
-		id: randomUUID(),
-		team_id: input.target.design.teamId,
-		design_id: input.target.design.id,
-		revision_id: input.target.revision.id,
-		user_id: input.userId,
-		via: input.via,
-		kind: input.kind,
-		files: input.files,
-		sha256: input.sha256,
-		waiver: input.waiver ?? null
-	});
-	return { id: row.id, createdAt: row.created_at };
+	// A waiver is a security event too: its audit row is written in the same transaction as the record.
+	return getDb()
+		.transaction()
+		.execute(async (trx) => {
+			const row = await exportQueries.insertExportRecord(trx, {
+				id: randomUUID(),
+				team_id: input.target.design.teamId,
+				design_id: input.target.design.id,
+				revision_id: input.target.revision.id,
+				user_id: input.userId,
+				via: input.via,
+				kind: input.kind,
+				files: input.files,
+				sha256: input.sha256,
+				waiver: input.waiver ?? null
+			});
+			if (input.waiver) {
+				const details = { exportId: row.id, designId: input.target.design.id, revisionId: input.target.revision.id, kind: input.kind, reason: input.waiver };
+				await recordAuditEvent({ kind: 'export.waived', teamId: input.target.design.teamId, actorUserId: input.userId, details }, trx);
+			}
+			return { id: row.id, createdAt: row.created_at };
+		});
 }

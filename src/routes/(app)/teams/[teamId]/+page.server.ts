@@ -58,9 +58,9 @@ export const actions: Actions = {
 		return { form: 'withdraw', done: 'Invitation withdrawn.' };
 	},
 	role: async (event) => {
-		const { teamId, values } = await asOwner(event);
+		const { user, teamId, values } = await asOwner(event);
 		try {
-			await accounts.changeMemberRole(teamId, { userId: values.userId, role: values.role });
+			await accounts.changeMemberRole(teamId, { userId: values.userId, role: values.role }, user.id);
 		} catch (err) {
 			return accounts.formFailure(err, 'role', values);
 		}
@@ -69,7 +69,7 @@ export const actions: Actions = {
 	remove: async (event) => {
 		const { user, teamId, values } = await asOwner(event);
 		try {
-			await accounts.removeMember(teamId, { userId: values.userId });
+			await accounts.removeMember(teamId, { userId: values.userId }, new Date(), user.id);
 		} catch (err) {
 			return accounts.formFailure(err, 'remove', values);
 		}

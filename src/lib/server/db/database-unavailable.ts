@@ -1,0 +1,41 @@
+// Errors of the "cannot talk to PostgreSQL" class (refused, reset, terminated, shutting down, the
+// 08xxx connection-exception class) become one HttpError 503 with a message people can act on.
+import { error, isHttpError, type HttpError } from '@sveltejs/kit';
+
+export const DATABASE_UNAVAILABLE_MESSAGE = 'The database is unavailable; try again shortly';
+
+const NODE_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', 'EHOSTUNREACH', 'ENETUNREACH', 'EAI_AGAIN', 'ENOTFOUND']);
+// PostgreSQL SQLSTATE: 57P01 admin_shutdown, 57P02 crash_shutdown, 57P03 cannot_connect_now, 53300 too_many_connections (PostgreSQL docs, Appendix A).
+const SQLSTATES = new Set(['57P01', '57P02', '57P03', '53300']);
+const MESSAGES = [/connection terminated/i, /timeout exceeded when trying to connect/i, /not queryable/i, /connection error/i, /the database system is (starting up|shutting down|in recovery mode)/i];
+
+/** True for errors meaning the database cannot be reached right now (not for SQL errors). */
+export function isDatabaseUnavailable(err: unknown): boolean {
+	if (isHttpError(err)) return err.status === 503 && err.body.message === DATABASE_UNAVAILABLE_MESSAGE;
+	if (!err || typeof err !== 'object') return false;
+	const code = (err as { code?: unknown }).code;
+	if (typeof code === 'string' && (NODE_CODES.has(code) || SQLSTATES.has(code) || /^08/.test(code))) return true;
+	// AggregateError (several addresses refused) carries the codes of its parts.
+	const inner = (err as { errors?: unknown }).errors;
+	if (Array.isArray(inner) && inner.some(isDatabaseUnavailable)) return true;
+	const message = (err as { message?: unknown }).message;
+	return typeof message === 'string' && MESSAGES.some((m) => m.test(message));
+}
+
+let lastLogged = 0;
+
+/** The 503 to throw in place of `err` when it is of the connection class; `err` itself otherwise. */
+export function toDatabaseUnavailable(err: unknown): unknown {
+	if (isHttpError(err) || !isDatabaseUnavailable(err)) return err;
+	const now = Date.now();
+	// One log line per second at most, so an outage does not flood the log.
+	if (now - lastLogged > 1000) {
+		lastLogged = now;
+		console.error(`database unavailable: ${(err as Error).message || (err as { code?: string }).code}`);
+	}
+	try {
+		error(503, DATABASE_UNAVAILABLE_MESSAGE);
+	} catch (thrown) {
+		return thrown as HttpError;
+	}
+}

@@ -1,0 +1,38 @@
+// Hostile input against every /api/v1 route and every form action of the built server: a seeded
+// sample of 40 cases per route here (`npm run bench -- --fuzz` runs 10 000 per route). Every answer
+// is a 4xx with a message, never a 5xx, and a route that accepted nothing wrote nothing.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { closeDb } from '../../../src/lib/server/db';
+import { startBuiltServer, type BuiltServer } from './helpers/built-server';
+import { fuzzTarget } from './helpers/fuzz-run';
+import { fuzzTargets } from './helpers/fuzz-targets';
+import { createHardeningWorkspace, type HardeningWorkspace } from './helpers/workspace';
+
+const RUNS = 40;
+const SEED = 9_2450;
+
+let server: BuiltServer;
+let ws: HardeningWorkspace;
+
+beforeAll(async () => {
+	[server, ws] = await Promise.all([startBuiltServer({ databaseUrl: process.env.DATABASE_URL! }), createHardeningWorkspace('fuzz')]);
+}, 120_000);
+afterAll(async () => {
+	await server?.stop();
+	await closeDb();
+});
+
+describe('hostile input to the built server', () => {
+	// Targets are built from the workspace, so list them by name here and look each up at run time.
+	const names = fuzzTargets({ a: {}, b: {}, owner: {}, editor: {}, viewer: {}, outsider: {} } as unknown as HardeningWorkspace).map((t) => t.name);
+
+	it.each(names)('%s: 4xx with a message, never 5xx, nothing written', async (name) => {
+		const target = fuzzTargets(ws).find((t) => t.name === name)!;
+		const report = await fuzzTarget(server.origin, ws, target, { runs: RUNS, seed: SEED, concurrency: 4 });
+		expect(report.cases).toBe(RUNS);
+		expect(report.samples, `server log:\n${server.log().slice(-3000)}`).toEqual([]);
+		expect(report.serverErrors).toBe(0);
+		expect(report.unexplained).toBe(0);
+		expect(report.writtenTables).toEqual([]);
+	}, 60_000);
+});
