@@ -4,6 +4,7 @@ import { documentFromFormValues, fieldIssues, formValuesFromFormData } from '$li
 import { getDb } from '$lib/server/db';
 import { findDesignWithRevisions, listLaminates, saveRevision } from '$lib/server/designs';
 import { requireDesign } from '$lib/server/designs/design-access';
+import { listFabProfiles, matchingFabProfileId, resolveFabProfileChoice, revisionFabProfile } from '$lib/server/fab-profiles';
 import { InputError } from '$lib/schemas';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -14,7 +15,10 @@ export const load: PageServerLoad = async (event) => {
 	const parent = found?.revisions.find((r) => r.label === from);
 	if (!parent) error(404, 'Revision not found');
 	const laminates = await listLaminates(getDb(), design.teamId);
-	return { design, parent: { label: parent.label, input: parent.input, results: parent.results }, laminates };
+	// The fab profile the new revision is checked against: the parent's pick unless the form picks another.
+	const fabProfiles = await listFabProfiles(getDb(), design.teamId);
+	const parentFabProfileId = matchingFabProfileId(fabProfiles, (await revisionFabProfile(getDb(), parent.id)).profile);
+	return { design, parent: { label: parent.label, input: parent.input, results: parent.results }, laminates, fabProfiles, parentFabProfileId };
 };
 
 export const actions: Actions = {
@@ -25,7 +29,8 @@ export const actions: Actions = {
 		const note = String(data.get('note') ?? '');
 		const from = String(data.get('from') ?? '');
 		try {
-			const saved = await saveRevision(getDb(), { designId: design.id, parentLabel: from, userId: user.id, raw: documentFromFormValues(values), note });
+			const fabProfile = await resolveFabProfileChoice(getDb(), design.teamId, String(data.get('fabProfileId') ?? '') || null);
+			const saved = await saveRevision(getDb(), { designId: design.id, parentLabel: from, userId: user.id, raw: documentFromFormValues(values), note, fabProfile });
 			redirect(303, `/designs/${design.id}/r/${saved.label}`);
 		} catch (err) {
 			if (err instanceof InputError) return fail(400, { values, note, issues: fieldIssues(err.issues) });

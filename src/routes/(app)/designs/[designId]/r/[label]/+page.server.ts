@@ -3,6 +3,7 @@ import { error } from '@sveltejs/kit';
 import { getDb } from '$lib/server/db';
 import { findDesignWithRevisions } from '$lib/server/designs';
 import { requireDesign } from '$lib/server/designs/design-access';
+import { revisionFabProfile } from '$lib/server/fab-profiles';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
@@ -11,5 +12,5 @@ export const load: PageServerLoad = async (event) => {
 	const revision = found?.revisions.find((r) => r.label === event.params.label);
 	if (!found || !revision) error(404, 'Revision not found');
 	const children = found.revisions.filter((r) => r.parentId === revision.id).map((r) => r.label);
-	return { design, revision, children, labels: found.revisions.map((r) => r.label), canEdit };
+	return { design, revision, children, labels: found.revisions.map((r) => r.label), canEdit, fabCheck: await revisionFabProfile(getDb(), revision.id) };
 };
