@@ -3,3 +3,4 @@ export { buildFiles, buildFilesFromInput, type BuildFilesEnvironment } from './b
 export { buildBundle } from './build-bundle';
 export { exportFormats, parseExportFormats, type ExportFormat } from './export-formats';
 export { exportFileName, bundleFileName } from './file-names';
+export { buildArrayBenchFiles, arrayBenchDocument, ARRAY_BENCH_FORMATS } from './array-bench-files';
