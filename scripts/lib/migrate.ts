@@ -20,12 +20,13 @@ function migrationFolderProvider(folder: string): MigrationProvider {
 	};
 }
 
-export async function migrateToLatest(databaseUrl: string, log: (line: string) => void = console.log): Promise<number> {
+/** `folder`: where the migrations are (migrations/ by default; tests pass a scratch folder). */
+export async function migrateToLatest(databaseUrl: string, log: (line: string) => void = console.log, folder = path.join(rootDir, 'migrations')): Promise<number> {
 	const db = new Kysely<unknown>({ dialect: new PostgresDialect({ pool: new pg.Pool({ connectionString: databaseUrl, max: 1 }) }) });
 	try {
 		const migrator = new Migrator({
 			db,
-			provider: migrationFolderProvider(path.join(rootDir, 'migrations')),
+			provider: migrationFolderProvider(folder),
 			migrationTableName: 'schema_migration',
 			migrationLockTableName: 'schema_migration_lock'
 		});

@@ -67,8 +67,11 @@ export function getPool(): pg.Pool {
 				idleTimeoutMillis: 30_000
 			})
 		);
-		// A dropped connection must not crash the process; the next query reconnects.
+		// A dropped connection must not crash the process; the next query reconnects. pg-pool listens for
+		// errors only on idle clients: a client checked out when PostgreSQL goes away would emit an
+		// unhandled 'error' and end the process, so every client gets a listener of its own.
 		pool.on('error', (err) => console.error(`database pool: ${err.message}`));
+		pool.on('connect', (client) => client.on('error', (err) => console.error(`database connection: ${err.message}`)));
 	}
 	return pool;
 }
