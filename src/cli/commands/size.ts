@@ -9,7 +9,7 @@ export const summary = 'size a patch antenna (design-input JSON file, - for stdi
 /** Flag → where its value goes in the design-input document, and how it is converted. */
 const FLAGS: Record<string, { path: string[]; kind: 'number' | 'string'; convert?: (n: number) => number; text: string }> = {
 	'--shape': { path: ['shape'], kind: 'string', text: 'rectangular | circular | truncated-corner | nearly-square (default rectangular)' },
-	'--feed': { path: ['feed'], kind: 'string', text: 'inset | probe | edge | quarter-wave (default inset; probe for circular and nearly-square)' },
+	'--feed': { path: ['feed'], kind: 'string', text: 'inset | probe | edge | quarter-wave | aperture-coupled | proximity-coupled (default inset; probe for circular and nearly-square; the coupled feeds need a stack in the file)' },
 	'--frequency-ghz': { path: ['frequencyHz'], kind: 'number', convert: hzFromGhz, text: 'design frequency f0 in GHz, 0.1–100' },
 	'--er': { path: ['substrate', 'relativePermittivity'], kind: 'number', text: 'substrate relative permittivity εr, (1, 30]' },
 	'--height-mm': { path: ['substrate', 'heightMm'], kind: 'number', text: 'substrate thickness h in mm, (0, λ0/4)' },
@@ -25,7 +25,17 @@ const FLAGS: Record<string, { path: string[]; kind: 'number' | 'string'; convert
 	'--drill-mm': { path: ['probe', 'drillDiameterMm'], kind: 'number', text: 'probe drill diameter, mm (default 1.3)' },
 	'--clearance-mm': { path: ['probe', 'clearanceDiameterMm'], kind: 'number', text: 'probe anti-pad diameter in the ground, mm (default 4.1)' },
 	'--handedness': { path: ['handedness'], kind: 'string', text: 'rhcp | lhcp for circularly polarised shapes (default rhcp)' },
-	'--name': { path: ['name'], kind: 'string', text: 'design name (default "Untitled patch")' }
+	'--name': { path: ['name'], kind: 'string', text: 'design name (default "Untitled patch")' },
+	'--columns': { path: ['array', 'columns'], kind: 'number', text: 'array: elements along x, a power of two 1–64 (makes the design an array)' },
+	'--rows': { path: ['array', 'rows'], kind: 'number', text: 'array: elements along y, a power of two 1–64 (default 1)' },
+	'--spacing-x-wl': { path: ['array', 'spacingXWavelengths'], kind: 'number', text: 'array: pitch along x in λ0, [0.3, 2] (default 0.7)' },
+	'--spacing-y-wl': { path: ['array', 'spacingYWavelengths'], kind: 'number', text: 'array: pitch along y in λ0, [0.3, 2] (default 0.7)' },
+	'--scan-deg': { path: ['array', 'scanAngleDeg'], kind: 'number', text: 'array: largest scan angle from broadside, [0, 80]° (default 0)' },
+	'--parasitic-ratio': { path: ['parasitic', 'sizeRatio'], kind: 'number', text: 'stacked parasitic patch size over the driven one, [0.8, 1.3] (default 1.07; needs a three-copper stack)' },
+	'--slot-length-mm': { path: ['slot', 'lengthMm'], kind: 'number', text: 'aperture-coupled slot length, mm (default half the patch length)' },
+	'--slot-width-mm': { path: ['slot', 'widthMm'], kind: 'number', text: 'aperture-coupled slot width, mm (default a tenth of its length)' },
+	'--stub-length-mm': { path: ['slot', 'stubLengthMm'], kind: 'number', text: 'aperture-coupled open stub past the slot, mm (default λg/4)' },
+	'--overlap-mm': { path: ['proximity', 'overlapMm'], kind: 'number', text: 'proximity-coupled line overlap under the patch, mm (default half the patch length)' }
 };
 
 export const help = [
@@ -40,7 +50,9 @@ export const help = [
 	'and `warnings`.',
 	'',
 	'Input: a design-input JSON file, `-` to read it from stdin, or flags alone (they override the',
-	'file). `npm run cli -- schema design-input` prints the document\'s JSON Schema.',
+	'file). `npm run cli -- schema design-input` prints the document\'s JSON Schema. A stack of several',
+	'substrates (`stack`: copper, dielectric…, copper, top to bottom) is given in the file; arrays add',
+	'`array` (spacing, grating-lobe limit, corporate feed, array-factor directivity, gain, beamwidths, pattern).',
 	'',
 	'Flags (--flag value or --flag=value):',
 	...Object.entries(FLAGS).map(([flag, f]) => `  ${flag.padEnd(22)} ${f.text}`),

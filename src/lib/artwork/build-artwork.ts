@@ -5,6 +5,7 @@ import { buildDimensions } from './build-dimensions';
 import { buildLayeredStack, buildStack } from './build-stack';
 import { buildExtendedArtwork } from './build-extended-artwork';
 import { buildTopCopper } from './build-top-copper';
+import { probeModelOf } from './probe-model';
 import type { Artwork, ArtworkDrill, ArtworkLayer, ArtworkShape } from './types';
 
 /** Pen width for the board profile line: the outline is its centre line; width only makes it visible. */
@@ -70,7 +71,8 @@ export function buildArtwork(sized: SizedDesign): Artwork {
 			shape: sized.shape,
 			feedKind: sized.feedKind,
 			frequencyHz: sized.frequencyHz,
-			copperLayerCount: 2
+			copperLayerCount: 2,
+			...(probeModelOf(sized) ? { probe: probeModelOf(sized) } : {})
 		}
 	};
 }

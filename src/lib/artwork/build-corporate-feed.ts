@@ -8,7 +8,8 @@ export interface NetworkPiece {
 	readonly from: Point;
 	readonly to: Point;
 	readonly widthMm: number;
-	readonly role: 'feed-network' | 'network-transformer';
+	/** 'feed-line' for the port line that meets the board edge (as a single design's feed line does). */
+	readonly role: 'feed-network' | 'network-transformer' | 'feed-line';
 	/** Ends that meet another piece at a corner or a junction: drawn half a width longer so the copper overlaps. */
 	readonly extendFrom: boolean;
 	readonly extendTo: boolean;
@@ -87,7 +88,7 @@ export function layoutCorporateFeed(feedPoints: readonly (readonly Point[])[], a
 	if (rows === 1) {
 		const root = roots[0];
 		const port: Point = [root[0], Math.min(root[1] - P, lowestCopperYMm) - marginMm];
-		piece(root, port, w, 'feed-network', false, false, columns === 1 ? [0, 0] : undefined);
+		piece(root, port, w, 'feed-line', false, false, columns === 1 ? [0, 0] : undefined);
 		return { pieces, port };
 	}
 
@@ -122,7 +123,7 @@ export function layoutCorporateFeed(feedPoints: readonly (readonly Point[])[], a
 	piece(root, corner, w, 'feed-network', false, true);
 	const lowest = Math.min(lowestCopperYMm, ...pieces.map((p) => Math.min(p.from[1], p.to[1]) - p.widthMm / 2));
 	const port: Point = [x, lowest - marginMm];
-	piece(corner, port, w, 'feed-network', true, false);
+	piece(corner, port, w, 'feed-line', true, false);
 	return { pieces, port };
 }
 

@@ -5,4 +5,5 @@ export { patchPolygon } from './patch-polygon';
 export { needsExtendedArtwork } from './build-artwork';
 export { copperLayerIds } from './build-stack';
 export { translateShape } from './translate-shape';
+export { DEFAULT_PLATING_THICKNESS_UM, probeModelOf } from './probe-model';
 export { layoutCorporateFeed, pieceShape, type CorporateFeedLayout, type NetworkPiece } from './build-corporate-feed';

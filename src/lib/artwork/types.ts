@@ -129,5 +129,20 @@ export interface Artwork {
 		readonly feedKind: FeedKind;
 		readonly frequencyHz: number;
 		readonly copperLayerCount: number;
+		/** The probe model the design states (absent: not stated; the files say nothing about it). */
+		readonly probe?: ArtworkProbe;
 	};
+}
+
+/**
+ * What conducts in the probe hole. A solid pin fills the finished hole; a plated barrel is a copper
+ * tube whose inside diameter is the finished hole and whose wall is the plating (the fab drills
+ * about drillDiameterMm + 2 × plating and plates it back to the finished size).
+ */
+export interface ArtworkProbe {
+	readonly model: 'solid-pin' | 'plated-barrel';
+	/** Finished hole diameter. */
+	readonly drillDiameterMm: number;
+	/** Barrel wall copper; null for a solid pin. */
+	readonly platingThicknessUm: number | null;
 }

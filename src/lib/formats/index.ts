@@ -8,3 +8,4 @@ export * from './sweep';
 export * from './fab-notes';
 export * from './manifest';
 export * from './bundle';
+export * from './array-pattern';

@@ -84,14 +84,32 @@ export const insetOptionsSchema = z.strictObject({
 	notchGapMm: bounded(0.01, 20).optional()
 });
 
-export const probeOptionsSchema = z.strictObject({
-	/** Finished hole (pin) diameter. */
-	drillDiameterMm: bounded(0.1, 10).default(1.3),
-	/** Copper pad on the patch side around the pin. */
-	padDiameterMm: bounded(0.2, 20).optional(),
-	/** Anti-pad: clearance cut in the ground around the pin. */
-	clearanceDiameterMm: bounded(0.2, 30).default(4.1)
-});
+/**
+ * What conducts in the probe hole, for the simulation and the fab: a solid pin filling the finished
+ * hole (a connector's centre pin soldered in), or only the hole's plated copper barrel, a tube whose
+ * wall is the plating. Absent: not stated (the files say nothing about it, as before).
+ */
+export const probeModels = ['solid-pin', 'plated-barrel'] as const;
+export type ProbeModel = (typeof probeModels)[number];
+
+export const probeOptionsSchema = z
+	.strictObject({
+		/** Finished hole (pin) diameter. */
+		drillDiameterMm: bounded(0.1, 10).default(1.3),
+		/** Copper pad on the patch side around the pin. */
+		padDiameterMm: bounded(0.2, 20).optional(),
+		/** Anti-pad: clearance cut in the ground around the pin. */
+		clearanceDiameterMm: bounded(0.2, 30).default(4.1),
+		/** Solid pin or plated barrel (see probeModels); absent: not stated. */
+		model: z.enum(probeModels).optional(),
+		/** Barrel wall copper of a plated-barrel probe; absent: 25 µm (artwork's DEFAULT_PLATING_THICKNESS_UM). */
+		platingThicknessUm: bounded(5, 100).optional()
+	})
+	.superRefine((p, ctx) => {
+		if (p.platingThicknessUm !== undefined && p.model !== 'plated-barrel') {
+			ctx.addIssue({ code: 'custom', path: ['platingThicknessUm'], input: p.platingThicknessUm, message: 'only a probe.model "plated-barrel" takes a plating thickness' });
+		}
+	});
 
 /** One copper layer of an explicit stack (top to bottom). */
 export const stackCopperSchema = z.strictObject({
@@ -158,71 +176,71 @@ export const arrayOptionsSchema = z.strictObject({
 const isPowerOfTwo = (n: number) => Number.isInteger(n) && n >= 1 && (n & (n - 1)) === 0;
 
 const designInputObject = z.strictObject({
-		schemaVersion: z.literal(1).default(1),
-		name: z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).default('Untitled patch'),
-		/** Target resonant frequency f0. */
-		frequencyHz: bounded(100e6, 100e9),
-		shape: z.enum(patchShapes).default('rectangular'),
-		feed: z.enum(allFeedKinds).default('inset'),
-		substrate: substrateSchema,
-		/** Input resistance the feed point should present (usually the line's Z0). */
-		targetImpedanceOhm: bounded(10, 200).default(50),
-		/** Characteristic impedance of the feed line from the board edge. */
-		feedLineImpedanceOhm: bounded(10, 200).default(50),
-		/** Fixes the patch width; only the length is solved. Rectangular shapes only. */
-		patchWidthMm: bounded(0.1, 2000, {}).optional(),
-		/** Copper margin beyond the patch on every side; default 3h. */
-		groundMarginMm: bounded(0, 1000).optional(),
-		inset: insetOptionsSchema.default({}),
-		probe: probeOptionsSchema.default({ drillDiameterMm: 1.3, clearanceDiameterMm: 4.1 }),
-		/** Sense of circular polarisation for truncated-corner and nearly-square patches. */
-		handedness: z.enum(handednesses).default('rhcp'),
-		/** Add solder-mask layers to the exports. */
-		solderMask: z.boolean().default(false),
-		/** Explicit stack, top to bottom; absent: copper / substrate / copper. With a stack, its dielectrics' εr, tanδ and h are used instead of the substrate's. */
-		stack: layerStackSchema.optional(),
-		/** Aperture-coupled starting sizes (feed "aperture-coupled"). */
-		slot: slotOptionsSchema.optional(),
-		/** Proximity-coupled starting overlap (feed "proximity-coupled"). */
-		proximity: proximityOptionsSchema.optional(),
-		/** A parasitic patch on the top copper over the driven patch (needs a three-copper stack). */
-		parasitic: parasiticOptionsSchema.optional(),
-		/** Repeat the element as a 1×N or N×M array with a corporate feed. */
-		array: arrayOptionsSchema.optional()
-	});
+	schemaVersion: z.literal(1).default(1),
+	name: z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).default('Untitled patch'),
+	/** Target resonant frequency f0. */
+	frequencyHz: bounded(100e6, 100e9),
+	shape: z.enum(patchShapes).default('rectangular'),
+	feed: z.enum(allFeedKinds).default('inset'),
+	substrate: substrateSchema,
+	/** Input resistance the feed point should present (usually the line's Z0). */
+	targetImpedanceOhm: bounded(10, 200).default(50),
+	/** Characteristic impedance of the feed line from the board edge. */
+	feedLineImpedanceOhm: bounded(10, 200).default(50),
+	/** Fixes the patch width; only the length is solved. Rectangular shapes only. */
+	patchWidthMm: bounded(0.1, 2000, {}).optional(),
+	/** Copper margin beyond the patch on every side; default 3h. */
+	groundMarginMm: bounded(0, 1000).optional(),
+	inset: insetOptionsSchema.default({}),
+	probe: probeOptionsSchema.default({ drillDiameterMm: 1.3, clearanceDiameterMm: 4.1 }),
+	/** Sense of circular polarisation for truncated-corner and nearly-square patches. */
+	handedness: z.enum(handednesses).default('rhcp'),
+	/** Add solder-mask layers to the exports. */
+	solderMask: z.boolean().default(false),
+	/** Explicit stack, top to bottom; absent: copper / substrate / copper. With a stack, its dielectrics' εr, tanδ and h are used instead of the substrate's. */
+	stack: layerStackSchema.optional(),
+	/** Aperture-coupled starting sizes (feed "aperture-coupled"). */
+	slot: slotOptionsSchema.optional(),
+	/** Proximity-coupled starting overlap (feed "proximity-coupled"). */
+	proximity: proximityOptionsSchema.optional(),
+	/** A parasitic patch on the top copper over the driven patch (needs a three-copper stack). */
+	parasitic: parasiticOptionsSchema.optional(),
+	/** Repeat the element as a 1×N or N×M array with a corporate feed. */
+	array: arrayOptionsSchema.optional()
+});
 
 export const designInputSchema = designInputObject.superRefine((d, ctx) => {
-		const wavelengthMm = (SPEED_OF_LIGHT_M_PER_S / d.frequencyHz) * 1000;
-		if (d.substrate.heightMm >= wavelengthMm / 4) {
-			ctx.addIssue({
-				code: 'custom',
-				path: ['substrate', 'heightMm'],
-				input: d.substrate.heightMm,
-				message: `must be less than λ0/4 = ${(wavelengthMm / 4).toFixed(3)} mm at this frequency; allowed range (0, ${(wavelengthMm / 4).toFixed(3)})`
-			});
-		}
-		if (d.patchWidthMm !== undefined && d.shape !== 'rectangular') {
-			ctx.addIssue({ code: 'custom', path: ['patchWidthMm'], input: d.patchWidthMm, message: 'only a rectangular patch takes a fixed width' });
-		}
-		const feedsForShape = [...allowedFeeds[d.shape], ...allowedLayeredFeeds[d.shape]];
-		if (!feedsForShape.includes(d.feed)) {
-			ctx.addIssue({
-				code: 'custom',
-				path: ['feed'],
-				input: d.feed,
-				message: `a ${d.shape} patch takes one of: ${feedsForShape.join(', ')}`
-			});
-		}
-		layeredRules(d, ctx);
-		if (d.probe.clearanceDiameterMm <= d.probe.drillDiameterMm) {
-			ctx.addIssue({
-				code: 'custom',
-				path: ['probe', 'clearanceDiameterMm'],
-				input: d.probe.clearanceDiameterMm,
-				message: `must be larger than probe.drillDiameterMm (${d.probe.drillDiameterMm})`
-			});
-		}
-	});
+	const wavelengthMm = (SPEED_OF_LIGHT_M_PER_S / d.frequencyHz) * 1000;
+	if (d.substrate.heightMm >= wavelengthMm / 4) {
+		ctx.addIssue({
+			code: 'custom',
+			path: ['substrate', 'heightMm'],
+			input: d.substrate.heightMm,
+			message: `must be less than λ0/4 = ${(wavelengthMm / 4).toFixed(3)} mm at this frequency; allowed range (0, ${(wavelengthMm / 4).toFixed(3)})`
+		});
+	}
+	if (d.patchWidthMm !== undefined && d.shape !== 'rectangular') {
+		ctx.addIssue({ code: 'custom', path: ['patchWidthMm'], input: d.patchWidthMm, message: 'only a rectangular patch takes a fixed width' });
+	}
+	const feedsForShape = [...allowedFeeds[d.shape], ...allowedLayeredFeeds[d.shape]];
+	if (!feedsForShape.includes(d.feed)) {
+		ctx.addIssue({
+			code: 'custom',
+			path: ['feed'],
+			input: d.feed,
+			message: `a ${d.shape} patch takes one of: ${feedsForShape.join(', ')}`
+		});
+	}
+	layeredRules(d, ctx);
+	if (d.probe.clearanceDiameterMm <= d.probe.drillDiameterMm) {
+		ctx.addIssue({
+			code: 'custom',
+			path: ['probe', 'clearanceDiameterMm'],
+			input: d.probe.clearanceDiameterMm,
+			message: `must be larger than probe.drillDiameterMm (${d.probe.drillDiameterMm})`
+		});
+	}
+});
 
 /** The document as written by a user (defaults may be missing). */
 export type DesignInputDocument = z.input<typeof designInputSchema>;
@@ -248,6 +266,9 @@ function layeredRules(d: ParsedDocument, ctx: RefineContext): void {
 		s.forEach((layer, i) => {
 			if (i > 0 && layer.kind === 'copper' && s[i - 1].kind === 'copper') issue(['stack', i], layer.kind, 'two copper layers need a dielectric between them');
 		});
+		const totalMm = s.reduce((a, l) => a + (l.kind === 'dielectric' ? l.heightMm : 0), 0);
+		const quarterWaveMm = ((SPEED_OF_LIGHT_M_PER_S / d.frequencyHz) * 1000) / 4;
+		if (totalMm >= quarterWaveMm) issue(['stack'], totalMm, `the dielectrics add up to ${totalMm.toFixed(3)} mm; they must stay under λ0/4 = ${quarterWaveMm.toFixed(3)} mm at this frequency; allowed range (0, ${quarterWaveMm.toFixed(3)})`);
 		const coppers = s.filter((l) => l.kind === 'copper').length;
 		if (coppers !== need) issue(['stack'], d.stack, `a ${d.feed} feed${d.parasitic ? ' with a parasitic patch' : ''} needs exactly ${need} copper layers; this stack has ${coppers}`);
 	} else if (need === 3) {

@@ -39,6 +39,8 @@ describe('design input: stacks, layered feeds, arrays', () => {
 		{ name: 'a parasitic patch on a probe feed', doc: layeredDocument({ feed: 'probe', parasitic: {}, stack: [...threeCopperStack] }), path: 'parasitic', message: /inset, edge or quarter-wave/ },
 		// slot options on the wrong feed
 		{ name: 'slot options on an inset feed', doc: layeredDocument({ feed: 'inset', slot: { lengthMm: 3 } }), path: 'slot', message: /only an aperture-coupled feed/ },
+		// dielectrics thicker than λ0/4 in total (30.6 mm at 2.45 GHz)
+		{ name: 'a stack thicker than λ0/4', doc: layeredDocument({ stack: [{ kind: 'copper' }, { kind: 'dielectric', relativePermittivity: 1.1, heightMm: 20 }, { kind: 'dielectric', relativePermittivity: 1.1, heightMm: 20 }, { kind: 'copper' }] }), path: 'stack', message: /under λ0\/4 = 30.5/ },
 		// spacing out of range
 		{ name: 'a spacing of 3 λ0', doc: layeredDocument({ array: { columns: 2, spacingXWavelengths: 3 } }), path: 'array.spacingXWavelengths', message: /allowed range \[0.3, 2\]/ }
 	])('refuses $name with an InputError at $path', ({ doc, path, message }) => {

@@ -10,6 +10,7 @@ import { toGerber } from '../gerber';
 import { buildManifest, serializeManifest, type ExportFile } from '../manifest';
 import { toSvg, type SvgWindow } from '../svg';
 import { buildSweepDocument, serializeSweep } from '../sweep';
+import { buildArrayPatternDocument, serializeArrayPattern } from '../array-pattern';
 import { exportFormats, type ExportFormat } from './export-formats';
 import { exportFileName } from './file-names';
 
@@ -41,6 +42,9 @@ export function buildFiles(sized: SizedDesign, meta: ExportMeta, formats: readon
 		// the design itself as a one-point sweep, so tools reading sweeps read single designs too
 		const doc = buildSweepDocument(sized.input, { axes: [{ field: 'frequencyHz', values: [sized.input.frequencyHz] }] }, meta);
 		files.push(text(exportFileName(meta, 'design', 'sweep.json'), serializeSweep(doc)));
+		// arrays only: the array-factor estimate with its plot-ready cuts
+		const pattern = buildArrayPatternDocument(sized, meta);
+		if (pattern) files.push(text(exportFileName(meta, 'array-pattern', 'json'), serializeArrayPattern(pattern)));
 	}
 	const manifestName = exportFileName(meta, 'manifest', 'json');
 	if (want('notes')) {

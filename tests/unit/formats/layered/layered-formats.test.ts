@@ -76,10 +76,18 @@ describe('layered designs and arrays in every format', () => {
 		const files = buildFiles(c.sized, meta, undefined, { svgWindow: createSVGWindow() });
 		const names = files.map((f) => f.name);
 		expect(names).toEqual(
-			['copper-top.gbr', 'copper-inner-1.gbr', 'copper-bottom.gbr', 'profile.gbr', 'drawing.dxf', 'drawing.svg', 'design.sweep.json', 'fab-notes.txt', 'manifest.json'].map((n) => `layered-demo-A.${n}`)
+			['copper-top.gbr', 'copper-inner-1.gbr', 'copper-bottom.gbr', 'profile.gbr', 'drawing.dxf', 'drawing.svg', 'design.sweep.json', 'array-pattern.json', 'fab-notes.txt', 'manifest.json'].map((n) => `layered-demo-A.${n}`)
 		);
 		const notes = new TextDecoder().decode(files.find((f) => f.name.endsWith('fab-notes.txt'))!.bytes);
 		expect(notes).toContain('copper-inner-1');
 		expect(notes).toContain('bonding film');
+		const pattern = JSON.parse(new TextDecoder().decode(files.find((f) => f.name.endsWith('array-pattern.json'))!.bytes));
+		expect(pattern.pattern.anglesDeg.length).toBe(pattern.pattern.xzDb.length);
+		expect(pattern.columns * pattern.rows).toBe(8);
+	});
+
+	it('writes no array-pattern file for a single element', () => {
+		const c = cases.find((x) => x.name === 'aperture-coupled patch')!;
+		expect(buildFiles(c.sized, meta, ['sweep']).map((f) => f.name)).toEqual(['layered-demo-A.design.sweep.json', 'layered-demo-A.manifest.json']);
 	});
 });

@@ -1,0 +1,56 @@
+// Sized array → the array-pattern document (plot-ready cuts and the figures), and its bytes.
+import type { SizedDesign } from '../../rf';
+import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
+
+export const ARRAY_PATTERN_FORMAT = 'fringefield-array-pattern';
+export const ARRAY_PATTERN_FORMAT_VERSION = 1;
+
+export interface ArrayPatternDocument {
+	readonly format: typeof ARRAY_PATTERN_FORMAT;
+	readonly formatVersion: typeof ARRAY_PATTERN_FORMAT_VERSION;
+	readonly design: { name: string; slug: string; revision: string; revisionDate: string; software: string };
+	readonly frequencyHz: number;
+	readonly columns: number;
+	readonly rows: number;
+	readonly spacingXWavelengths: number;
+	readonly spacingYWavelengths: number;
+	readonly scanAngleDeg: number;
+	readonly gratingLobeLimitWavelengths: number;
+	readonly arrayFactorDirectivityDbi: number;
+	readonly gainDbi: number;
+	readonly halfPowerBeamwidthXzDeg: number | null;
+	readonly halfPowerBeamwidthYzDeg: number | null;
+	/** What the numbers are: isotropic elements, no coupling, no feed loss. */
+	readonly note: string;
+	/** xz: the scan plane (φ = 0); yz: the plane across it through the beam. Normalised power, dB. */
+	readonly pattern: { anglesDeg: number[]; xzDb: number[]; yzDb: number[] };
+}
+
+/** The document, or null for a design that is not an array. */
+export function buildArrayPatternDocument(sized: SizedDesign, meta: ExportMeta): ArrayPatternDocument | null {
+	const a = sized.array;
+	if (!a) return null;
+	return {
+		format: ARRAY_PATTERN_FORMAT,
+		formatVersion: ARRAY_PATTERN_FORMAT_VERSION,
+		design: { name: meta.designName, slug: meta.designSlug, revision: meta.revisionLabel, revisionDate: meta.revisionDate, software: `${SOFTWARE_NAME} ${meta.softwareVersion}` },
+		frequencyHz: sized.frequencyHz,
+		columns: a.columns,
+		rows: a.rows,
+		spacingXWavelengths: a.spacingXWavelengths,
+		spacingYWavelengths: a.spacingYWavelengths,
+		scanAngleDeg: a.scanAngleDeg,
+		gratingLobeLimitWavelengths: a.gratingLobeLimitWavelengths,
+		arrayFactorDirectivityDbi: a.factor.arrayFactorDirectivityDbi,
+		gainDbi: a.factor.gainDbi,
+		halfPowerBeamwidthXzDeg: a.factor.halfPowerBeamwidthXzDeg,
+		halfPowerBeamwidthYzDeg: a.factor.halfPowerBeamwidthYzDeg,
+		note: 'Array factor of isotropic elements; gain = element gain estimate + 10·log10(element count), without mutual coupling or feed-network loss. Estimates, not measurements.',
+		pattern: a.factor.pattern
+	};
+}
+
+/** Compact JSON with a final newline. */
+export function serializeArrayPattern(doc: ArrayPatternDocument): string {
+	return JSON.stringify(doc) + '\n';
+}

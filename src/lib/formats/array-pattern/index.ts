@@ -1,0 +1,2 @@
+// Array-pattern writer: the array-factor figures and plot-ready cuts as JSON.
+export * from './build';
