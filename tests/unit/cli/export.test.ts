@@ -6,7 +6,9 @@ import { existsSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } fro
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it, vi } from 'vitest';
+import Ajv2020 from 'ajv/dist/2020';
 import * as exportCommand from '../../../src/cli/commands/export';
+import { sweepJsonSchema } from '../../../src/lib/formats/sweep/schema';
 import { STANDARD_QUICK_TURN_PROFILE } from '../../../src/lib/schemas/fab-profile';
 import { goldenBundle, goldenDesign } from '../../fixtures/bundle/golden-bundle';
 
@@ -133,5 +135,65 @@ describe('cli export: the design-rule gate and the read-back self-check', () => 
 		expect(logged).toMatchObject({ event: 'export.read-back-mismatch', supportId });
 		expect(logged.mismatches.some((m: { layerKey: string }) => m.layerKey === 'copper-L1')).toBe(true);
 		expect(existsSync(out)).toBe(false);
+	});
+});
+
+describe('cli export: the probe model (solid pin or plated barrel) in the drill file, fab notes and sweep stack', () => {
+	// ajv 8 (draft 2020-12) is the outside reference for the published sweep schema.
+	const validate = new Ajv2020({ allErrors: true, strict: true, strictTypes: false, strictTuples: false }).compile(sweepJsonSchema as object);
+	const files = (doc: unknown, tag: string) => {
+		const file = join(dir, `probe-${tag}.json`);
+		writeFileSync(file, JSON.stringify(doc));
+		const out = join(dir, `probe-${tag}`);
+		const r = cli([file, '--out', out, '--formats', 'drill,sweep,notes', '--revision', 'B', '--date', '2026-11-20']);
+		expect(r.err).toBe('');
+		expect(r.code).toBe(0);
+		const read = (part: string) => readFileSync(join(out, `sunroof-gnss-B.${part}`), 'utf8');
+		return { drill: read('drill-plated.drl'), notes: read('fab-notes.txt'), sweep: JSON.parse(read('design.sweep.json')) };
+	};
+
+	it('says nothing about the probe when no model is stated (today’s files)', () => {
+		const f = files(goldenDesign, 'none');
+		expect(f.drill).not.toMatch(/probe:/);
+		expect(f.notes).not.toMatch(/Probe hole/);
+		expect(f.sweep.points[0].stack.some((l: { kind: string }) => l.kind === 'probe')).toBe(false);
+	});
+
+	it('carries a plated barrel with its plating (default 25 µm) into the drill comment, the notes and the sweep stack', () => {
+		const f = files({ ...goldenDesign, probe: { drillDiameterMm: 1.3, clearanceDiameterMm: 4.1, model: 'plated-barrel' } }, 'barrel');
+		expect(f.drill).toMatch(/^; probe: plated barrel with 25 um copper wall; finished hole 1\.300 mm$/m);
+		expect(f.notes).toContain('   Probe hole: plated barrel, at least 25 µm copper on the hole wall, finished at 1.3 mm (the simulation models this barrel).');
+		const stack = f.sweep.points[0].stack;
+		const probe = stack.at(-1);
+		expect(probe).toMatchObject({ kind: 'probe', id: 'probe-drill', model: 'plated-barrel', drillDiameterMm: 1.3, platingThicknessUm: 25, zMm: 0 });
+		// it spans the whole stack: the sum of the slabs' thicknesses
+		const slabs = stack.filter((l: { kind: string }) => l.kind !== 'probe');
+		expect(probe.thicknessMm).toBeCloseTo(slabs.reduce((s: number, l: { thicknessMm: number }) => s + l.thicknessMm, 0), 9);
+		expect(validate(f.sweep), JSON.stringify(validate.errors)).toBe(true);
+	});
+
+	it('carries a solid pin, and a stated plating thickness, through the same three files', () => {
+		const pin = files({ ...goldenDesign, probe: { drillDiameterMm: 1.3, clearanceDiameterMm: 4.1, model: 'solid-pin' } }, 'pin');
+		expect(pin.drill).toMatch(/^; probe: solid pin through the 1\.300 mm finished hole$/m);
+		expect(pin.notes).toContain('Probe hole: a solid pin goes through the 1.3 mm finished hole');
+		expect(pin.sweep.points[0].stack.at(-1)).toMatchObject({ kind: 'probe', model: 'solid-pin', platingThicknessUm: null });
+		expect(validate(pin.sweep), JSON.stringify(validate.errors)).toBe(true);
+		const thick = files({ ...goldenDesign, probe: { drillDiameterMm: 1.3, clearanceDiameterMm: 4.1, model: 'plated-barrel', platingThicknessUm: 35 } }, 'thick');
+		expect(thick.drill).toContain('; probe: plated barrel with 35 um copper wall');
+	});
+
+	it.each([
+		// a plating thickness on a solid pin makes no sense
+		{ name: 'a plating thickness on a solid pin', probe: { model: 'solid-pin', platingThicknessUm: 25 }, pattern: /^probe\.platingThicknessUm: 25 — only a probe\.model "plated-barrel"/ },
+		// an unknown model name
+		{ name: 'an unknown model', probe: { model: 'hollow' }, pattern: /^probe\.model: "hollow" — / },
+		// plating out of range
+		{ name: 'plating out of range', probe: { model: 'plated-barrel', platingThicknessUm: 500 }, pattern: /^probe\.platingThicknessUm: 500 — .*allowed range \[5, 100\]/ }
+	])('exits 2 with one line for $name', ({ probe, pattern }) => {
+		const file = join(dir, `bad-probe-${probe.model}-${probe.platingThicknessUm ?? 0}.json`);
+		writeFileSync(file, JSON.stringify({ ...goldenDesign, probe: { drillDiameterMm: 1.3, clearanceDiameterMm: 4.1, ...probe } }));
+		const r = cli([file, '--out', join(dir, 'never-probe')]);
+		expect(r.code).toBe(2);
+		expect(r.err.trim()).toMatch(pattern);
 	});
 });

@@ -1,7 +1,15 @@
 // Artwork drills of one kind (plated or not) → Excellon commands; tools numbered by ascending diameter.
-import type { Artwork } from '../../artwork';
+import type { Artwork, ArtworkProbe } from '../../artwork';
 import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
 import type { ExcellonCommand } from './commands';
+
+/** The stated probe model as one ASCII comment line (drill machines' software may not read UTF-8). */
+export function probeComment(probe: ArtworkProbe): string {
+	const hole = probe.drillDiameterMm.toFixed(3);
+	return probe.model === 'plated-barrel'
+		? `probe: plated barrel with ${probe.platingThicknessUm} um copper wall; finished hole ${hole} mm`
+		: `probe: solid pin through the ${hole} mm finished hole`;
+}
 
 export function buildExcellonCommands(artwork: Artwork, plated: boolean, meta: ExportMeta): ExcellonCommand[] {
 	const drills = artwork.drills.filter((d) => d.plated === plated);
@@ -9,6 +17,8 @@ export function buildExcellonCommands(artwork: Artwork, plated: boolean, meta: E
 	const to = Math.max(...drills.map((d) => d.toCopper), artwork.metadata.copperLayerCount);
 	const out: ExcellonCommand[] = [{ type: 'header-start' }];
 	out.push({ type: 'comment', text: `${SOFTWARE_NAME} ${meta.designName} revision ${meta.revisionLabel}: ${plated ? 'plated' : 'non-plated'} holes` });
+	const probe = artwork.metadata.probe;
+	if (probe && plated && drills.some((d) => d.role === 'probe')) out.push({ type: 'comment', text: probeComment(probe) });
 	out.push({ type: 'attribute', name: 'TF.GenerationSoftware', values: [SOFTWARE_NAME, SOFTWARE_NAME, meta.softwareVersion] });
 	out.push({ type: 'attribute', name: 'TF.CreationDate', values: [`${meta.revisionDate}T00:00:00+00:00`] });
 	out.push({ type: 'attribute', name: 'TF.SameCoordinates', values: [`${meta.designSlug}-${meta.revisionLabel}`] });

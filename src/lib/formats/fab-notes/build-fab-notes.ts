@@ -75,6 +75,12 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 				.map(([key, v]) => `   - ${key} mm finished hole, ${v.count} hole(s)${v.plated ? ', plated through' : ''}`)
 				.join('\n')
 		: '   None: this design has no holes.';
+	const probe = artwork.metadata.probe;
+	const probeLine = !probe
+		? ''
+		: probe.model === 'plated-barrel'
+			? `\n   Probe hole: plated barrel, at least ${probe.platingThicknessUm} µm copper on the hole wall, finished at ${n(probe.drillDiameterMm)} mm (the simulation models this barrel).`
+			: `\n   Probe hole: a solid pin goes through the ${n(probe.drillDiameterMm)} mm finished hole (the simulation models a solid pin).`;
 	const cautions = [
 		'Do not scale, mirror or rotate the artwork; top copper is viewed from the top.',
 		'Hold etched feature tolerance at ±0.025 mm or better on patch and feed edges; report over-etch.',
@@ -101,7 +107,7 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 		maskAdvice: extras.solderMask
 			? 'Solder mask: openings as drawn on the mask layers; the antenna copper stays bare.'
 			: 'No solder mask: leave both sides bare (mask over the patch would shift its resonance).',
-		drillTable,
+		drillTable: drillTable + probeLine,
 		fileList: extras.fileNames.map((f) => `   - ${f}`).join('\n'),
 		cautions
 	});

@@ -1,11 +1,22 @@
 // Base design + plan → sweep document: each point sized by rf.size and drawn by artwork.buildArtwork.
-import { buildArtwork } from '../../artwork';
+import { buildArtwork, type Artwork, type StackLayer } from '../../artwork';
 import { GeometryError } from '../../geometry';
 import { size } from '../../rf';
 import { InputError, parseDesignInput } from '../../schemas';
 import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
-import { SWEEP_FORMAT, SWEEP_FORMAT_VERSION, SWEEP_SCHEMA_PATH, type SweepDocument, type SweepPoint } from './document';
+import { SWEEP_FORMAT, SWEEP_FORMAT_VERSION, SWEEP_SCHEMA_PATH, type SweepDocument, type SweepPoint, type SweepProbeEntry } from './document';
 import { axisValues, parseSweepPlan, type SweepPlan } from './plan';
+
+/** The stack, with the stated probe model appended so the simulation models what will be built (unchanged when none is stated). */
+function withProbe(artwork: Artwork): readonly (StackLayer | SweepProbeEntry)[] {
+	const probe = artwork.metadata.probe;
+	const hole = artwork.drills.find((d) => d.role === 'probe');
+	if (!probe || !hole) return artwork.stack;
+	const bottomMm = Math.min(...artwork.stack.map((l) => l.zMm));
+	const topMm = Math.max(...artwork.stack.map((l) => l.zMm + l.thicknessMm));
+	const entry: SweepProbeEntry = { kind: 'probe', id: hole.id, ...probe, center: [hole.center[0], hole.center[1]], zMm: bottomMm, thicknessMm: topMm - bottomMm };
+	return [...artwork.stack, entry];
+}
 
 /** Every point's field values, in order: the last axis varies fastest on a grid. */
 export function sweepCombinations(plan: SweepPlan): Record<string, number>[] {
@@ -53,7 +64,7 @@ export function buildSweepDocument(baseRaw: unknown, planRaw: unknown, meta: Exp
 				board: artwork.board,
 				layers: artwork.layers,
 				drills: artwork.drills,
-				stack: artwork.stack
+				stack: withProbe(artwork)
 			};
 		} catch (e) {
 			if (e instanceof InputError) return { index, status: 'refused', parameters, error: { kind: 'input', path: e.first.path, message: e.first.message } };

@@ -1,5 +1,5 @@
 // The sweep document's TypeScript shape (version 1); its JSON Schema twin is in schema.ts.
-import type { ArtworkDrill, ArtworkLayer, StackLayer } from '../../artwork';
+import type { ArtworkDrill, ArtworkLayer, ArtworkProbe, StackLayer } from '../../artwork';
 import type { DesignInput } from '../../schemas';
 import type { SizedDesign } from '../../rf';
 import type { SweepPlan } from './plan';
@@ -10,6 +10,15 @@ export const SWEEP_FORMAT_VERSION = 1;
 export const SWEEP_SCHEMA_PATH = '/schemas/sweep-v1.json';
 
 export type SweepDerived = Omit<SizedDesign, 'input' | 'warnings'>;
+
+/** What conducts in the probe hole, at the end of a point's stack: it spans the whole stack (not a slab). */
+export interface SweepProbeEntry extends ArtworkProbe {
+	readonly kind: 'probe';
+	readonly id: string;
+	readonly center: readonly [number, number];
+	readonly zMm: number;
+	readonly thicknessMm: number;
+}
 
 export type SweepPoint =
 	| {
@@ -22,7 +31,8 @@ export type SweepPoint =
 			readonly board: { widthMm: number; lengthMm: number };
 			readonly layers: readonly ArtworkLayer[];
 			readonly drills: readonly ArtworkDrill[];
-			readonly stack: readonly StackLayer[];
+			/** The slabs top to bottom, then (when the design states a probe model) the probe entry. */
+			readonly stack: readonly (StackLayer | SweepProbeEntry)[];
 	  }
 	| {
 			readonly index: number;

@@ -210,6 +210,22 @@ export const sweepJsonSchema = {
 						lossTangent: { type: 'number', minimum: 0 },
 						bonding: { type: 'boolean', description: 'true for a bonding film (prepreg) between cores' }
 					}
+				},
+				{
+					type: 'object',
+					description: 'Not a slab: what conducts in the probe hole, listed last when the design states a probe model. It spans the stack from zMm over thicknessMm; a plated barrel is a copper tube of inside diameter drillDiameterMm and wall platingThicknessUm, a solid pin fills the hole.',
+					required: ['kind', 'id', 'model', 'center', 'drillDiameterMm', 'platingThicknessUm', 'zMm', 'thicknessMm'],
+					additionalProperties: false,
+					properties: {
+						kind: { const: 'probe' },
+						id: { type: 'string' },
+						model: { enum: ['solid-pin', 'plated-barrel'] },
+						center: point,
+						drillDiameterMm: { type: 'number', exclusiveMinimum: 0 },
+						platingThicknessUm: { type: ['number', 'null'], exclusiveMinimum: 0 },
+						zMm: mm,
+						thicknessMm: { type: 'number', exclusiveMinimum: 0 }
+					}
 				}
 			]
 		}
