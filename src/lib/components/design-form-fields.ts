@@ -1,6 +1,6 @@
 // The editor's fields: how each maps to a path of the design-input document, with its label and unit.
 // Pure: the browser uses it for live validation and preview, the form action for parsing the post.
-import { feedKinds, handednesses, patchShapes, type DesignInput, type DesignInputDocument, type InputIssue } from '../schemas';
+import { feedKinds, handednesses, patchShapes, probeModels, type DesignInput, type DesignInputDocument, type InputIssue } from '../schemas';
 import { ghzFromHz, hzFromGhz } from '../units';
 
 export type FieldKind = 'text' | 'number' | 'choice' | 'flag';
@@ -45,6 +45,8 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'probe.drillDiameterMm', path: 'probe.drillDiameterMm', label: 'Probe drill ⌀', unit: 'mm', kind: 'number', group: 'Feed', step: 'any' },
 	{ name: 'probe.padDiameterMm', path: 'probe.padDiameterMm', label: 'Probe pad ⌀', unit: 'mm', kind: 'number', group: 'Feed', optional: true, hint: 'blank = drill + 0.5 mm', step: 'any' },
 	{ name: 'probe.clearanceDiameterMm', path: 'probe.clearanceDiameterMm', label: 'Ground clearance ⌀', unit: 'mm', kind: 'number', group: 'Feed', step: 'any' },
+	{ name: 'probe.model', path: 'probe.model', label: 'Probe model', unit: '', kind: 'choice', group: 'Feed', optional: true, hint: 'blank = not stated', choices: ['', ...probeModels] },
+	{ name: 'probe.platingThicknessUm', path: 'probe.platingThicknessUm', label: 'Barrel plating', unit: 'µm', kind: 'number', group: 'Feed', optional: true, hint: 'plated barrel; blank = 25 µm', step: 'any' },
 	{ name: 'patchWidthMm', path: 'patchWidthMm', label: 'Fixed patch width W', unit: 'mm', kind: 'number', group: 'Board', optional: true, hint: 'rectangular only; blank = solved', step: 'any' },
 	{ name: 'groundMarginMm', path: 'groundMarginMm', label: 'Ground margin', unit: 'mm', kind: 'number', group: 'Board', optional: true, hint: 'blank = 3 h', step: 'any' },
 	{ name: 'solderMask', path: 'solderMask', label: 'Add solder-mask layers', unit: '', kind: 'flag', group: 'Board' }
