@@ -11,6 +11,8 @@ import { STANDARD_QUICK_TURN_PROFILE } from '../../../src/lib/schemas/fab-profil
 import type { RequestIdentity, RequestUser } from '../../../src/lib/server/auth/request-identity';
 import * as uiExportRoute from '../../../src/routes/(app)/designs/[designId]/r/[label]/export/[format=format]/+server';
 import * as apiExportRoute from '../../../src/routes/api/v1/designs/[designId]/revisions/[label]/export/[format=format]/+server';
+import * as refusedPage from '../../../src/routes/(app)/designs/[designId]/r/[label]/export/refused/+page.server';
+import { call } from '../accounts/helpers/route-event';
 import { callRoute, createWorkspace, demoInput, identityOf, type CallerKind, type Workspace } from './workspace-fixture';
 
 type Handler = (event: RequestEvent) => Response | Promise<Response>;
@@ -170,6 +172,29 @@ describe('the design-rule gate', () => {
 		const err = await exportRevision(target, 'svg', { userId: ws.people.owner.id, via: 'ui' }).catch((e) => e);
 		expect(err).toBeInstanceOf(ExportRefusedError);
 		expect((err as ExportRefusedError).violations).toHaveLength(2);
+	});
+});
+
+describe('the refusal page', () => {
+	it.each([
+		['viewer', 'ok', false],
+		['editor', 'ok', true],
+		['owner', 'ok', true],
+		['non-member', 404, false]
+	] as const)('for a %s: %s, waiver form %s', async (who, outcome, canWaive) => {
+		const r = await call(refusedPage.load as never, { identity: await identityOf(ws, who, 'session'), path: `/designs/${ws.designId}/r/${narrowNotch}/export/refused?format=gerber`, params: { designId: ws.designId, label: narrowNotch } });
+		expect(r.outcome).toBe(outcome);
+		if (outcome !== 'ok') return;
+		const data = r.data as { canWaive: boolean; violations: { ruleId: string }[]; format: string; profile: { name: string } };
+		expect(data.canWaive).toBe(canWaive);
+		expect(data.format).toBe('gerber');
+		expect(data.violations.map((v) => v.ruleId)).toEqual(['slot-width', 'slot-width']);
+		expect(data.profile.name).toBe(STANDARD_QUICK_TURN_PROFILE.name);
+	});
+
+	it('lists nothing for a clean revision', async () => {
+		const r = await call(refusedPage.load as never, { identity: await identityOf(ws, 'editor', 'session'), path: `/designs/${ws.designId}/r/A/export/refused`, params: { designId: ws.designId, label: 'A' } });
+		expect((r.data as { violations: unknown[] }).violations).toEqual([]);
 	});
 });
 
