@@ -1,8 +1,6 @@
 // `measure FILE.s1p [--design design.json]`: analyse a measured Touchstone S11 sweep and, given the design, propose a retune.
 import { readFileSync } from 'node:fs';
-import { readTouchstone } from '../../lib/formats/touchstone/read-touchstone';
-import { portCountFromFileName } from '../../lib/formats/touchstone/port-count-from-file-name';
-import { s11FromNetwork } from '../../lib/formats/touchstone/s11-from-network';
+import { describeNetwork, portCountFromFileName, readTouchstone, s11FromNetwork } from '../../lib/formats/touchstone';
 import { analyzeMeasuredResponse, DEFAULT_MATCH_THRESHOLD_DB } from '../../lib/rf/measured-response';
 import { proposeRetune } from '../../lib/rf/retune';
 import { InputError, formatIssue } from '../../lib/schemas/input-error';
@@ -105,20 +103,9 @@ export async function run(argv: string[]): Promise<number> {
 			retune = withSource(designFile, () => proposeRetune(document, response.resonance.frequencyHz, { holdWidth: args.holdWidth }));
 		}
 
-		const first = network.points[0];
-		const last = network.points[network.points.length - 1];
 		const output = {
 			file: args.file,
-			touchstone: {
-				version: network.version,
-				portCount: network.portCount,
-				frequencyUnit: network.frequencyUnit,
-				format: network.format,
-				referenceImpedanceOhm: network.referenceImpedanceOhm,
-				pointCount: network.points.length,
-				startHz: first.frequencyHz,
-				stopHz: last.frequencyHz
-			},
+			touchstone: describeNetwork(network),
 			resonance: response.resonance,
 			band: response.band,
 			minimumVswr: response.minimumVswr,

@@ -17,17 +17,22 @@ export interface ExportMeta {
 export const SOFTWARE_NAME = 'Fringefield';
 export const SOFTWARE_VERSION = '0.1.0';
 
-/** Design name → slug: lowercase, runs of other characters become one hyphen. */
-export function toDesignSlug(name: string): string {
+/** Name → URL-safe slug: accents dropped, lowercase, runs of other characters become one hyphen. */
+export function toSlug(name: string, maxLength: number, fallback: string): string {
 	const slug = name
 		.normalize('NFKD')
 		.replace(/[\u0300-\u036f]/g, '')
 		.toLowerCase()
 		.replace(/[^a-z0-9]+/g, '-')
 		.replace(/^-+|-+$/g, '')
-		.slice(0, 60)
+		.slice(0, maxLength)
 		.replace(/-+$/g, '');
-	return slug || 'design';
+	return slug || fallback;
+}
+
+/** Design name → slug of at most 60 characters ("Sunroof GNSS" → "sunroof-gnss"). */
+export function toDesignSlug(name: string): string {
+	return toSlug(name, 60, 'design');
 }
 
 const LABEL = /^[A-Za-z0-9][A-Za-z0-9.-]{0,15}$/;

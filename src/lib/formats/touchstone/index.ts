@@ -9,3 +9,4 @@ export { serializeTouchstone } from './serialize';
 export { writeTouchstone } from './write-touchstone';
 export { s11FromNetwork, type S11Sample } from './s11-from-network';
 export { portCountFromFileName } from './port-count-from-file-name';
+export { describeNetwork, type NetworkDescription } from './describe-network';

@@ -1,6 +1,6 @@
 // An uploaded Touchstone file, checked before anything is stored: size, name, text content, then the strict reader.
 import { InputError } from '../../schemas';
-import { portCountFromFileName, readTouchstone, s11FromNetwork, type S11Sample } from '../../formats/touchstone';
+import { describeNetwork, portCountFromFileName, readTouchstone, s11FromNetwork, type S11Sample } from '../../formats/touchstone';
 import { analyzeMeasuredResponse } from '../../rf/measured-response';
 import type { MeasurementSummary } from './measurement-model';
 
@@ -41,19 +41,8 @@ export function readTouchstoneUpload(fileName: string, bytes: Uint8Array): ReadU
 	const network = readTouchstone(text, { portCount: portCountFromFileName(name) });
 	const samples = s11FromNetwork(network);
 	const response = analyzeMeasuredResponse(samples);
-	const first = network.points[0];
-	const last = network.points[network.points.length - 1];
 	const summary: MeasurementSummary = {
-		file: {
-			version: network.version,
-			portCount: network.portCount,
-			frequencyUnit: network.frequencyUnit,
-			format: network.format,
-			referenceImpedanceOhm: network.referenceImpedanceOhm,
-			pointCount: network.points.length,
-			startHz: first.frequencyHz,
-			stopHz: last.frequencyHz
-		},
+		file: describeNetwork(network),
 		resonance: response.resonance,
 		band: response.band,
 		minimumVswr: Number.isFinite(response.minimumVswr) ? response.minimumVswr : null,

@@ -1,6 +1,6 @@
 // One sweep download: the plan's sweep JSON built by formats/sweep from the revision, hashed, and recorded as a 'sweep' export.
 import { buildSweepDocument, serializeSweep } from '../../formats/sweep';
-import { createExportMeta } from '../../formats/export-meta';
+import { createExportMeta, toSlug } from '../../formats/export-meta';
 import type { ExportVia } from '../db/export-record.table';
 import type { Design, Revision } from '../designs/design-model';
 import { recordExport } from '../exports/record-export';
@@ -16,17 +16,7 @@ export interface DeliveredSweep {
 }
 
 /** "Lower εr band / 2" → "lower-r-band-2": the plan's part of the file name. */
-function planSlug(name: string): string {
-	const slug = name
-		.normalize('NFKD')
-		.replace(/[\u0300-\u036f]/g, '')
-		.toLowerCase()
-		.replace(/[^a-z0-9]+/g, '-')
-		.replace(/^-+|-+$/g, '')
-		.slice(0, 40)
-		.replace(/-+$/g, '');
-	return slug || 'plan';
-}
+const planSlug = (name: string): string => toSlug(name, 40, 'plan');
 
 /** The bytes only (no record): the same plan on the same revision always gives the same bytes. */
 export function buildSweepFile(design: Design, revision: Revision, plan: SavedSweepPlan): { fileName: string; body: Uint8Array; pointCount: number } {
