@@ -6,6 +6,9 @@ import { join } from 'node:path';
 import { rootDir, runMain } from './lib/config.ts';
 import { coreRows, type BenchRow } from './bench/core.ts';
 import { httpRows } from './bench/http.ts';
+import { runFuzzBench } from './bench/fuzz.ts';
+import { existingReliabilitySection } from './bench/reliability-section.ts';
+import { runSoakBench } from './bench/soak.ts';
 
 function fmt(v: number): string {
 	return v >= 100 ? v.toFixed(0) : v >= 10 ? v.toFixed(1) : v.toFixed(2);
@@ -21,6 +24,9 @@ function table(rows: BenchRow[]): string {
 }
 
 runMain(async () => {
+	// --soak / --fuzz run only the reliability checks, which write their own section of BENCHMARKS.md.
+	if (process.argv.includes('--soak')) return runSoakBench();
+	if (process.argv.includes('--fuzz')) return runFuzzBench();
 	const started = Date.now();
 	const rows: BenchRow[] = [];
 	console.log('core rows…');
@@ -32,6 +38,7 @@ runMain(async () => {
 	const text = table(rows);
 	console.log(`\n${text}\n`);
 	const header = `# Benchmarks\n\nMeasured by \`npm run bench\` on ${new Date().toISOString().slice(0, 10)}, Node.js ${process.version}, ${cpus().length} cores (${cpus()[0]?.model ?? 'unknown CPU'}). Medians (p50) from tinybench after warm-up; the floor of each row is measured in the same run. Whole run: ${((Date.now() - started) / 1000).toFixed(0)} s.\n\n`;
-	writeFileSync(join(rootDir, 'BENCHMARKS.md'), `${header}${text}\n`);
+	const reliability = existingReliabilitySection();
+	writeFileSync(join(rootDir, 'BENCHMARKS.md'), `${header}${text}\n${reliability ? `\n${reliability}` : ''}`);
 	console.log('written to BENCHMARKS.md');
 });

@@ -60,7 +60,7 @@ const pageGets = (w: HardeningWorkspace) => {
 		`/designs/${w.a.designId}/r/${w.a.label}/sweeps/${b.planId}/export`
 	];
 };
-const pageActions = (w: HardeningWorkspace) => {
+const pageActions = (w: HardeningWorkspace): { path: string; form: Record<string, string> }[] => {
 	const b = w.b;
 	const r = `/designs/${b.designId}/r/${b.label}`;
 	return [

@@ -20,7 +20,8 @@ export async function listTeamAuditEvents(teamId: string): Promise<AuditEventVie
 		id: r.id,
 		kind: r.kind,
 		label: auditKindLabel[r.kind as AuditKind] ?? r.kind,
-		actor: r.actor_name ? `${r.actor_name} <${r.actor_email}>` : 'nobody identified',
+		// A failed sign-in's account is the one tried, not who tried it.
+		actor: !r.actor_name ? 'nobody identified' : r.kind === 'signin.failed' ? `someone, as ${r.actor_name} <${r.actor_email}>` : `${r.actor_name} <${r.actor_email}>`,
 		details: r.details,
 		createdAt: r.created_at
 	}));

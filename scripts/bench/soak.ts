@@ -1,0 +1,128 @@
+// `npm run bench -- --soak`: five minutes of mixed traffic on loopback against the built server — sign-in,
+// editor compute (POST /api/v1/size), bundle exports and Touchstone uploads — from a fixed number of
+// workers, each one request at a time (bounded loops). Passes with 0 errors and resident memory
+// (VmRSS of the server, /proc/<pid>/status) growing less than 10 % from the end of the warm-up to the end.
+import pg from 'pg';
+import { loadConfig } from '../lib/config.ts';
+import { migrateToLatest } from '../lib/migrate.ts';
+import { connectionUrl, provideDatabase } from '../lib/postgres.ts';
+import { action, api } from '../../tests/integration/hardening/helpers/client.ts';
+import { startBuiltServer } from '../../tests/integration/hardening/helpers/built-server.ts';
+import { build } from './fuzz.ts';
+import { writeReliabilitySubsection } from './reliability-section.ts';
+
+const SOAK_DATABASE = 'fringefield_soak';
+
+async function freshDatabase(): Promise<string> {
+	const config = loadConfig();
+	if (config.databaseUrl) {
+		await migrateToLatest(config.databaseUrl, () => undefined);
+		return config.databaseUrl;
+	}
+	const url = await provideDatabase(config, SOAK_DATABASE, () => undefined);
+	const admin = new pg.Client({ connectionString: connectionUrl(config, 'postgres') });
+	await admin.connect();
+	await admin.query(`drop database if exists "${SOAK_DATABASE}" with (force)`);
+	await admin.query(`create database "${SOAK_DATABASE}"`);
+	await admin.end();
+	await migrateToLatest(url, () => undefined);
+	return url;
+}
+
+interface Sample {
+	seconds: number;
+	rssMb: number;
+	requests: number;
+}
+
+type Kind = 'sign-in' | 'size' | 'export' | 'upload';
+
+export async function soakRun(opts: { seconds: number; warmupSeconds: number; workers: number }) {
+	build();
+	const url = await freshDatabase();
+	process.env.DATABASE_URL = url;
+	const server = await startBuiltServer({ databaseUrl: url, env: { DATABASE_POOL_SIZE: '20' } });
+	const counts: Record<Kind, { ok: number; errors: number }> = { 'sign-in': { ok: 0, errors: 0 }, size: { ok: 0, errors: 0 }, export: { ok: 0, errors: 0 }, upload: { ok: 0, errors: 0 } };
+	const errorSamples: string[] = [];
+	const samples: Sample[] = [];
+	try {
+		const { createHardeningWorkspace, demoDesign, PASSWORD, touchstoneFixture } = await import('../../tests/integration/hardening/helpers/workspace.ts');
+		const ws = await createHardeningWorkspace('soak');
+		const file = touchstoneFixture();
+		const auth = { token: ws.editor.token };
+		const design = demoDesign('Soak patch');
+		const steps: Record<Kind, (i: number) => Promise<boolean>> = {
+			'sign-in': async () => (await action(server.origin, '/signin', {}, { email: ws.viewer.email, password: PASSWORD })).type === 'redirect',
+			size: async (i) => (await api(server.origin, '/api/v1/size', auth, { body: { ...design, frequencyHz: 2.4e9 + (i % 100) * 1e6 } })).status === 200,
+			export: async () => {
+				const res = await fetch(`${server.origin}/api/v1/designs/${ws.a.designId}/revisions/${ws.a.label}/export/bundle`, { headers: { authorization: `Bearer ${ws.editor.token}` } });
+				const bytes = (await res.arrayBuffer()).byteLength;
+				return res.ok && bytes > 0;
+			},
+			upload: async () => {
+				const fd = new FormData();
+				fd.append('file', new File([file as BlobPart], 'bench-2g4.s1p'));
+				return (await action(server.origin, `/designs/${ws.a.designId}/r/${ws.a.label}/measurements?/upload`, { cookie: ws.editor.sessionId }, fd)).type === 'redirect';
+			}
+		};
+		// The mix: mostly editor compute and exports, some sign-ins and uploads.
+		const mix: Kind[] = ['size', 'size', 'size', 'export', 'export', 'sign-in', 'upload'];
+		const started = performance.now();
+		const end = started + opts.seconds * 1000;
+		let total = 0;
+		const sampler = setInterval(() => samples.push({ seconds: (performance.now() - started) / 1000, rssMb: server.rssKb() / 1024, requests: total }), 10_000);
+		samples.push({ seconds: 0, rssMb: server.rssKb() / 1024, requests: 0 });
+		const worker = async (w: number) => {
+			for (let i = w; performance.now() < end; i += opts.workers) {
+				const kind = mix[i % mix.length];
+				let ok = false;
+				try {
+					ok = await steps[kind](i);
+				} catch (err) {
+					if (errorSamples.length < 5) errorSamples.push(`${kind}: ${(err as Error).message}`);
+				}
+				counts[kind][ok ? 'ok' : 'errors']++;
+				if (!ok && errorSamples.length < 5) errorSamples.push(`${kind} failed`);
+				total++;
+			}
+		};
+		await Promise.all(Array.from({ length: opts.workers }, (_, w) => worker(w)));
+		clearInterval(sampler);
+		samples.push({ seconds: (performance.now() - started) / 1000, rssMb: server.rssKb() / 1024, requests: total });
+	} finally {
+		await server.stop();
+		const { closeDb } = await import('../../src/lib/server/db/index.ts');
+		await closeDb();
+	}
+	const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+	const atWarmup = median(samples.filter((s) => Math.abs(s.seconds - opts.warmupSeconds) <= 10).map((s) => s.rssMb));
+	const atEnd = median(samples.slice(-3).map((s) => s.rssMb));
+	const growth = (atEnd - atWarmup) / atWarmup;
+	const errors = Object.values(counts).reduce((n, c) => n + c.errors, 0);
+	return { counts, errors, errorSamples, samples, atWarmup, atEnd, growth, pass: errors === 0 && growth < 0.1 };
+}
+
+export async function runSoakBench(): Promise<void> {
+	const seconds = Number(process.env.SOAK_SECONDS || 300);
+	const warmupSeconds = Math.min(60, Math.round(seconds / 5));
+	const workers = 8;
+	const r = await soakRun({ seconds, warmupSeconds, workers });
+	const mixRows = ['| traffic | requests | errors |', '| --- | ---: | ---: |', ...Object.entries(r.counts).map(([k, c]) => `| ${k} | ${c.ok + c.errors} | ${c.errors} |`)];
+	const curve = ['| t (s) | server RSS (MB) | requests so far |', '| ---: | ---: | ---: |', ...r.samples.map((s) => `| ${s.seconds.toFixed(0)} | ${s.rssMb.toFixed(1)} | ${s.requests} |`)];
+	const body = [
+		`Measured on ${new Date().toISOString().slice(0, 10)}, Node.js ${process.version}: ${seconds} s of mixed traffic from ${workers} workers (one request at a time each) against \`node build\` on loopback. Memory is the server's VmRSS from /proc/<pid>/status every 10 s; growth is the median of the last three samples against the median around the end of the ${warmupSeconds} s warm-up.`,
+		'',
+		mixRows.join('\n'),
+		'',
+		`**Errors: ${r.errors}. RSS after warm-up ${r.atWarmup.toFixed(1)} MB → at the end ${r.atEnd.toFixed(1)} MB: growth ${(r.growth * 100).toFixed(1)} % (target < 10 %): ${r.pass ? 'met' : 'NOT met'}.**`,
+		...(r.errorSamples.length ? ['', `First errors: ${r.errorSamples.join('; ')}`] : []),
+		'',
+		'Memory curve:',
+		'',
+		curve.join('\n')
+	].join('\n');
+	console.log(`\n${body}\n`);
+	writeReliabilitySubsection('Soak', body);
+	console.log('written to the Reliability section of BENCHMARKS.md');
+	if (!r.pass) process.exitCode = 1;
+}
