@@ -54,7 +54,9 @@ test('the owner reads token creation and failed sign-ins in the security log', a
 	await page.locator('input[name="name"]').fill('log token');
 	await page.getByRole('button', { name: 'Make token' }).click();
 	await expect(page.getByRole('table', { name: 'Your tokens' })).toContainText('log token');
-	await page.goto(`/teams/${teamId}/audit`);
+	await page.goto(`/teams/${teamId}`);
+	await page.getByRole('link', { name: 'Security log' }).click();
+	await expect(page).toHaveURL(new RegExp(`/teams/${teamId}/audit$`));
 	await expect(page.getByRole('heading', { name: 'Security log' })).toBeVisible();
 	await expect(page.getByTestId('audit-row').filter({ hasText: 'API token created' })).toHaveCount(1);
 	await page.screenshot({ path: '/tmp/ff-security-log.png', fullPage: true });
