@@ -7,6 +7,7 @@ export const actions = [
 	'design.create',
 	'revision.create', // save a new revision (editing never changes an old one)
 	'laminate.write',
+	'fab-profile.write', // add the team's own fab capability profiles
 	'sweep.write', // save sweep plans
 	'measurement.upload',
 	'export.download', // download any format or the bundle, from the UI or the API
@@ -16,7 +17,7 @@ export const actions = [
 export type Action = (typeof actions)[number];
 
 const viewer: readonly Action[] = ['team.read', 'export.download', 'token.manage-own'];
-const editor: readonly Action[] = [...viewer, 'design.create', 'revision.create', 'laminate.write', 'sweep.write', 'measurement.upload', 'export.waive'];
+const editor: readonly Action[] = [...viewer, 'design.create', 'revision.create', 'laminate.write', 'fab-profile.write', 'sweep.write', 'measurement.upload', 'export.waive'];
 const owner: readonly Action[] = [...editor, 'team.manage'];
 
 const grants: Record<TeamRole, ReadonlySet<Action>> = {

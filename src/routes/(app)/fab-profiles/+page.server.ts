@@ -16,14 +16,14 @@ export const load: PageServerLoad = async (event) => {
 	if (!current) return { team: null, profiles: [], canAdd: false };
 	authorize(current.role, 'team.read');
 	// Adding to the team's fab list is library work like adding a laminate: the same right.
-	return { team: current, profiles: await listFabProfiles(getDb(), current.id), canAdd: can(current.role, 'laminate.write') };
+	return { team: current, profiles: await listFabProfiles(getDb(), current.id), canAdd: can(current.role, 'fab-profile.write') };
 };
 
 export const actions: Actions = {
 	add: async (event) => {
 		const data = await event.request.formData();
 		const teamId = String(data.get('teamId') ?? '');
-		const { user } = await requireTeamRole(event, teamId, 'laminate.write');
+		const { user } = await requireTeamRole(event, teamId, 'fab-profile.write');
 		const values = Object.fromEntries(['name', ...lengthKeys].map((k) => [k, String(data.get(k) ?? '')]));
 		const num = (t: string) => (t.trim() === '' ? undefined : Number(t));
 		const raw = { name: values.name, ...Object.fromEntries(lengthKeys.map((k) => [k, num(values[k])])) };
