@@ -6,6 +6,7 @@ import type { FabProfile } from '$lib/schemas/fab-profile';
 import { getDb } from '../db';
 import { revisionFabProfile } from '../fab-profiles';
 import type { ExportTarget } from './export-target';
+import { createImmutableCache } from './immutable-cache';
 
 export interface GateReport {
 	artwork: Artwork;
@@ -15,8 +16,13 @@ export interface GateReport {
 	violations: Violation[];
 }
 
-export async function checkExportTarget(target: ExportTarget): Promise<GateReport> {
-	const { profile, recorded } = await revisionFabProfile(getDb(), target.revision.id);
-	const artwork = buildArtwork(target.revision.results as SizedDesign);
-	return { artwork, profile, profileRecorded: recorded, violations: checkArtwork(artwork, profile) };
+/** The revision's profile is written with it and never changes, so its report is computed once per process. */
+const reports = createImmutableCache<GateReport>({ maxEntries: 256, maxBytes: Number.POSITIVE_INFINITY, sizeOf: () => 0 });
+
+export function checkExportTarget(target: ExportTarget): Promise<GateReport> {
+	return reports.get(target.revision.id, async () => {
+		const { profile, recorded } = await revisionFabProfile(getDb(), target.revision.id);
+		const artwork = buildArtwork(target.revision.results as SizedDesign);
+		return { artwork, profile, profileRecorded: recorded, violations: checkArtwork(artwork, profile) };
+	});
 }
