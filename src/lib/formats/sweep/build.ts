@@ -7,15 +7,20 @@ import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
 import { SWEEP_FORMAT, SWEEP_FORMAT_VERSION, SWEEP_SCHEMA_PATH, type SweepDocument, type SweepPoint, type SweepProbeEntry } from './document';
 import { axisValues, parseSweepPlan, type SweepPlan } from './plan';
 
-/** The stack, with the stated probe model appended so the simulation models what will be built (unchanged when none is stated). */
-function withProbe(artwork: Artwork): readonly (StackLayer | SweepProbeEntry)[] {
+/**
+ * The stack bottom up (z increasing: the bottom copper at z = 0 first, the top copper last; the
+ * artwork keeps it top to bottom), with the stated probe model appended so the simulation models
+ * what will be built (no probe entry when none is stated).
+ */
+function sweepStack(artwork: Artwork): readonly (StackLayer | SweepProbeEntry)[] {
+	const slabs = [...artwork.stack].sort((a, b) => a.zMm - b.zMm);
 	const probe = artwork.metadata.probe;
 	const hole = artwork.drills.find((d) => d.role === 'probe');
-	if (!probe || !hole) return artwork.stack;
-	const bottomMm = Math.min(...artwork.stack.map((l) => l.zMm));
-	const topMm = Math.max(...artwork.stack.map((l) => l.zMm + l.thicknessMm));
+	if (!probe || !hole) return slabs;
+	const bottomMm = slabs[0].zMm;
+	const topMm = Math.max(...slabs.map((l) => l.zMm + l.thicknessMm));
 	const entry: SweepProbeEntry = { kind: 'probe', id: hole.id, ...probe, center: [hole.center[0], hole.center[1]], zMm: bottomMm, thicknessMm: topMm - bottomMm };
-	return [...artwork.stack, entry];
+	return [...slabs, entry];
 }
 
 /** Every point's field values, in order: the last axis varies fastest on a grid. */
@@ -64,7 +69,7 @@ export function buildSweepDocument(baseRaw: unknown, planRaw: unknown, meta: Exp
 				board: artwork.board,
 				layers: artwork.layers,
 				drills: artwork.drills,
-				stack: withProbe(artwork)
+				stack: sweepStack(artwork)
 			};
 		} catch (e) {
 			if (e instanceof InputError) return { index, status: 'refused', parameters, error: { kind: 'input', path: e.first.path, message: e.first.message } };

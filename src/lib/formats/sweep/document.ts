@@ -31,7 +31,7 @@ export type SweepPoint =
 			readonly board: { widthMm: number; lengthMm: number };
 			readonly layers: readonly ArtworkLayer[];
 			readonly drills: readonly ArtworkDrill[];
-			/** The slabs top to bottom, then (when the design states a probe model) the probe entry. */
+			/** The slabs bottom up (z increasing from 0 at the bottom copper's lower face), then (when the design states a probe model) the probe entry. */
 			readonly stack: readonly (StackLayer | SweepProbeEntry)[];
 	  }
 	| {

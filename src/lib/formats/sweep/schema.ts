@@ -65,7 +65,7 @@ export const sweepJsonSchema = {
 						stack: {
 							type: 'array',
 							minItems: 1,
-							description: 'Every copper and dielectric layer, top to bottom: the first entry is the top copper and zMm (each slab\'s bottom face, 0 at the bottom copper\'s lower face) decreases along the list, so read backwards z increases; each slab starts where the one below it ends.',
+							description: 'Every copper and dielectric layer in order, bottom up: the first entry is the bottom copper at zMm 0 (zMm is each slab\'s bottom face, measured up from the bottom copper\'s lower face) and zMm increases along the list to the top copper; each slab starts where the one before it ends. A probe entry, when the design states a probe model, comes last.',
 							items: { $ref: '#/$defs/stackLayer' }
 						}
 					}

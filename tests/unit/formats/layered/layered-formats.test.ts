@@ -60,9 +60,10 @@ describe('layered designs and arrays in every format', () => {
 			const stack = point.stack as { kind: string; zMm: number; thicknessMm: number }[];
 			const resolved = size(doc).layerStack;
 			expect(stack.length).toBe(resolved ? resolved.length : 3);
-			// the document's order convention is top to bottom; reversed, z rises from 0 with no gap or overlap
-			const up = [...stack].reverse();
-			expect(up[0].zMm).toBe(0);
+			// listed bottom up: z rises from 0 along the list with no gap or overlap (issue 10 "Must show")
+			const up = stack;
+			expect(up[0]).toMatchObject({ kind: 'copper', layerId: 'copper-bottom', zMm: 0 });
+			expect(up.at(-1)).toMatchObject({ kind: 'copper', layerId: 'copper-top' });
 			for (let i = 1; i < up.length; i++) {
 				expect(up[i].zMm).toBeGreaterThan(up[i - 1].zMm);
 				expect(up[i].zMm).toBeCloseTo(up[i - 1].zMm + up[i - 1].thicknessMm, 12);

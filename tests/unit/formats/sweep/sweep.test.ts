@@ -36,6 +36,18 @@ describe('sweep documents', () => {
 		expect(validate.errors!.some((e) => e.instancePath === '/points/2' && e.params && (e.params as { missingProperty?: string }).missingProperty === 'stack')).toBe(true);
 	});
 
+	it('lists the stack bottom up: bottom copper at z = 0 first, then each slab on the one before it, top copper last', () => {
+		const doc = buildSweepDocument(designDocument('rectangular', 'probe', { probe: { drillDiameterMm: 1.3, clearanceDiameterMm: 4.1, model: 'plated-barrel' } }), { axes: [{ field: 'frequencyHz', values: [2.45e9] }] }, meta);
+		const point = doc.points[0];
+		if (point.status !== 'sized') throw new Error('expected a sized point');
+		const slabs = point.stack.filter((l) => l.kind !== 'probe');
+		expect(slabs.map((l) => l.id)).toEqual(['copper-bottom', 'substrate', 'copper-top']);
+		expect(slabs[0].zMm).toBe(0);
+		for (let i = 1; i < slabs.length; i++) expect(slabs[i].zMm).toBeCloseTo(slabs[i - 1].zMm + slabs[i - 1].thicknessMm, 12);
+		// the probe entry is not a slab: it stays last and spans the whole stack from z = 0
+		expect(point.stack.at(-1)).toMatchObject({ kind: 'probe', zMm: 0 });
+	});
+
 	it('varies the last axis fastest on a grid and pairs values when zipped', () => {
 		const grid = sweepCombinations(parseSweepPlan(plan));
 		expect(grid.map((c) => c['substrate.heightMm'])).toEqual([0.8, 0.8, 1.2, 1.2, 1.6, 1.6]);
