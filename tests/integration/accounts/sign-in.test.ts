@@ -62,7 +62,8 @@ describe('sign-in', () => {
 	});
 
 	it('spends comparable time on an unknown e-mail and on a wrong password (an argon2id verification each)', async () => {
-		// Warm the decoy hash first; then compare medians of a few tries. A skipped verification would be ~100× faster.
+		// Warm the decoy hash first; then compare medians of a few tries. A skipped verification would be ~100× faster;
+		// the bounds are wide because a busy 2-core CI machine makes single timings noisy.
 		await refusal(checkCredentials({ email: emailFor('warm', suffix), password: 'x' }));
 		const time = async (e: string) => {
 			const samples: number[] = [];
@@ -75,8 +76,8 @@ describe('sign-in', () => {
 		};
 		const known = await time(email);
 		const unknown = await time(emailFor('ghost', suffix));
-		expect(unknown / known).toBeGreaterThan(0.4);
-		expect(unknown / known).toBeLessThan(2.5);
+		expect(unknown / known).toBeGreaterThan(0.2);
+		expect(unknown / known).toBeLessThan(5);
 	});
 });
 

@@ -27,7 +27,7 @@ export async function identify(request: Request, cookies: Cookies): Promise<Requ
 		if (!match || !match[1].startsWith(TOKEN_PREFIX)) return anonymous;
 		const token = await tokenQueries.findLiveTokenByHash(getDb(), hashSecret(match[1]));
 		if (!token) return anonymous;
-		await tokenQueries.touchTokenById(getDb(), token.id);
+		if (tokenQueries.isTouchDue(token.last_used_at)) await tokenQueries.touchTokenById(getDb(), token.id);
 		return {
 			user: { id: token.user_id, email: token.email, displayName: token.display_name },
 			sessionId: null,
