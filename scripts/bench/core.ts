@@ -3,7 +3,7 @@ import { deflateRawSync } from 'node:zlib';
 import { createSVGWindow } from 'svgdom';
 import { Bench } from 'tinybench';
 import { buildArtwork } from '../../src/lib/artwork';
-import { buildBundle, buildFiles, buildSweepDocument, createExportMeta, serializeSweep, toSvg } from '../../src/lib/formats';
+import { buildArrayBenchFiles, buildBundle, buildFiles, buildSweepDocument, createExportMeta, serializeSweep, toSvg } from '../../src/lib/formats';
 import { parseDesignInput } from '../../src/lib/schemas';
 import { size } from '../../src/lib/rf';
 
@@ -93,5 +93,9 @@ export async function coreRows(): Promise<BenchRow[]> {
 	}
 	const growth = sweepUs[10000] / sweepUs[1000];
 	rows.push({ work: 'sweep JSON growth 1 000 → 10 000', ours: sweepUs[10000], floor: sweepUs[1000], unit: 'µs', floorName: '1 000-point time', ratio: growth, target: '9–11×', pass: growth >= 9 && growth <= 11 });
+
+	// Arrays (issue 10): Gerber + drill + DXF + SVG of an 8×8 and a 32×32 array; 16× the elements.
+	const arrays = await medianUs({ a8: () => buildArrayBenchFiles(8, { svgWindow }), a32: () => buildArrayBenchFiles(32, { svgWindow }) }, 4000);
+	rows.push({ work: '32×32 array files (Gerber, drill, DXF, SVG)', ours: arrays.a32 / 1000, floor: arrays.a8 / 1000, unit: 'ms', floorName: '8×8 array files', ratio: arrays.a32 / arrays.a8, target: '< 1000 ms; ≈ 16× growth', pass: arrays.a32 / 1000 < 1000 && arrays.a32 / arrays.a8 <= 20 });
 	return rows;
 }
