@@ -1,4 +1,4 @@
-// `npm test`: lint, then vitest (unit + integration against the real PostgreSQL), then Playwright in
+// `npm test`: lint, type check, build, then vitest (unit + integration against the real PostgreSQL), then Playwright in
 // Debian's Chromium against the production build. Ends with one line: `N passed, N failed`.
 import { spawnSync } from 'node:child_process';
 import { existsSync, readFileSync, rmSync } from 'node:fs';
@@ -69,6 +69,10 @@ runMain(async () => {
 		console.log('\n── lint ──');
 		const lint = run('npm', ['run', '--silent', 'lint'], env);
 		tallies.push({ suite: 'lint', passed: lint === 0 ? 1 : 0, failed: lint === 0 ? 0 : 1 });
+
+		console.log('\n── types (svelte-check) ──');
+		const types = run('npm', ['run', '--silent', 'check', '--', '--threshold', 'error'], env);
+		tallies.push({ suite: 'types', passed: types === 0 ? 1 : 0, failed: types === 0 ? 0 : 1 });
 
 		console.log('\n── build ──');
 		const built = run('npx', ['vite', 'build', '--logLevel', 'error'], env);
