@@ -34,6 +34,12 @@ export const teamParamsSchema = z.object({ teamId: teamIdParam });
 export const designParamsSchema = z.object({ designId: designIdParam });
 export const revisionParamsSchema = z.object({ designId: designIdParam, label: revisionLabelParam });
 export const exportParamsSchema = z.object({ designId: designIdParam, label: revisionLabelParam, format: exportKindParam });
+export const sweepPlanParamsSchema = revisionParamsSchema.extend({ planId: idString('planId').meta({ description: 'Sweep plan id (from the sweep-plans list)' }) });
+
+/** POST body of a download that goes out despite design-rule violations (editors and owners). */
+export const waiverBodySchema = z
+	.strictObject({ waiver: z.string({ error: 'required: why the violations are acceptable' }).meta({ description: 'Why the violations are acceptable; stored on the export record and printed in the fab notes' }) })
+	.meta({ id: 'WaiverBody' });
 
 export const exportSortKeys = ['createdAt', 'design', 'revision', 'kind', 'via', 'user', 'sizeBytes'] as const;
 export type ExportSortKey = (typeof exportSortKeys)[number];
@@ -130,6 +136,10 @@ export const exportRecordSchema = z
 		files: z.array(exportedFileSchema),
 		sizeBytes: z.number().int().meta({ description: 'Sum of the file sizes' }),
 		sha256: z.string().meta({ description: 'sha256 of the delivered bytes (the zip for a bundle)' }),
+		waiver: z
+			.string()
+			.nullable()
+			.meta({ description: 'The reason an editor or owner gave for exporting despite design-rule violations (also printed in the fab notes); null when the design passed its fab profile' }),
 		earlier: z
 			.object({ exportId: z.string(), createdAt: z.iso.datetime(), matches: z.boolean() })
 			.nullable()

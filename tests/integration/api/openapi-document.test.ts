@@ -18,9 +18,41 @@ describe('openApiDocument', () => {
 				'GET /designs/{designId}/revisions/{label}',
 				'GET /designs/{designId}/revisions/{label}/sweep',
 				'GET /designs/{designId}/revisions/{label}/export/{format}',
+				'POST /designs/{designId}/revisions/{label}/export/{format}',
+				'GET /designs/{designId}/revisions/{label}/sweep-plans',
+				'GET /designs/{designId}/revisions/{label}/sweep-plans/{planId}/sweep',
 				'POST /size'
 			].sort()
 		);
+	});
+
+	it('documents the design-rule gate: 422 with the violations on a download, the waiver POST body, the waiver on export records', () => {
+		const doc = openApiDocument();
+		const paths = doc.paths as Record<string, any>;
+		const schemas = doc.components?.schemas as Record<string, any>;
+		const download = paths['/designs/{designId}/revisions/{label}/export/{format}'];
+		expect(download.get.responses['422'].content['application/json'].schema.$ref).toBe('#/components/schemas/ExportRefusal');
+		expect(schemas.ExportRefusal.required).toEqual(expect.arrayContaining(['error', 'profile', 'violations']));
+		expect(schemas.ExportRefusal.properties.violations.items.$ref).toBe('#/components/schemas/Violation');
+		// the rule ids of src/lib/drc/violation.ts
+		expect(schemas.Violation.properties.ruleId.enum).toEqual(['trace-width', 'copper-spacing', 'drill-size', 'annular-ring', 'edge-clearance', 'slot-width']);
+		expect(schemas.FabProfile.required).toContain('minTraceWidthMm');
+		expect(download.post.requestBody.content['application/json'].schema.$ref).toBe('#/components/schemas/WaiverBody');
+		expect(schemas.WaiverBody.required).toEqual(['waiver']);
+		expect(Object.keys(download.post.responses)).toEqual(expect.arrayContaining(['200', '400', '401', '403', '404']));
+		expect(schemas.ExportRecord.properties.waiver).toBeDefined();
+		expect(schemas.ExportRecord.required).toContain('waiver');
+	});
+
+	it('documents the sweep-plan endpoints with the plan schema and the planId parameter', () => {
+		const doc = openApiDocument();
+		const paths = doc.paths as Record<string, any>;
+		const list = paths['/designs/{designId}/revisions/{label}/sweep-plans'].get;
+		expect(list.responses['200'].content['application/json'].schema.$ref).toBe('#/components/schemas/SweepPlanList');
+		const sweep = paths['/designs/{designId}/revisions/{label}/sweep-plans/{planId}/sweep'].get;
+		expect(sweep.parameters.map((p: { name: string; in: string }) => `${p.in}:${p.name}`)).toEqual(['path:designId', 'path:label', 'path:planId']);
+		const plan = (doc.components?.schemas as Record<string, any>).SweepPlan;
+		expect(Object.keys(plan.properties)).toEqual(expect.arrayContaining(['planVersion', 'combine', 'axes']));
 	});
 
 	it('carries the design-input schema with its bounds, taken from the zod schema', () => {

@@ -8,6 +8,9 @@ import { closeDb, getDb } from '../../../src/lib/server/db';
 import * as measurementQueries from '../../../src/lib/server/db/measurement.queries';
 import * as designQueries from '../../../src/lib/server/db/design.queries';
 import { createDesign, findRevision } from '../../../src/lib/server/designs';
+import { saveRevision } from '../../../src/lib/server/designs/save-revision';
+import { revisionFabProfile } from '../../../src/lib/server/fab-profiles';
+import { STANDARD_QUICK_TURN_PROFILE } from '../../../src/lib/schemas/fab-profile';
 import * as measurements from '../../../src/lib/server/measurements';
 import { createTestTeam, sampleInput, type TestTeam } from '../designs/test-team';
 
@@ -126,6 +129,20 @@ describe('retune from a measurement', () => {
 		expect((await measurements.listRetunedRevisions(db, id)).map((r) => r.label)).toEqual([saved.label]);
 		// A revision saved by hand links nothing.
 		expect(await measurements.findRetuneSource(db, revisionA.id)).toBeNull();
+	});
+
+	it('checks the retuned revision against the fab profile its parent recorded, not the built-in', async () => {
+		// the parent is saved against a team profile with wider minimums (demo values)
+		const coarse = { ...STANDARD_QUICK_TURN_PROFILE, name: `Coarse ${team.suffix}`, minTraceWidthMm: 0.2, minSpacingMm: 0.2, minSlotWidthMm: 0.25 };
+		const parent = await saveRevision(db, { designId, parentLabel: 'A', userId: team.users.editor.id, raw: (await findRevision(db, designId, 'A'))!.input, note: 'on the coarse fab', fabProfile: coarse });
+		const parentRevision = (await findRevision(db, designId, parent.label))!;
+		const { id } = await measurements.uploadMeasurement(db, { revisionId: parentRevision.id, userId: team.users.editor.id, fileName: 'bench-2g4.s1p', bytes: fixture('bench-2g4.s1p') });
+		const measurement = (await measurements.findMeasurement(db, parentRevision.id, id))!;
+		const saved = await measurements.confirmRetune(db, { designId, revision: parentRevision, measurement, userId: team.users.editor.id });
+		const recorded = await revisionFabProfile(db, saved.id);
+		expect(recorded.recorded).toBe(true);
+		expect(recorded.profile).toEqual(coarse);
+		expect(recorded.profile).not.toEqual(STANDARD_QUICK_TURN_PROFILE);
 	});
 
 	it('the link cannot be added to or changed on an existing revision (revisions are immutable)', async () => {

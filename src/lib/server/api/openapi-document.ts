@@ -15,10 +15,15 @@ import {
 	revisionDetailSchema,
 	revisionParamsSchema,
 	sizedDesignSchema,
+	sweepPlanParamsSchema,
 	teamListSchema,
-	teamParamsSchema
+	teamParamsSchema,
+	waiverBodySchema
 } from '$lib/schemas/api';
+import { fabProfileSchema } from '$lib/schemas/fab-profile';
+import { DRC_RULE_IDS } from '$lib/drc';
 import { SOFTWARE_VERSION } from '$lib/formats/export-meta';
+import { sweepPlanSchema } from '$lib/formats/sweep';
 
 const problemResponse = (description: string) => ({ description, content: { 'application/json': { schema: problemSchema } } });
 const jsonResponse = (description: string, schema: z.ZodType) => ({ description, content: { 'application/json': { schema } } });
@@ -29,6 +34,42 @@ const denied = {
 };
 const badInput = { 400: problemResponse('Bad input: one issue per field, each naming the allowed range') };
 const forbidden = { 403: problemResponse('A member whose role lacks this right (viewers read and download only)') };
+
+/** One broken design rule, as src/lib/drc reports it. */
+const violationSchema = z
+	.object({
+		ruleId: z.enum(DRC_RULE_IDS as [string, ...string[]]),
+		layerId: z.string().nullable().meta({ description: 'The artwork layer of the offending copper; null for a drill on its own' }),
+		shapeIds: z.array(z.string()).meta({ description: 'Artwork shape (and drill) ids involved' }),
+		location: z.object({ xMm: z.number(), yMm: z.number() }).meta({ description: 'Where on the board, mm from its lower left corner' }),
+		measuredMm: z.number().meta({ description: 'What the artwork has' }),
+		requiredMm: z.number().meta({ description: 'What the fab profile asks for at least' }),
+		message: z.string()
+	})
+	.meta({ id: 'Violation' });
+const fabProfileDocSchema = fabProfileSchema.meta({ id: 'FabProfile', description: 'The fab capability profile the revision was checked against (recorded when it was saved)' });
+const refusalSchema = z
+	.object({ error: z.string(), profile: fabProfileDocSchema, violations: z.array(violationSchema).min(1), issues: z.array(z.object({ path: z.string(), message: z.string() })).max(0).meta({ description: 'Always empty here (the input was fine)' }) })
+	.meta({ id: 'ExportRefusal', description: 'The revision breaks its fab profile: every violation, and the profile. Nothing was built or recorded.' });
+const readBackFailureSchema = z
+	.object({ error: z.string(), supportId: z.string(), issues: z.array(z.object({ path: z.string(), message: z.string() })).max(0) })
+	.meta({ id: 'ReadBackFailure', description: 'The files just written did not read back as the artwork (our bug); nothing was delivered. Quote the support id.' });
+const refused = {
+	422: jsonResponse('Refused: the revision breaks design rules of its fab profile. Download again with POST { "waiver": "reason" } (editors and owners) to export anyway', refusalSchema),
+	500: jsonResponse('The read-back self-check failed; nothing was delivered', readBackFailureSchema)
+};
+const sweepPlanSummarySchema = z
+	.object({
+		id: z.string(),
+		name: z.string(),
+		pointCount: z.number().int(),
+		createdAt: z.iso.datetime(),
+		createdBy: z.string().meta({ description: 'Display name of whoever saved the plan' }),
+		plan: sweepPlanSchema.meta({ id: 'SweepPlan', description: 'Axes (from/to/step or a list of values) over design-input fields, combined as a grid or zipped' })
+	})
+	.meta({ id: 'SweepPlanSummary' });
+const sweepPlanListSchema = z.object({ plans: z.array(sweepPlanSummarySchema) }).meta({ id: 'SweepPlanList' });
+const sweepDocumentSchema = z.looseObject({}).meta({ description: 'Sweep definition, versioned schema of its own (/schemas/sweep-v1.json)' });
 
 function buildRegistry(): OpenAPIRegistry {
 	const registry = new OpenAPIRegistry();
@@ -93,22 +134,47 @@ function buildRegistry(): OpenAPIRegistry {
 		summary: 'The revision’s sweep definition (JSON; see /schemas for its JSON Schema) — recorded in the export log',
 		request: { params: revisionParamsSchema },
 		responses: {
-			200: { description: 'The sweep definition document', content: { 'application/json': { schema: z.looseObject({}).meta({ description: 'Sweep definition, versioned schema of its own' }) } } },
+			200: { description: 'The sweep definition document', content: { 'application/json': { schema: sweepDocumentSchema } } },
 			...badInput,
 			...denied
 		}
 	});
+	const downloaded = {
+		description: 'The file (content-disposition: attachment); x-content-sha256 carries the sha256 of the body, x-export-id the export record',
+		content: { 'application/octet-stream': { schema: z.string().meta({ format: 'binary' }) } }
+	};
 	registry.registerPath({
 		method: 'get',
 		path: '/designs/{designId}/revisions/{label}/export/{format}',
 		tags: ['exports'],
-		summary: 'Download one format or the zip bundle — recorded in the export log; the same revision always gives the same bytes',
+		summary: 'Download one format or the zip bundle — checked against the revision’s fab profile, recorded in the export log; the same revision always gives the same bytes',
 		request: { params: exportParamsSchema },
+		responses: { 200: downloaded, ...badInput, ...denied, ...refused }
+	});
+	registry.registerPath({
+		method: 'post',
+		path: '/designs/{designId}/revisions/{label}/export/{format}',
+		tags: ['exports'],
+		summary: 'Download despite design-rule violations, with a waiver — editors and owners; the reason is stored on the export record and printed in the fab notes (a clean revision downloads as with GET, no waiver recorded)',
+		request: { params: exportParamsSchema, body: { required: true, content: { 'application/json': { schema: waiverBodySchema } } } },
+		responses: { 200: downloaded, ...badInput, ...denied, ...forbidden, 500: refused[500] }
+	});
+	registry.registerPath({
+		method: 'get',
+		path: '/designs/{designId}/revisions/{label}/sweep-plans',
+		tags: ['sweeps'],
+		summary: 'The revision’s saved sweep plans, each with its point count',
+		request: { params: revisionParamsSchema },
+		responses: { 200: jsonResponse('The plans, newest first', sweepPlanListSchema), ...badInput, ...denied }
+	});
+	registry.registerPath({
+		method: 'get',
+		path: '/designs/{designId}/revisions/{label}/sweep-plans/{planId}/sweep',
+		tags: ['sweeps'],
+		summary: 'The sweep JSON of one saved plan (every point sized and drawn) — recorded in the export log as a sweep export',
+		request: { params: sweepPlanParamsSchema },
 		responses: {
-			200: {
-				description: 'The file (content-disposition: attachment); x-content-sha256 carries the sha256 of the body',
-				content: { 'application/octet-stream': { schema: z.string().meta({ format: 'binary' }) } }
-			},
+			200: { description: 'The sweep document; x-sweep-point-count carries its point count', content: { 'application/json': { schema: sweepDocumentSchema } } },
 			...badInput,
 			...denied
 		}

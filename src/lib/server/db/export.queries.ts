@@ -34,6 +34,8 @@ export interface ExportLogRow {
 	files: ExportedFile[];
 	size_bytes: string | number;
 	sha256: string;
+	/** The reason given when the export went out despite design-rule violations; null when it was clean. */
+	waiver: string | null;
 	earlier_id: string | null;
 	earlier_created_at: Date | null;
 	earlier_matches: boolean | null;
@@ -107,6 +109,7 @@ export async function listExportsByTeam(db: Kysely<Database>, teamId: string, qu
 			'u.display_name as user_display_name',
 			'e.files',
 			'e.sha256',
+			'e.waiver',
 			'p.id as earlier_id',
 			'p.created_at as earlier_created_at'
 		])

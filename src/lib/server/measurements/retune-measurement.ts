@@ -4,6 +4,7 @@ import { proposeRetune, type RetuneProposal } from '../../rf/retune';
 import type { Database } from '../db/database';
 import type { Revision } from '../designs/design-model';
 import { saveRevision, type SavedRevision } from '../designs/save-revision';
+import { revisionFabProfile } from '../fab-profiles';
 import type { Measurement } from './measurement-model';
 
 export interface RetuneChoice {
@@ -22,7 +23,8 @@ function megahertz(hz: number): string {
 
 /**
  * Saves the proposal as a new revision whose parent is the measured revision and whose history names the
- * measurement. The proposal is recomputed here from the stored data, never taken from the form.
+ * measurement. The proposal is recomputed here from the stored data, never taken from the form. The new
+ * revision is checked against the fab profile its parent recorded (the same board house builds the retune).
  */
 export async function confirmRetune(
 	db: Kysely<Database>,
@@ -32,13 +34,15 @@ export async function confirmRetune(
 	const note =
 		`Retuned from measurement ${opts.measurement.fileName} of ${opts.revision.label}: resonance ${megahertz(proposal.measuredFrequencyHz)} ` +
 		`(target ${megahertz(proposal.targetFrequencyHz)}), apparent εr ${proposal.apparentRelativePermittivity} (designed ${proposal.designRelativePermittivity}).`;
+	const parentFab = await revisionFabProfile(db, opts.revision.id);
 	const saved = await saveRevision(db, {
 		designId: opts.designId,
 		parentLabel: opts.revision.label,
 		userId: opts.userId,
 		raw: proposal.input,
 		note: note.slice(0, 500),
-		retunedFromMeasurementId: opts.measurement.id
+		retunedFromMeasurementId: opts.measurement.id,
+		fabProfile: parentFab.profile
 	});
 	return { ...saved, proposal };
 }

@@ -2,14 +2,11 @@
 // A design that breaks its fab profile answers 422 with { error, profile, violations }; POST { "waiver": "reason" }
 // exports it anyway (editors and owners; 403 for viewers) and records the waiver. A failed read-back is 500 with a supportId.
 import { json } from '@sveltejs/kit';
-import { z } from 'zod';
 import { apiHandler } from '$lib/server/api/api-handler';
 import { parseJsonBody, parseParams } from '$lib/server/api/parse-request';
 import { downloadResponse, exportForRequest, readBackSupportIdOf, refusalOf } from '$lib/server/exports';
-import { exportParamsSchema } from '$lib/schemas/api';
+import { exportParamsSchema, waiverBodySchema } from '$lib/schemas/api';
 import type { RequestHandler } from './$types';
-
-const waiverBodySchema = z.strictObject({ waiver: z.string({ error: 'required: why the violations are acceptable' }) });
 
 async function answer(run: () => ReturnType<typeof exportForRequest>): Promise<Response> {
 	try {
