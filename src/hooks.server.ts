@@ -4,7 +4,7 @@
 import { isHttpError, json, type Handle, type HandleServerError } from '@sveltejs/kit';
 import { identify } from '$lib/server/auth/request-identity';
 import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from '$lib/server/db';
-import { refuseUnreadableForm } from '$lib/server/http/form-body-guard';
+import { refuseUnreadableForm, refuseUnstorableAddress, refuseUnstorableJson } from '$lib/server/http/form-body-guard';
 
 const RETRY_AFTER_SECONDS = '5';
 
@@ -38,7 +38,7 @@ export const handle: Handle = async ({ event, resolve }) => {
 		event.locals.sessionId = identity.sessionId;
 		event.locals.apiToken = identity.apiToken;
 		event.locals.identity = identity;
-		const unreadable = await refuseUnreadableForm(event);
+		const unreadable = refuseUnstorableAddress(event) ?? (await refuseUnreadableForm(event)) ?? (await refuseUnstorableJson(event));
 		if (unreadable) return secure(unreadable);
 		return secure(apiJson(event.url.pathname, await resolve(event)));
 	} catch (err) {

@@ -4,9 +4,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb } from '../../../src/lib/server/db';
 import { startBuiltServer, type BuiltServer } from './helpers/built-server';
+import { action, api } from './helpers/client';
 import { fuzzTarget } from './helpers/fuzz-run';
 import { fuzzTargets } from './helpers/fuzz-targets';
-import { createHardeningWorkspace, type HardeningWorkspace } from './helpers/workspace';
+import { createHardeningWorkspace, demoDesign, type HardeningWorkspace } from './helpers/workspace';
 
 const RUNS = 40;
 const SEED = 9_2450;
@@ -35,4 +36,24 @@ describe('hostile input to the built server', () => {
 		expect(report.unexplained).toBe(0);
 		expect(report.writtenTables).toEqual([]);
 	}, 60_000);
+});
+
+describe('text PostgreSQL cannot store (found by the 10 000-case run as 500s)', () => {
+	it('refuses a NUL in a form field with 400 naming the field', async () => {
+		const res = await action(server.origin, '/teams?/switch', { cookie: ws.editor.sessionId }, { teamId: 'a\u0000b' });
+		expect(res.status).toBe(400);
+		expect(res.message).toBe('"teamId": must not contain the NUL character (U+0000) or an unpaired UTF-16 surrogate');
+	});
+
+	it('refuses an unpaired surrogate in a JSON string with 400 naming its path', async () => {
+		const res = await api(server.origin, `/api/v1/designs/${ws.a.designId}/revisions`, { token: ws.editor.token }, { rawBody: JSON.stringify({ parent: ws.a.label, input: { ...demoDesign('x'), name: '\ud800' } }) });
+		expect(res.status).toBe(400);
+		expect(res.body.issues).toEqual([{ path: 'input.name', message: 'must not contain the NUL character (U+0000) or an unpaired UTF-16 surrogate' }]);
+	});
+
+	it('refuses a NUL in the query with 400 naming the parameter', async () => {
+		const res = await api(server.origin, `/api/v1/teams/${ws.a.teamId}/exports?sort=%00`, { token: ws.editor.token });
+		expect(res.status).toBe(400);
+		expect(res.body.issues[0].path).toBe('query.sort');
+	});
 });

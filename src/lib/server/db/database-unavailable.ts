@@ -39,3 +39,17 @@ export function toDatabaseUnavailable(err: unknown): unknown {
 		return thrown as HttpError;
 	}
 }
+
+/**
+ * The last guard for input (SQLSTATE class 22, data exception: text PostgreSQL cannot store, a number out
+ * of a column's range): a 400 instead of a 500. The request guards in http/ should refuse such input first.
+ */
+export function toDataExceptionRefusal(err: unknown): unknown {
+	const code = (err as { code?: unknown } | null)?.code;
+	if (typeof code !== 'string' || !code.startsWith('22')) return err;
+	try {
+		error(400, `A value in the request cannot be stored (${(err as Error).message})`);
+	} catch (thrown) {
+		return thrown as HttpError;
+	}
+}

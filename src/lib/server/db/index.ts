@@ -5,7 +5,7 @@
 import { Kysely, PostgresDialect } from 'kysely';
 import pg from 'pg';
 import type { Database } from './database';
-import { toDatabaseUnavailable } from './database-unavailable';
+import { toDataExceptionRefusal, toDatabaseUnavailable } from './database-unavailable';
 
 export type { Database } from './database';
 export { isDatabaseUnavailable, DATABASE_UNAVAILABLE_MESSAGE } from './database-unavailable';
@@ -32,7 +32,7 @@ function guardQuery(target: Queryable): void {
 		const result = query(...args);
 		if (result && typeof (result as Promise<unknown>).then === 'function' && typeof (result as Promise<unknown>).catch === 'function') {
 			return (result as Promise<unknown>).catch((err: unknown) => {
-				throw toDatabaseUnavailable(err);
+				throw toDataExceptionRefusal(toDatabaseUnavailable(err));
 			});
 		}
 		return result;
