@@ -4,7 +4,7 @@ import { ghzFromHz } from '../units';
 
 export interface Quantity {
 	key: string;
-	group: 'Patch' | 'Feed' | 'Board' | 'Model' | 'Estimates';
+	group: 'Patch' | 'Feed' | 'Parasitic' | 'Array' | 'Board' | 'Model' | 'Estimates';
 	label: string;
 	/** In the display unit. */
 	value: number | string;
@@ -55,6 +55,16 @@ export function derivedQuantities(s: SizedDesign): Quantity[] {
 			line('transformer', 'λ/4 transformer', f.transformer);
 			line('feedLine', 'Feed line', f.line);
 			break;
+		case 'aperture-coupled':
+			add('Feed', 'slotLengthMm', 'Coupling slot length', f.slotLengthMm, 'mm');
+			add('Feed', 'slotWidthMm', 'Coupling slot width', f.slotWidthMm, 'mm');
+			add('Feed', 'stubLengthMm', 'Open stub past the slot', f.stubLengthMm, 'mm');
+			line('feedLine', 'Feed line', f.line);
+			break;
+		case 'proximity-coupled':
+			add('Feed', 'overlapMm', 'Line run under the patch', f.overlapMm, 'mm');
+			line('feedLine', 'Feed line', f.line);
+			break;
 		case 'probe':
 			add('Feed', 'probeOffsetXMm', 'Probe offset x', f.offsetXMm, 'mm');
 			add('Feed', 'probeOffsetYMm', 'Probe offset y', f.offsetYMm, 'mm');
@@ -64,8 +74,31 @@ export function derivedQuantities(s: SizedDesign): Quantity[] {
 			break;
 	}
 
-	add('Board', 'groundWidthMm', 'Ground width', s.ground.widthMm, 'mm');
-	add('Board', 'groundLengthMm', 'Ground length', s.ground.lengthMm, 'mm');
+	if (s.parasitic) {
+		const pp = s.parasitic.patch;
+		if (pp.kind === 'rectangular' || pp.kind === 'nearly-square') {
+			add('Parasitic', 'parasiticWidthMm', 'Width', pp.widthMm, 'mm');
+			add('Parasitic', 'parasiticLengthMm', 'Length', pp.lengthMm, 'mm');
+		}
+		add('Parasitic', 'parasiticSizeRatio', 'Size over the driven patch', s.parasitic.sizeRatio, '×', 3);
+		add('Parasitic', 'parasiticSpacingMm', 'Height above the driven patch', s.parasitic.spacingMm, 'mm', 4);
+		add('Parasitic', 'parasiticSpacingWavelengths', 'Height above the driven patch', s.parasitic.spacingWavelengths, 'λ₀', 3);
+	}
+
+	if (s.array) {
+		const a = s.array;
+		add('Array', 'arrayElements', 'Elements (columns × rows)', `${a.columns} × ${a.rows} = ${a.elementCount}`, '');
+		add('Array', 'arraySpacingXMm', 'Pitch along x', a.spacingXMm, 'mm');
+		if (a.rows > 1) add('Array', 'arraySpacingYMm', 'Pitch along y', a.spacingYMm, 'mm');
+		add('Array', 'gratingLobeLimitWavelengths', 'Grating-lobe-free pitch below', a.gratingLobeLimitWavelengths, 'λ₀', 3);
+		add('Array', 'networkTransformerWidthMm', 'T-junction λ/4 arm width', a.network.transformer.widthMm, 'mm');
+		add('Array', 'networkTransformerImpedanceOhm', 'T-junction λ/4 arm impedance', a.network.transformer.impedanceOhm, 'Ω', 4);
+		add('Array', 'networkJunctionLevels', 'T-junction levels', String(a.network.junctionLevels), '');
+	}
+
+	const per = s.array ? 'Element ground' : 'Ground';
+	add('Board', 'groundWidthMm', `${per} width`, s.ground.widthMm, 'mm');
+	add('Board', 'groundLengthMm', `${per} length`, s.ground.lengthMm, 'mm');
 	add('Board', 'groundMarginMm', 'Ground margin', s.ground.marginMm, 'mm', 4);
 
 	add('Model', 'frequencyGHz', 'Frequency f₀', ghzFromHz(s.frequencyHz), 'GHz', 6);
@@ -82,7 +115,18 @@ export function derivedQuantities(s: SizedDesign): Quantity[] {
 	add('Estimates', 'qualityFactor', 'Quality factor Q', e.qualityFactor, '', 3);
 	add('Estimates', 'directivityDbi', 'Directivity', e.directivityDbi, 'dBi', 3);
 	add('Estimates', 'radiationEfficiencyPercent', 'Radiation efficiency', e.radiationEfficiency * 100, '%', 3);
-	add('Estimates', 'gainDbi', 'Gain', e.gainDbi, 'dBi', 3);
+	add('Estimates', 'gainDbi', s.array ? 'Element gain' : 'Gain', e.gainDbi, 'dBi', 3);
+	if (s.array) {
+		const af = s.array.factor;
+		add('Estimates', 'arrayFactorDirectivityDbi', 'Array-factor directivity', af.arrayFactorDirectivityDbi, 'dBi', 3);
+		add('Estimates', 'arrayGainDbi', 'Array gain', af.gainDbi, 'dBi', 3);
+		// a single row has no −3 dB point across it (isotropic elements): said in words, without a unit
+		const width = (deg: number | null) => (deg === null ? { v: 'none in view', u: '' } : { v: deg, u: '°' });
+		const xz = width(af.halfPowerBeamwidthXzDeg);
+		const yz = width(af.halfPowerBeamwidthYzDeg);
+		add('Estimates', 'beamwidthXzDeg', 'Beamwidth x–z (−3 dB)', xz.v, xz.u, 3);
+		add('Estimates', 'beamwidthYzDeg', 'Beamwidth y–z (−3 dB)', yz.v, yz.u, 3);
+	}
 	return q;
 }
 

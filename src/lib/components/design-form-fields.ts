@@ -1,6 +1,6 @@
 // The editor's fields: how each maps to a path of the design-input document, with its label and unit.
 // Pure: the browser uses it for live validation and preview, the form action for parsing the post.
-import { feedKinds, handednesses, patchShapes, probeModels, type DesignInput, type DesignInputDocument, type InputIssue } from '../schemas';
+import { allFeedKinds, handednesses, patchShapes, probeModels, requiredCopperCount, type DesignInput, type DesignInputDocument, type InputIssue } from '../schemas';
 import { ghzFromHz, hzFromGhz } from '../units';
 
 export type FieldKind = 'text' | 'number' | 'choice' | 'flag';
@@ -14,7 +14,14 @@ export interface FormField {
 	/** Unit shown beside the control and in tables. */
 	unit: string;
 	kind: FieldKind;
-	group: 'Design' | 'Substrate' | 'Feed' | 'Board';
+	group: FieldGroup;
+	/**
+	 * A part of the document that only some designs have: the field is shown and written only when it
+	 * is on (slot and proximity: the feed chooses them; parasitic and array: their switch).
+	 */
+	section?: FormSection;
+	/** A switch whose "on" means the object at `path` is present (its fields follow in its section). */
+	presence?: boolean;
 	/** Blank means "use the default / solve it". */
 	optional?: boolean;
 	choices?: readonly string[];
@@ -23,6 +30,9 @@ export interface FormField {
 	hint?: string;
 	step?: string;
 }
+
+export type FieldGroup = 'Design' | 'Substrate' | 'Feed' | 'Parasitic' | 'Array' | 'Board';
+export type FormSection = 'slot' | 'proximity' | 'parasitic' | 'array';
 
 const ghz = { toForm: ghzFromHz, toDocument: hzFromGhz, factor: 1e-9 };
 
@@ -38,7 +48,7 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'substrate.copperConductivitySPerM', path: 'substrate.copperConductivitySPerM', label: 'Copper conductivity σ', unit: 'S/m', kind: 'number', group: 'Substrate', step: 'any' },
 	{ name: 'substrate.relativePermittivityTolerance', path: 'substrate.relativePermittivityTolerance', label: 'εr tolerance ±', unit: '', kind: 'number', group: 'Substrate', step: 'any' },
 	{ name: 'substrate.heightToleranceMm', path: 'substrate.heightToleranceMm', label: 'Thickness tolerance ±', unit: 'mm', kind: 'number', group: 'Substrate', step: 'any' },
-	{ name: 'feed', path: 'feed', label: 'Feed', unit: '', kind: 'choice', group: 'Feed', choices: feedKinds },
+	{ name: 'feed', path: 'feed', label: 'Feed', unit: '', kind: 'choice', group: 'Feed', choices: allFeedKinds },
 	{ name: 'targetImpedanceOhm', path: 'targetImpedanceOhm', label: 'Feed-point resistance', unit: 'Ω', kind: 'number', group: 'Feed', step: 'any' },
 	{ name: 'feedLineImpedanceOhm', path: 'feedLineImpedanceOhm', label: 'Feed-line impedance Z₀', unit: 'Ω', kind: 'number', group: 'Feed', step: 'any' },
 	{ name: 'inset.notchGapMm', path: 'inset.notchGapMm', label: 'Notch gap', unit: 'mm', kind: 'number', group: 'Feed', optional: true, hint: 'inset feed; blank = one line width', step: 'any' },
@@ -47,13 +57,38 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'probe.clearanceDiameterMm', path: 'probe.clearanceDiameterMm', label: 'Ground clearance ⌀', unit: 'mm', kind: 'number', group: 'Feed', step: 'any' },
 	{ name: 'probe.model', path: 'probe.model', label: 'Probe model', unit: '', kind: 'choice', group: 'Feed', optional: true, hint: 'blank = not stated', choices: ['', ...probeModels] },
 	{ name: 'probe.platingThicknessUm', path: 'probe.platingThicknessUm', label: 'Barrel plating', unit: 'µm', kind: 'number', group: 'Feed', optional: true, hint: 'plated barrel; blank = 25 µm', step: 'any' },
+	{ name: 'slot.lengthMm', path: 'slot.lengthMm', label: 'Coupling slot length', unit: 'mm', kind: 'number', group: 'Feed', section: 'slot', optional: true, hint: 'blank = first-pass rule', step: 'any' },
+	{ name: 'slot.widthMm', path: 'slot.widthMm', label: 'Coupling slot width', unit: 'mm', kind: 'number', group: 'Feed', section: 'slot', optional: true, hint: 'blank = first-pass rule', step: 'any' },
+	{ name: 'slot.stubLengthMm', path: 'slot.stubLengthMm', label: 'Open stub past the slot', unit: 'mm', kind: 'number', group: 'Feed', section: 'slot', optional: true, hint: 'blank ≈ λg/4', step: 'any' },
+	{ name: 'proximity.overlapMm', path: 'proximity.overlapMm', label: 'Line run under the patch', unit: 'mm', kind: 'number', group: 'Feed', section: 'proximity', optional: true, hint: 'blank = to the centre', step: 'any' },
+	{ name: 'parasitic', path: 'parasitic', label: 'Stacked parasitic patch on the top copper', unit: '', kind: 'flag', group: 'Parasitic', presence: true },
+	{ name: 'parasitic.sizeRatio', path: 'parasitic.sizeRatio', label: 'Size over the driven patch', unit: '×', kind: 'number', group: 'Parasitic', section: 'parasitic', optional: true, hint: 'blank = 1.07', step: 'any' },
+	{ name: 'array', path: 'array', label: 'Repeat as an array with a corporate feed', unit: '', kind: 'flag', group: 'Array', presence: true },
+	{ name: 'array.columns', path: 'array.columns', label: 'Columns (along x)', unit: '', kind: 'number', group: 'Array', section: 'array', hint: '1, 2, 4 … 64', step: '1' },
+	{ name: 'array.rows', path: 'array.rows', label: 'Rows (along y)', unit: '', kind: 'number', group: 'Array', section: 'array', optional: true, hint: '1, 2, 4 … 64; blank = 1', step: '1' },
+	{ name: 'array.spacingXWavelengths', path: 'array.spacingXWavelengths', label: 'Pitch along x', unit: 'λ₀', kind: 'number', group: 'Array', section: 'array', optional: true, hint: 'blank = 0.7', step: 'any' },
+	{ name: 'array.spacingYWavelengths', path: 'array.spacingYWavelengths', label: 'Pitch along y', unit: 'λ₀', kind: 'number', group: 'Array', section: 'array', optional: true, hint: 'blank = 0.7', step: 'any' },
+	{ name: 'array.scanAngleDeg', path: 'array.scanAngleDeg', label: 'Scan angle from broadside', unit: '°', kind: 'number', group: 'Array', section: 'array', optional: true, hint: 'x–z plane; blank = 0', step: 'any' },
 	{ name: 'patchWidthMm', path: 'patchWidthMm', label: 'Fixed patch width W', unit: 'mm', kind: 'number', group: 'Board', optional: true, hint: 'rectangular only; blank = solved', step: 'any' },
 	{ name: 'groundMarginMm', path: 'groundMarginMm', label: 'Ground margin', unit: 'mm', kind: 'number', group: 'Board', optional: true, hint: 'blank = 3 h', step: 'any' },
 	{ name: 'solderMask', path: 'solderMask', label: 'Add solder-mask layers', unit: '', kind: 'flag', group: 'Board' }
 ];
 
-/** Whether a field matters for this shape and feed (the editor hides the rest; tables leave them out). */
-export function fieldApplies(field: FormField, shape: string, feed: string): boolean {
+/** Whether the switch of an optional part of the document is on: from form values, or from a stored input. */
+export type SectionSwitch = (section: 'parasitic' | 'array') => boolean;
+
+export const switchesOfValues = (values: FormValues): SectionSwitch => (section) => values[section] === 'on';
+export const switchesOfInput = (input: Pick<DesignInput, 'parasitic' | 'array'>): SectionSwitch => (section) => input[section] !== undefined;
+
+/**
+ * Whether a field matters for this shape and feed (the editor hides the rest; tables leave them out).
+ * The parasitic and array parts need `switches`; without it their fields do not apply.
+ */
+export function fieldApplies(field: FormField, shape: string, feed: string, switches?: SectionSwitch): boolean {
+	if (field.section === 'slot') return feed === 'aperture-coupled';
+	if (field.section === 'proximity') return feed === 'proximity-coupled';
+	if (field.section === 'parasitic' || field.section === 'array') return switches?.(field.section) ?? false;
+	if (field.presence) return switches !== undefined;
 	if (field.name === 'handedness') return shape === 'truncated-corner' || shape === 'nearly-square';
 	if (field.name === 'inset.notchGapMm') return feed === 'inset';
 	if (field.name.startsWith('probe.')) return feed === 'probe';
@@ -61,23 +96,103 @@ export function fieldApplies(field: FormField, shape: string, feed: string): boo
 	return true;
 }
 
-/** What the form holds: every control's text (a flag is "on" or ""). */
+/** What the form holds: every control's text (a flag is "on" or ""); stack rows as "stack.<i>.<key>". */
 export type FormValues = Record<string, string>;
+
+/** The switch that turns the explicit stack on; its rows are the "stack.<i>.<key>" values. */
+export const STACK_SWITCH = 'stack';
+
+/** Keys a stack row holds: copper has a thickness, a dielectric its εr, tanδ, height and bonding flag. */
+export const stackRowKeys = { copper: ['thicknessUm'], dielectric: ['relativePermittivity', 'lossTangent', 'heightMm', 'bonding'] } as const;
+const STACK_KEY = /^stack\.(\d+)\.(kind|thicknessUm|relativePermittivity|lossTangent|heightMm|bonding)$/;
+
+export interface StackRowValues {
+	kind: 'copper' | 'dielectric';
+	/** Text per key of this kind (bonding: "on" or ""). */
+	fields: Record<string, string>;
+}
+
+/** The stack rows held in form values, top to bottom. */
+export function stackRowsOfValues(values: FormValues): StackRowValues[] {
+	const rows = new Map<number, StackRowValues>();
+	for (const [key, text] of Object.entries(values)) {
+		const m = STACK_KEY.exec(key);
+		if (!m || m[2] !== 'kind') continue;
+		rows.set(Number(m[1]), { kind: text === 'copper' ? 'copper' : 'dielectric', fields: {} });
+	}
+	const ordered = [...rows.keys()].sort((a, b) => a - b);
+	return ordered.map((i) => {
+		const row = rows.get(i)!;
+		for (const k of stackRowKeys[row.kind]) row.fields[k] = values[`stack.${i}.${k}`] ?? '';
+		return row;
+	});
+}
+
+/** Form values with the stack rows replaced by `rows` (renumbered 0…n−1); the switch is left as it is. */
+export function withStackRows(values: FormValues, rows: readonly StackRowValues[]): FormValues {
+	const out: FormValues = {};
+	for (const [k, v] of Object.entries(values)) if (!STACK_KEY.test(k)) out[k] = v;
+	rows.forEach((row, i) => {
+		out[`stack.${i}.kind`] = row.kind;
+		for (const k of stackRowKeys[row.kind]) out[`stack.${i}.${k}`] = row.fields[k] ?? '';
+	});
+	return out;
+}
+
+/**
+ * A starting stack for `copperCount` coppers from the substrate fields: copper, dielectric, copper, …
+ * each dielectric a copy of the substrate (the designer then edits each layer).
+ */
+export function stackRowsFromSubstrate(values: FormValues, copperCount: number): StackRowValues[] {
+	const copper = (): StackRowValues => ({ kind: 'copper', fields: { thicknessUm: '' } });
+	const dielectric = (): StackRowValues => ({
+		kind: 'dielectric',
+		fields: { relativePermittivity: values['substrate.relativePermittivity'] ?? '', lossTangent: values['substrate.lossTangent'] ?? '', heightMm: values['substrate.heightMm'] ?? '', bonding: '' }
+	});
+	const rows = [copper()];
+	for (let i = 1; i < copperCount; i++) rows.push(dielectric(), copper());
+	return rows;
+}
+
+/** How many coppers the feed and the parasitic switch in the form need (2 or 3). */
+export function copperCountNeeded(values: FormValues): number {
+	return requiredCopperCount({ feed: values.feed as DesignInput['feed'], parasitic: values.parasitic === 'on' ? { sizeRatio: 1 } : undefined });
+}
+
+function numberOrJunk(text: string, scale?: FormField['scale']): number {
+	const n = Number(text);
+	return scale && Number.isFinite(n) ? scale.toDocument(n) : n;
+}
 
 /** The form's text as a design-input document: blanks become missing, numbers stay numbers (NaN for junk, so zod names it). */
 export function documentFromFormValues(values: FormValues): DesignInputDocument {
 	const doc: Record<string, unknown> = { schemaVersion: 1 };
+	const switches = switchesOfValues(values);
 	for (const f of designFormFields) {
 		const text = (values[f.name] ?? '').trim();
+		if (f.section && !fieldApplies(f, values.shape ?? '', values.feed ?? '', switches)) continue;
+		if (f.presence) {
+			if (text === 'on' || text === 'true') setAt(doc, f.path, (doc[f.path] as object | undefined) ?? {});
+			continue;
+		}
 		let value: unknown;
 		if (f.kind === 'flag') value = text === 'on' || text === 'true';
 		else if (text === '') value = undefined;
-		else if (f.kind === 'number') {
-			const n = Number(text);
-			value = f.scale && Number.isFinite(n) ? f.scale.toDocument(n) : n;
-		} else value = f.kind === 'text' ? values[f.name] : text;
+		else if (f.kind === 'number') value = numberOrJunk(text, f.scale);
+		else value = f.kind === 'text' ? values[f.name] : text;
 		if (value === undefined) continue;
 		setAt(doc, f.path, value);
+	}
+	if (values[STACK_SWITCH] === 'on') {
+		doc.stack = stackRowsOfValues(values).map((row) => {
+			const layer: Record<string, unknown> = { kind: row.kind };
+			for (const k of stackRowKeys[row.kind]) {
+				const text = (row.fields[k] ?? '').trim();
+				if (k === 'bonding') layer.bonding = text === 'on' || text === 'true';
+				else if (text !== '') layer[k] = numberOrJunk(text);
+			}
+			return layer;
+		});
 	}
 	return doc as DesignInputDocument;
 }
@@ -87,31 +202,54 @@ export function formValuesFromInput(input: DesignInput): FormValues {
 	const out: FormValues = {};
 	for (const f of designFormFields) {
 		const v = getAt(input, f.path);
-		if (f.kind === 'flag') out[f.name] = v ? 'on' : '';
+		if (f.presence || f.kind === 'flag') out[f.name] = v ? 'on' : '';
 		else if (v === undefined || v === null) out[f.name] = '';
 		else if (typeof v === 'number') out[f.name] = String(f.scale ? roundForForm(f.scale.toForm(v)) : v);
 		else out[f.name] = String(v);
 	}
-	return out;
+	out[STACK_SWITCH] = input.stack ? 'on' : '';
+	const rows = (input.stack ?? []).map((layer): StackRowValues =>
+		layer.kind === 'copper'
+			? { kind: 'copper', fields: { thicknessUm: layer.thicknessUm === undefined ? '' : String(layer.thicknessUm) } }
+			: { kind: 'dielectric', fields: { relativePermittivity: String(layer.relativePermittivity), lossTangent: String(layer.lossTangent), heightMm: String(layer.heightMm), bonding: layer.bonding ? 'on' : '' } }
+	);
+	return withStackRows(out, rows);
 }
 
-/** Reads a posted FormData into FormValues (only the known controls). */
+/** Reads a posted FormData into FormValues (only the known controls and the stack rows). */
 export function formValuesFromFormData(data: FormData): FormValues {
 	const out: FormValues = {};
 	for (const f of designFormFields) {
 		const v = data.get(f.name);
 		out[f.name] = typeof v === 'string' ? v : '';
 	}
+	const sw = data.get(STACK_SWITCH);
+	out[STACK_SWITCH] = typeof sw === 'string' ? sw : '';
+	const rowCount = new Set<number>();
+	for (const [key, v] of data.entries()) {
+		const m = STACK_KEY.exec(key);
+		if (m && typeof v === 'string' && Number(m[1]) < 64) {
+			out[key] = v;
+			rowCount.add(Number(m[1]));
+		}
+	}
+	// an unchecked bonding box is not posted: a dielectric row without it is not bonding
+	for (const i of rowCount) if (out[`stack.${i}.kind`] === 'dielectric') out[`stack.${i}.bonding`] ??= '';
 	return out;
 }
 
 /** Where an issue shows: the field it is about, or "" for the form as a whole. */
 export function fieldNameForPath(path: string): string {
-	return designFormFields.find((f) => f.path === path)?.name ?? '';
+	return designFormFields.find((f) => f.path === path)?.name ?? (isStackPath(path) ? path : '');
+}
+
+/** "stack", or a stack row or one of its keys: shown in the stack-up section, beside the row. */
+function isStackPath(path: string): boolean {
+	return path === 'stack' || /^stack\.\d+(\.[A-Za-z]+)?$/.test(path);
 }
 
 export interface FieldIssue {
-	/** Form control name, or "" for the whole form. */
+	/** Form control name (a stack path for the stack-up rows), or "" for the whole form. */
 	field: string;
 	message: string;
 }
@@ -125,8 +263,9 @@ export function fieldIssues(issues: readonly InputIssue[]): FieldIssue[] {
 			const factor = field.scale.factor;
 			message = message.replace(/(allowed range [[(])([-\d.e+]+), ([-\d.e+]+)([\])])/, (_m, open, lo, hi, close) => `${open}${roundForForm(Number(lo) * factor)}, ${roundForForm(Number(hi) * factor)}${close} ${field.unit}`);
 		}
-		if (!field && iss.path) message = `${iss.path}: ${message}`;
-		return { field: field?.name ?? '', message };
+		if (field) return { field: field.name, message };
+		if (isStackPath(iss.path)) return { field: iss.path, message };
+		return { field: '', message: iss.path ? `${iss.path}: ${message}` : message };
 	});
 }
 

@@ -10,8 +10,15 @@ const GEOMETRY_PATHS: Record<string, string> = {
 	'feed-longer-than-margin': 'groundMarginMm',
 	'notch-outside-patch': 'inset.notchGapMm',
 	'probe-outside-patch': 'probe.padDiameterMm',
-	'clearance-outside-ground': 'probe.clearanceDiameterMm'
+	'clearance-outside-ground': 'probe.clearanceDiameterMm',
+	'feed-network-crowded': 'array.spacingXWavelengths'
 };
+
+/** The field a geometry error is about: by its code, or (elements too close) by the spacing its message names. */
+function geometryPath(err: GeometryError): string {
+	if (err.code === 'elements-overlap') return err.message.startsWith('array.spacingYWavelengths') ? 'array.spacingYWavelengths' : 'array.spacingXWavelengths';
+	return GEOMETRY_PATHS[err.code] ?? '';
+}
 
 export type SizingOutcome =
 	| { ok: true; input: DesignInput; sized: SizedDesign; artwork: Artwork }
@@ -26,7 +33,7 @@ export function sizeDocument(raw: unknown): SizingOutcome {
 	} catch (err) {
 		if (err instanceof InputError) return { ok: false, issues: err.issues };
 		if (err instanceof GeometryError) {
-			const path = GEOMETRY_PATHS[err.code] ?? '';
+			const path = geometryPath(err);
 			return { ok: false, issues: [{ path, value: path ? valueAt(parsed.data, path) : undefined, message: err.message }] };
 		}
 		throw err;

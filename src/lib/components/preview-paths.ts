@@ -1,5 +1,5 @@
 // Artwork geometry as SVG path data for the on-screen preview: y flipped once here (the board's y points up).
-import type { ArtworkDimension, ArtworkShape } from '../artwork';
+import type { ArtworkDimension, ArtworkLayer, ArtworkShape, ShapeRole } from '../artwork';
 import { arcSweepRad, type Contour, type Point } from '../geometry';
 
 const n = (v: number) => String(Math.round(v * 1e4) / 1e4);
@@ -26,8 +26,8 @@ export function contourPath(c: Contour, boardLengthMm: number): string {
 }
 
 export type PreviewShape =
-	| { kind: 'path'; id: string; d: string; clear: boolean; stroke: number | null }
-	| { kind: 'circle'; id: string; cx: number; cy: number; r: number; clear: boolean };
+	| { kind: 'path'; id: string; role: ShapeRole; d: string; clear: boolean; stroke: number | null }
+	| { kind: 'circle'; id: string; role: ShapeRole; cx: number; cy: number; r: number; clear: boolean };
 
 export function previewShape(shape: ArtworkShape, boardLengthMm: number): PreviewShape {
 	const g = shape.geometry;
@@ -35,12 +35,12 @@ export function previewShape(shape: ArtworkShape, boardLengthMm: number): Previe
 	switch (g.kind) {
 		case 'circle': {
 			const [cx, cy] = toScreen(g.center, boardLengthMm);
-			return { kind: 'circle', id: shape.id, cx, cy, r: g.diameterMm / 2, clear };
+			return { kind: 'circle', id: shape.id, role: shape.role, cx, cy, r: g.diameterMm / 2, clear };
 		}
 		case 'region':
-			return { kind: 'path', id: shape.id, d: [g.region.outer, ...g.region.holes].map((c) => contourPath(c, boardLengthMm)).join(''), clear, stroke: null };
+			return { kind: 'path', id: shape.id, role: shape.role, d: [g.region.outer, ...g.region.holes].map((c) => contourPath(c, boardLengthMm)).join(''), clear, stroke: null };
 		case 'outline':
-			return { kind: 'path', id: shape.id, d: contourPath(g.contour, boardLengthMm), clear, stroke: g.strokeWidthMm };
+			return { kind: 'path', id: shape.id, role: shape.role, d: contourPath(g.contour, boardLengthMm), clear, stroke: g.strokeWidthMm };
 	}
 }
 
@@ -106,4 +106,62 @@ export function previewDimensions(dims: readonly ArtworkDimension[], board: { wi
 			text: `${dim.label} ${dim.valueMm.toFixed(2)}`
 		};
 	});
+}
+
+/** How the preview draws and names one artwork layer. */
+export interface PreviewLayerStyle {
+	fill: string;
+	opacity: number;
+	/** Legend and toggle text. */
+	label: string;
+	/** Drawing order: lower first (masks and profile, then ground planes, then the other coppers from the bottom up). */
+	order: number;
+}
+
+// Colours are the tailwind.config.ts tokens (copper, ground, substrate, ok).
+const TOP_COPPER = '#d98f55';
+const INNER_COPPER = '#b0622b';
+const BOTTOM_COPPER = '#6e3a17';
+const GROUND = '#8594a8';
+
+/** What a copper layer carries, in words: "ground", "patch", "patch + feed", "feed", "parasitic patch". */
+function copperContents(layer: ArtworkLayer): string {
+	const roles = new Set(layer.shapes.map((s) => s.role));
+	if (roles.has('ground')) return 'ground';
+	if (roles.has('parasitic-patch')) return 'parasitic patch';
+	const feed = roles.has('feed-line') || roles.has('feed-network') || roles.has('transformer');
+	if (roles.has('patch')) return feed ? 'patch + feed' : 'patch';
+	return feed ? 'feed' : 'copper';
+}
+
+/**
+ * Style of each layer of an artwork. A two-copper board keeps its two names (top copper, ground); a
+ * stack names each copper by its number and what it carries ("L2 ground"), so inner layers get toggles too.
+ */
+export function previewLayerStyles(layers: readonly ArtworkLayer[]): Record<string, PreviewLayerStyle> {
+	const coppers = layers.filter((l) => l.function.kind === 'copper');
+	const out: Record<string, PreviewLayerStyle> = {};
+	for (const layer of layers) {
+		const fn = layer.function;
+		if (fn.kind === 'profile') out[layer.id] = { fill: '#242d3b', opacity: 1, label: 'Profile', order: 2 };
+		else if (fn.kind === 'solder-mask') out[layer.id] = { fill: '#2f8f5b', opacity: fn.side === 'top' ? 0.35 : 0.25, label: fn.side === 'top' ? 'Top mask openings' : 'Bottom mask openings', order: fn.side === 'top' ? 1 : 0 };
+		else {
+			const what = copperContents(layer);
+			const ground = what === 'ground';
+			const fill = ground ? GROUND : fn.side === 'top' ? TOP_COPPER : fn.side === 'inner' ? INNER_COPPER : BOTTOM_COPPER;
+			const label = coppers.length === 2 ? (ground ? 'Ground' : fn.side === 'top' ? 'Top copper' : 'Bottom copper') : `L${fn.copperIndex} ${what}`;
+			out[layer.id] = { fill, opacity: ground ? 0.55 : fn.side === 'top' ? (coppers.length > 2 ? 0.8 : 0.95) : 0.85, label, order: ground ? 3 : 10 + (coppers.length - fn.copperIndex) };
+		}
+	}
+	return out;
+}
+
+/** Counts for the preview's caption: driven patches, parasitic patches, pieces of a corporate feed. */
+export function previewCounts(layers: readonly ArtworkLayer[]): { patches: number; parasitics: number; networkPieces: number } {
+	const all = layers.filter((l) => l.function.kind === 'copper').flatMap((l) => l.shapes);
+	return {
+		patches: all.filter((s) => s.role === 'patch').length,
+		parasitics: all.filter((s) => s.role === 'parasitic-patch').length,
+		networkPieces: all.filter((s) => s.role === 'feed-network' || s.role === 'network-transformer').length
+	};
 }

@@ -1,0 +1,32 @@
+// Derived-value rows for the new designs: coupled feeds, the parasitic patch and arrays (their array-factor figures).
+import { describe, expect, it } from 'vitest';
+import { derivedQuantities } from '../../../src/lib/components/derived-quantities';
+import { size } from '../../../src/lib/rf';
+import { layeredCases } from '../../fixtures/designs/layered-cases';
+
+const rows = (name: string) => new Map(derivedQuantities(size(layeredCases.find((c) => c.name === name)!.doc)).map((q) => [q.key, q]));
+
+describe('derived values of layered designs and arrays', () => {
+	it('list the aperture-coupled slot and stub, and the proximity-coupled overlap', () => {
+		const aperture = rows('aperture-coupled patch');
+		for (const key of ['slotLengthMm', 'slotWidthMm', 'stubLengthMm', 'feedLineWidthMm']) expect(aperture.get(key)?.group).toBe('Feed');
+		expect(rows('proximity-coupled patch').get('overlapMm')?.unit).toBe('mm');
+	});
+
+	it('list the parasitic patch with its height above the driven one', () => {
+		const p = rows('stacked parasitic patch');
+		// the demo stack's spacer is 6 mm (tests/fixtures/designs/layered-cases.ts)
+		expect(p.get('parasiticSpacingMm')?.value).toBeCloseTo(6, 6);
+		expect(p.get('parasiticSizeRatio')?.value).toBe(1.07);
+	});
+
+	it('give an array its element count, its gain as element gain + 10·log10 N, and say a single row has no y–z beamwidth', () => {
+		const a = rows('1×4 inset array');
+		expect(a.get('arrayElements')?.value).toBe('4 × 1 = 4');
+		expect(Number(a.get('arrayGainDbi')?.value)).toBeCloseTo(Number(a.get('gainDbi')?.value) + 10 * Math.log10(4), 9);
+		expect(a.get('beamwidthYzDeg')).toMatchObject({ value: 'none in view', unit: '' });
+		expect(typeof a.get('beamwidthXzDeg')?.value).toBe('number');
+		expect(a.has('arraySpacingYMm')).toBe(false);
+		expect(rows('4×4 inset array').has('arraySpacingYMm')).toBe(true);
+	});
+});

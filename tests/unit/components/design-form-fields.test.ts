@@ -1,0 +1,89 @@
+// The editor's form values ⇄ design-input document for layered designs and arrays: stack rows, switches, issue placement.
+import { describe, expect, it } from 'vitest';
+import {
+	copperCountNeeded,
+	designFormFields,
+	documentFromFormValues,
+	fieldApplies,
+	fieldIssues,
+	formValuesFromFormData,
+	formValuesFromInput,
+	stackRowsFromSubstrate,
+	stackRowsOfValues,
+	switchesOfInput,
+	withStackRows
+} from '../../../src/lib/components/design-form-fields';
+import { designInputSchema, fromZodError, parseDesignInput } from '../../../src/lib/schemas';
+import { layeredCases } from '../../fixtures/designs/layered-cases';
+
+describe('editor form values for layered designs and arrays', () => {
+	it.each(layeredCases)('$name: stored input → form values → document parses back to the same input', ({ doc }) => {
+		const input = parseDesignInput(doc);
+		const values = formValuesFromInput(input);
+		expect(parseDesignInput(documentFromFormValues(values))).toEqual(input);
+	});
+
+	it.each(layeredCases)('$name: the posted form (FormData) gives the same document as the live form', ({ doc }) => {
+		const values = formValuesFromInput(parseDesignInput(doc));
+		const data = new FormData();
+		// a browser posts checked boxes as "on" and leaves unchecked ones out
+		for (const [k, v] of Object.entries(values)) if (!(v === '' && (k.endsWith('.bonding') || ['parasitic', 'array', 'stack', 'solderMask'].includes(k)))) data.set(k, v);
+		expect(documentFromFormValues(formValuesFromFormData(data))).toEqual(documentFromFormValues(values));
+	});
+
+	it('keeps the stack rows in order top to bottom, with the bonding film flagged', () => {
+		const aperture = layeredCases.find((c) => c.name === 'aperture-coupled patch')!;
+		const rows = stackRowsOfValues(formValuesFromInput(parseDesignInput(aperture.doc)));
+		expect(rows.map((r) => r.kind)).toEqual(['copper', 'dielectric', 'dielectric', 'copper', 'dielectric', 'copper']);
+		expect(rows[2].fields).toMatchObject({ relativePermittivity: '3', heightMm: '0.1', bonding: 'on' });
+		expect(rows[1].fields.bonding).toBe('');
+	});
+
+	it('starts a stack from the substrate with the coppers the feed needs', () => {
+		const values = { ...formValuesFromInput(parseDesignInput(layeredCases[0].doc)), feed: 'aperture-coupled' };
+		expect(copperCountNeeded(values)).toBe(3);
+		expect(copperCountNeeded({ ...values, feed: 'inset' })).toBe(2);
+		expect(copperCountNeeded({ ...values, feed: 'inset', parasitic: 'on' })).toBe(3);
+		const rows = stackRowsFromSubstrate(values, 3);
+		expect(rows.map((r) => r.kind)).toEqual(['copper', 'dielectric', 'copper', 'dielectric', 'copper']);
+		expect(rows[1].fields.heightMm).toBe(values['substrate.heightMm']);
+		// renumbered when rows go: no gap in the indices, the old keys gone
+		const fewer = withStackRows({ ...values, stack: 'on' }, rows.slice(0, 3));
+		expect(Object.keys(fewer).filter((k) => k.startsWith('stack.')).sort()).toEqual(['stack.0.kind', 'stack.0.thicknessUm', 'stack.1.bonding', 'stack.1.heightMm', 'stack.1.kind', 'stack.1.lossTangent', 'stack.1.relativePermittivity', 'stack.2.kind', 'stack.2.thicknessUm']);
+	});
+
+	it('writes no array, parasitic, slot or proximity part while its switch or feed is off', () => {
+		const array = layeredCases.find((c) => c.name === '1×4 inset array')!;
+		const values = formValuesFromInput(parseDesignInput(array.doc));
+		expect(documentFromFormValues(values).array).toMatchObject({ columns: 4 });
+		const off = documentFromFormValues({ ...values, array: '', 'slot.lengthMm': '12', 'proximity.overlapMm': '3' });
+		expect(off.array).toBeUndefined();
+		expect(off.slot).toBeUndefined();
+		expect(off.proximity).toBeUndefined();
+		expect(documentFromFormValues({ ...values, feed: 'aperture-coupled', 'slot.lengthMm': '12' }).slot).toEqual({ lengthMm: 12 });
+	});
+
+	it('places issues beside their stack row and array field, the rest on the form', () => {
+		const values = formValuesFromInput(parseDesignInput(layeredCases[0].doc));
+		values['stack.1.heightMm'] = '-1';
+		const bad = designInputSchema.safeParse(documentFromFormValues({ ...values, array: 'on', 'array.columns': '3' }));
+		expect(bad.success).toBe(false);
+		const issues = fieldIssues(fromZodError(bad.error!, {}).issues);
+		expect(issues.find((i) => i.field === 'stack.1.heightMm')?.message).toMatch(/allowed range \(0, 100\]/);
+		expect(issues.find((i) => i.field === 'array.columns')?.message).toMatch(/power of two/);
+		expect(fieldIssues([{ path: 'stack', value: undefined, message: 'needs 3' }])).toEqual([{ field: 'stack', message: 'needs 3' }]);
+		expect(fieldIssues([{ path: 'slot', value: {}, message: 'only aperture' }])).toEqual([{ field: '', message: 'slot: only aperture' }]);
+	});
+
+	it('shows array and parasitic fields only where their part is present (tables of stored inputs too)', () => {
+		const columns = designFormFields.find((f) => f.name === 'array.columns')!;
+		const input = parseDesignInput(layeredCases.find((c) => c.name === '1×4 inset array')!.doc);
+		expect(fieldApplies(columns, 'rectangular', 'inset', switchesOfInput(input))).toBe(true);
+		expect(fieldApplies(columns, 'rectangular', 'inset', switchesOfInput({ ...input, array: undefined }))).toBe(false);
+		// without switches (the revision diff), the optional parts stay out
+		expect(fieldApplies(columns, 'rectangular', 'inset')).toBe(false);
+		const slot = designFormFields.find((f) => f.name === 'slot.lengthMm')!;
+		expect(fieldApplies(slot, 'rectangular', 'aperture-coupled')).toBe(true);
+		expect(fieldApplies(slot, 'rectangular', 'proximity-coupled')).toBe(false);
+	});
+});

@@ -1,0 +1,42 @@
+// The preview's layer styles and counts: every copper of a stack named by number and contents, ground drawn first, arrays counted.
+import { describe, expect, it } from 'vitest';
+import { buildArtwork } from '../../../src/lib/artwork';
+import { previewCounts, previewLayerStyles } from '../../../src/lib/components/preview-paths';
+import { size } from '../../../src/lib/rf';
+import { designDocument } from '../../fixtures/designs/design-cases';
+import { layeredCases } from '../../fixtures/designs/layered-cases';
+
+const artworkOf = (name: string) => buildArtwork(size(layeredCases.find((c) => c.name === name)!.doc));
+
+describe('preview layer styles', () => {
+	it('keep the two names of a two-copper board and draw the ground under the top copper', () => {
+		const styles = previewLayerStyles(buildArtwork(size(designDocument('rectangular', 'inset'))).layers);
+		expect(styles['copper-top'].label).toBe('Top copper');
+		expect(styles['copper-bottom'].label).toBe('Ground');
+		expect(styles['copper-bottom'].order).toBeLessThan(styles['copper-top'].order);
+	});
+
+	it('name each copper of an aperture-coupled stack by number and contents, inner layer included', () => {
+		const styles = previewLayerStyles(artworkOf('aperture-coupled patch').layers);
+		expect([styles['copper-top'].label, styles['copper-inner-1'].label, styles['copper-bottom'].label]).toEqual(['L1 patch', 'L2 ground', 'L3 feed']);
+		// the ground first, then the feed below it, the patch last: the feed under the slot stays visible
+		expect(styles['copper-inner-1'].order).toBeLessThan(styles['copper-bottom'].order);
+		expect(styles['copper-bottom'].order).toBeLessThan(styles['copper-top'].order);
+	});
+
+	it('name a parasitic stack and a proximity-coupled stack by what each copper carries', () => {
+		const parasitic = previewLayerStyles(artworkOf('stacked parasitic patch').layers);
+		expect([parasitic['copper-top'].label, parasitic['copper-inner-1'].label, parasitic['copper-bottom'].label]).toEqual(['L1 parasitic patch', 'L2 patch + feed', 'L3 ground']);
+		const proximity = previewLayerStyles(artworkOf('proximity-coupled patch').layers);
+		expect(proximity['copper-inner-1'].label).toBe('L2 feed');
+	});
+});
+
+describe('preview counts', () => {
+	it('count the patches and the corporate feed of arrays', () => {
+		expect(previewCounts(artworkOf('1×4 inset array').layers)).toMatchObject({ patches: 4, parasitics: 0 });
+		expect(previewCounts(artworkOf('1×4 inset array').layers).networkPieces).toBeGreaterThan(0);
+		expect(previewCounts(artworkOf('4×4 inset array').layers).patches).toBe(16);
+		expect(previewCounts(artworkOf('aperture-coupled patch').layers)).toEqual({ patches: 1, parasitics: 0, networkPieces: 0 });
+	});
+});
