@@ -76,4 +76,12 @@ test('a violating design is marked, its download refused with the list, and a wa
 	const notes = await zip.file(`${slug}-B.fab-notes.txt`)!.async('string');
 	expect(notes).toContain(`against the "${profileName}" profile accepted by the design team. Reason: ${reason}`);
 	expect(notes.match(/ - Waived: /g)?.length).toBe(body.violations.length);
+
+	// The export log marks the waived download and shows the reason when its row is opened.
+	await page.goto(`/designs/${designId}/exports`);
+	const row = page.locator('tr[data-export-id]').first();
+	await expect(row.locator('[data-waiver-mark]')).toBeVisible();
+	await row.getByRole('button', { name: /bundle/ }).click();
+	await expect(page.locator('[data-waiver-reason]')).toContainText(reason);
+	await page.screenshot({ path: '/tmp/drc-export-log-waiver.png', fullPage: true });
 });
