@@ -40,7 +40,7 @@ describe('editor form values for layered designs and arrays', () => {
 	});
 
 	it('starts a stack from the substrate with the coppers the feed needs', () => {
-		const values = { ...formValuesFromInput(parseDesignInput(layeredCases[0].doc)), feed: 'aperture-coupled' };
+		const values: Record<string, string> = { ...formValuesFromInput(parseDesignInput(layeredCases[0].doc)), feed: 'aperture-coupled' };
 		expect(copperCountNeeded(values)).toBe(3);
 		expect(copperCountNeeded({ ...values, feed: 'inset' })).toBe(2);
 		expect(copperCountNeeded({ ...values, feed: 'inset', parasitic: 'on' })).toBe(3);

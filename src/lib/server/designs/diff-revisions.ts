@@ -1,5 +1,5 @@
 // Two revisions side by side: every input field and every derived dimension, with what changed. Pure.
-import { designFormFields, fieldApplies, valueAtPath } from '../../components/design-form-fields';
+import { designFormFields, fieldApplies, switchesOfInput, valueAtPath } from '../../components/design-form-fields';
 import { derivedQuantities, formatPlain, formatValue } from '../../components/derived-quantities';
 import type { SizedDesign } from '../../rf';
 import type { DesignInput } from '../../schemas';
@@ -33,7 +33,8 @@ export interface RevisionDiff {
 
 export function diffRevisions(a: DiffSide, b: DiffSide): RevisionDiff {
 	// Fields that apply to neither side (probe sizes of two inset-fed revisions) are left out.
-	const applies = (f: (typeof designFormFields)[number]) => fieldApplies(f, a.input.shape, a.input.feed) || fieldApplies(f, b.input.shape, b.input.feed);
+	const applies = (f: (typeof designFormFields)[number]) =>
+		fieldApplies(f, a.input.shape, a.input.feed, switchesOfInput(a.input)) || fieldApplies(f, b.input.shape, b.input.feed, switchesOfInput(b.input));
 	const inputs = designFormFields.filter(applies).map((f) => {
 		const va = valueAtPath(a.input, f.path);
 		const vb = valueAtPath(b.input, f.path);
