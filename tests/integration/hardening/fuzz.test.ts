@@ -57,3 +57,11 @@ describe('text PostgreSQL cannot store (found by the 10 000-case run as 500s)', 
 		expect(res.body.issues[0].path).toBe('query.sort');
 	});
 });
+
+describe('parallel creations of one name (found by the 10 000-case run as 500s)', () => {
+	it('makes 24 designs of the same name at once, each with its own slug', async () => {
+		const answers = await Promise.all(Array.from({ length: 24 }, () => api(server.origin, `/api/v1/teams/${ws.a.teamId}/designs`, { token: ws.editor.token }, { body: { input: demoDesign(`Race ${ws.suffix}`) } })));
+		expect(answers.map((a) => a.status)).toEqual(Array(24).fill(201));
+		expect(new Set(answers.map((a) => a.body.slug ?? a.body.design?.slug ?? a.body.id)).size).toBe(24);
+	});
+});

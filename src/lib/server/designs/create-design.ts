@@ -50,7 +50,8 @@ export async function createDesign(db: Kysely<Database>, opts: CreateDesignOptio
 				return { design: toDesign(row!), revisionLabel: label };
 			});
 		} catch (err) {
-			if ((err as { code?: string }).code === '23505' && attempt < 5) continue;
+			// Each round of a same-name race has one winner: enough rounds for a burst of parallel creations.
+			if ((err as { code?: string }).code === '23505' && attempt < 40) continue;
 			throw err;
 		}
 	}
