@@ -1,6 +1,8 @@
 // The private PostgreSQL cluster: find Debian's binaries, initdb under .data/, start on 127.0.0.1, stop.
 import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, chmodSync } from 'node:fs';
+import { createHash } from 'node:crypto';
+import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import pg from 'pg';
 import { ConfigError, type LocalConfig } from './config.ts';
@@ -50,8 +52,23 @@ function runServerCommand(binDir: string, tool: string, args: string[]): { statu
 	return { status: r.status, output: `${r.stdout ?? ''}${r.stderr ?? ''}`.trim() };
 }
 
+/** True when the unprivileged server user can enter `dir` (every folder above it must be searchable). */
+function serverUserCanReach(dir: string): boolean {
+	return spawnSync('runuser', ['-u', SERVER_USER, '--', 'test', '-x', dir], { stdio: 'ignore' }).status === 0;
+}
+
+/**
+ * The cluster's folder: `<data dir>/pg`. As root, the server runs as `postgres`; when the checkout sits
+ * below a folder that user cannot enter (a home folder of mode 700, say), the cluster goes to a folder of
+ * its own under the system's temporary folder instead, named after the data folder so that start and stop agree.
+ */
 export function clusterDir(config: LocalConfig): string {
-	return join(config.dataDir, 'pg');
+	const preferred = join(config.dataDir, 'pg');
+	if (!isRoot()) return preferred;
+	mkdirSync(config.dataDir, { recursive: true });
+	if (serverUserCanReach(config.dataDir)) return preferred;
+	const tag = createHash('sha256').update(config.dataDir).digest('hex').slice(0, 12);
+	return join(tmpdir(), `fringefield-pg-${tag}`, 'pg');
 }
 
 export function connectionUrl(config: LocalConfig, database: string): string {

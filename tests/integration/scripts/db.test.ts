@@ -73,3 +73,25 @@ describe('the private PostgreSQL cluster', () => {
 		rmSync(other, { recursive: true, force: true });
 	});
 });
+
+describe('where the cluster lives', () => {
+	it('is <data dir>/pg, or a folder of its own when root runs it below a folder the server user cannot enter', async () => {
+		const { clusterDir } = await import('../../../scripts/lib/postgres');
+		const { loadConfig } = await import('../../../scripts/lib/config');
+		const open = mkdtempSync(join(tmpdir(), 'ff-open-'));
+		const closed = mkdtempSync(join(tmpdir(), 'ff-closed-'));
+		const { chmodSync } = await import('node:fs');
+		chmodSync(closed, 0o700);
+		const base = loadConfig();
+		expect(clusterDir({ ...base, dataDir: join(open, 'data') })).toBe(join(open, 'data', 'pg'));
+		const hidden = clusterDir({ ...base, dataDir: join(closed, 'data') });
+		if (process.getuid?.() === 0) {
+			expect(hidden.startsWith(join(closed, 'data'))).toBe(false);
+			expect(hidden).toBe(clusterDir({ ...base, dataDir: join(closed, 'data') }));
+		} else {
+			expect(hidden).toBe(join(closed, 'data', 'pg'));
+		}
+		rmSync(open, { recursive: true, force: true });
+		rmSync(closed, { recursive: true, force: true });
+	});
+});
