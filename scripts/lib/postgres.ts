@@ -66,6 +66,8 @@ export function clusterDir(config: LocalConfig): string {
 	const preferred = join(config.dataDir, 'pg');
 	if (!isRoot()) return preferred;
 	mkdirSync(config.dataDir, { recursive: true });
+	// The data folder is ours: open it to the server user; the folders above it are not ours to change.
+	chmodSync(config.dataDir, 0o755);
 	if (serverUserCanReach(config.dataDir)) return preferred;
 	const tag = createHash('sha256').update(config.dataDir).digest('hex').slice(0, 12);
 	return join(tmpdir(), `fringefield-pg-${tag}`, 'pg');

@@ -81,9 +81,11 @@ describe('where the cluster lives', () => {
 		const open = mkdtempSync(join(tmpdir(), 'ff-open-'));
 		const closed = mkdtempSync(join(tmpdir(), 'ff-closed-'));
 		const { chmodSync } = await import('node:fs');
+		chmodSync(open, 0o755);
 		chmodSync(closed, 0o700);
 		const base = loadConfig();
 		expect(clusterDir({ ...base, dataDir: join(open, 'data') })).toBe(join(open, 'data', 'pg'));
+		// the data folder itself may be closed (it is ours and gets opened); a closed folder above it cannot be
 		const hidden = clusterDir({ ...base, dataDir: join(closed, 'data') });
 		if (process.getuid?.() === 0) {
 			expect(hidden.startsWith(join(closed, 'data'))).toBe(false);
