@@ -4,12 +4,12 @@ import { formFailure, formFields, requestPasswordReset, takeResetMailAllowance, 
 import type { Actions } from './$types';
 
 export const actions: Actions = {
-	default: async ({ request }) => {
+	default: async ({ request, getClientAddress }) => {
 		const values = await formFields(request);
 		// The allowance counts every e-mail alike, so running out of it says nothing about an account.
-		const { retryAfterSeconds } = await takeResetMailAllowance(values.email ?? '');
+		const { retryAfterSeconds } = await takeResetMailAllowance(values.email ?? '', getClientAddress());
 		if (retryAfterSeconds > 0) {
-			return fail(429, { form: 'reset', message: `Several links were sent to this address already; try again in ${Math.ceil(retryAfterSeconds / 60)} minute(s).`, issues: {}, values } as FormProblem);
+			return fail(429, { form: 'reset', message: `Several links were asked for already; try again in ${Math.ceil(retryAfterSeconds / 60)} minute(s).`, issues: {}, values } as FormProblem);
 		}
 		try {
 			const { delivery } = await requestPasswordReset({ email: values.email });

@@ -1,12 +1,13 @@
 // Slowing down guessing: at most 10 failed sign-ins per e-mail and 50 per client
 // address in 15 minutes, and at most
-// 5 reset mails per e-mail an hour. Counted per process in memory (several app servers would share a
+// 5 reset mails per e-mail and 20 reset requests per client address an hour. Counted per process in memory (several app servers would share a
 // PostgreSQL-backed limiter instead). The same rule applies to every e-mail, so it reveals no accounts.
 import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
 
 const signInFailuresByEmail = new RateLimiterMemory({ keyPrefix: 'signin-e', points: 10, duration: 15 * 60 });
 const signInFailuresByAddress = new RateLimiterMemory({ keyPrefix: 'signin-a', points: 50, duration: 15 * 60 });
 const resetMails = new RateLimiterMemory({ keyPrefix: 'reset', points: 5, duration: 60 * 60 });
+const resetRequestsByAddress = new RateLimiterMemory({ keyPrefix: 'reset-a', points: 20, duration: 60 * 60 });
 
 export interface Throttle {
 	/** Seconds to wait, or 0 when the attempt may go ahead. */
@@ -50,9 +51,13 @@ export async function clearSignInFailures(email: string): Promise<void> {
 	await signInFailuresByEmail.delete(emailKey(email));
 }
 
-/** Counts one reset request for this e-mail; returns the wait when the hourly allowance is used up. */
-export async function takeResetMailAllowance(email: string): Promise<Throttle> {
+/**
+ * Counts one reset request for this e-mail and this client address; returns the wait when either hourly
+ * allowance is used up (one address asking for many e-mails is stopped too).
+ */
+export async function takeResetMailAllowance(email: string, clientAddress = ''): Promise<Throttle> {
 	const keys: Keyed[] = [[resetMails, emailKey(email)]];
+	if (clientAddress) keys.push([resetRequestsByAddress, clientAddress]);
 	const wait = await waitOf(keys);
 	if (wait > 0) return { retryAfterSeconds: wait };
 	await consume(keys);
