@@ -48,7 +48,7 @@ function demoDesigns(): DemoDesign[] {
 		groundMarginMm: 6
 	};
 	const cp58 = {
-		name: 'Drone video 5.8 GHz RHCP',
+		name: 'Drone FPV downlink 5.8 GHz RHCP',
 		frequencyHz: 5.8e9,
 		shape: 'truncated-corner',
 		feed: 'inset',
