@@ -1,30 +1,18 @@
 // Journey: an editor uploads a measured S11 file, sees the plot with its resonance, confirms the retune and
 // lands on a new revision that names the measurement; a malformed file shows its line-numbered error and changes nothing.
-import { randomBytes } from 'node:crypto';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { expect, test, type Page } from '@playwright/test';
 import { closeDb, getDb } from '../../src/lib/server/db';
-import { hashPassword } from '../../src/lib/server/auth/password';
-import { createDesign } from '../../src/lib/server/designs/create-design';
+import { seedEditorWithDesign } from './helpers/seed';
 
 const fixtures = path.join(path.dirname(fileURLToPath(import.meta.url)), '../fixtures/touchstone-upload');
-const suffix = randomBytes(4).toString('hex');
-const editor = { id: `e2e-meas-${suffix}`, email: `meas-${suffix}@e2e.test`, password: `retune-${suffix}-pass` };
+let editor = { id: '', email: '', password: '' };
 let designId = '';
 
 test.beforeAll(async () => {
-	const db = getDb();
-	await db.insertInto('app_user').values({ id: editor.id, email: editor.email, display_name: `Bench ${suffix}`, password_hash: await hashPassword(editor.password) }).execute();
-	await db.insertInto('team').values({ id: `team-meas-${suffix}`, name: `Bench team ${suffix}` }).execute();
-	await db.insertInto('team_member').values({ team_id: `team-meas-${suffix}`, user_id: editor.id, role: 'editor' }).execute();
 	// 2.45 GHz inset-fed patch on εr 3.55, 1.524 mm (demo data); the fixture board resonates at 2.41 GHz.
-	const { design } = await createDesign(db, {
-		teamId: `team-meas-${suffix}`,
-		userId: editor.id,
-		raw: { name: `Bench patch ${suffix}`, frequencyHz: 2.45e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 3.55, heightMm: 1.524, lossTangent: 0.0027 } }
-	});
-	designId = design.id;
+	({ editor, designId } = await seedEditorWithDesign('meas', 'Bench patch', { frequencyHz: 2.45e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 3.55, heightMm: 1.524, lossTangent: 0.0027 } }));
 });
 test.afterAll(async () => {
 	await closeDb();

@@ -1,28 +1,16 @@
 // Journey: an editor builds a sweep plan on a revision — the count follows the typing, past 10 000 points it cannot be saved —
 // previews a point, saves it and downloads the sweep JSON with progress shown (recorded); then looks at the tolerance study.
-import { randomBytes } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
 import { closeDb, getDb } from '../../src/lib/server/db';
-import { hashPassword } from '../../src/lib/server/auth/password';
-import { createDesign } from '../../src/lib/server/designs/create-design';
+import { seedEditorWithDesign } from './helpers/seed';
 
-const suffix = randomBytes(4).toString('hex');
-const editor = { id: `e2e-sweep-${suffix}`, email: `sweep-${suffix}@e2e.test`, password: `sweep-${suffix}-pass` };
+let editor = { id: '', email: '', password: '' };
 let designId = '';
 
 test.beforeAll(async () => {
-	const db = getDb();
-	await db.insertInto('app_user').values({ id: editor.id, email: editor.email, display_name: `Sim ${suffix}`, password_hash: await hashPassword(editor.password) }).execute();
-	await db.insertInto('team').values({ id: `team-sweep-${suffix}`, name: `Sim team ${suffix}` }).execute();
-	await db.insertInto('team_member').values({ team_id: `team-sweep-${suffix}`, user_id: editor.id, role: 'editor' }).execute();
 	// Demo data: 2.45 GHz inset patch, εr 3.55 ± 0.05, h 1.524 ± 0.05 mm.
-	const { design } = await createDesign(db, {
-		teamId: `team-sweep-${suffix}`,
-		userId: editor.id,
-		raw: { name: `Sim patch ${suffix}`, frequencyHz: 2.45e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 3.55, heightMm: 1.524, relativePermittivityTolerance: 0.05, heightToleranceMm: 0.05 } }
-	});
-	designId = design.id;
+	({ editor, designId } = await seedEditorWithDesign('sweep', 'Sim patch', { frequencyHz: 2.45e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 3.55, heightMm: 1.524, relativePermittivityTolerance: 0.05, heightToleranceMm: 0.05 } }));
 });
 test.afterAll(async () => {
 	await closeDb();
