@@ -6,6 +6,7 @@ import { GeometryError } from '../../lib/geometry';
 import { size } from '../../lib/rf';
 import { InputError, formatIssue, parseDesignInput } from '../../lib/schemas';
 import { parseFabProfile, STANDARD_QUICK_TURN_PROFILE } from '../../lib/schemas/fab-profile';
+import { UsageError } from '../usage-error';
 
 export const summary = 'check a design against a fab profile (trace, spacing, drill, ring, edge, notch); prints the violations as JSON';
 
@@ -25,7 +26,6 @@ requiredMm and a message.
 Exit codes: 0 clean; 3 violations (the list is still printed on stdout); 2 bad input, with one line
 on stderr naming the field, the value and the allowed range.`;
 
-class UsageError extends Error {}
 
 function readJson(path: string): unknown {
 	let text: string;

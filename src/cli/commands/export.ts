@@ -16,6 +16,7 @@ import { GeometryError } from '../../lib/geometry';
 import { size } from '../../lib/rf';
 import { InputError, formatIssue, parseDesignInput } from '../../lib/schemas';
 import { parseFabProfile, STANDARD_QUICK_TURN_PROFILE } from '../../lib/schemas/fab-profile';
+import { UsageError } from '../usage-error';
 
 export const summary = 'write Gerber, drill, DXF, SVG, sweep JSON and fab notes for a design, or one zip of them';
 
@@ -53,7 +54,6 @@ export interface ExportCommandDependencies {
 }
 
 /** A bad command line or unreadable file: reported as one line, exit 2. */
-export class UsageError extends Error {}
 
 interface ExportArgs {
 	file: string;

@@ -4,6 +4,7 @@ import { describeNetwork, portCountFromFileName, readTouchstone, s11FromNetwork 
 import { analyzeMeasuredResponse, DEFAULT_MATCH_THRESHOLD_DB } from '../../lib/rf/measured-response';
 import { proposeRetune } from '../../lib/rf/retune';
 import { InputError, formatIssue } from '../../lib/schemas/input-error';
+import { UsageError } from '../usage-error';
 
 export const summary = 'analyse a measured S11 file (.s1p/.s2p): resonance, −10 dB band, VSWR, retune';
 
@@ -27,7 +28,6 @@ interface MeasureArgs {
 	holdWidth: boolean;
 }
 
-class UsageError extends Error {}
 
 function parseArgs(argv: string[]): MeasureArgs {
 	let file: string | undefined;

@@ -3,6 +3,7 @@ import { readFileSync } from 'node:fs';
 import { defaultFeedFor, formatIssue, InputError, patchShapes, type PatchShape } from '../../lib/schemas';
 import { size, sizingReport } from '../../lib/rf';
 import { hzFromGhz } from '../../lib/units';
+import { UsageError } from '../usage-error';
 
 export const summary = 'size a patch antenna (design-input JSON file, - for stdin, or flags); prints one JSON object';
 
@@ -62,7 +63,6 @@ export const help = [
 	'Example: npm run cli -- size --frequency-ghz 2.45 --er 4.4 --height-mm 1.6 --loss-tangent 0.02'
 ].join('\n');
 
-class UsageError extends Error {}
 
 function setAt(doc: Record<string, unknown>, path: string[], value: unknown): void {
 	let node = doc;

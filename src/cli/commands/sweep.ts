@@ -3,7 +3,8 @@ import { writeFileSync } from 'node:fs';
 import { createExportMeta } from '../../lib/formats/export-meta';
 import { MAX_SWEEP_POINTS, buildSweepDocument, serializeSweep, sweepableFields } from '../../lib/formats/sweep';
 import { InputError, formatIssue, parseDesignInput } from '../../lib/schemas';
-import { UsageError, readJson } from './export';
+import { UsageError } from '../usage-error';
+import { readJson } from './export';
 
 export const summary = `size a design over a plan of swept fields (at most ${MAX_SWEEP_POINTS} points) into one sweep JSON`;
 

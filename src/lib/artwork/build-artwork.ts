@@ -4,12 +4,12 @@ import type { SizedDesign } from '../rf/sized-design';
 import { buildDimensions } from './build-dimensions';
 import { buildLayeredStack, buildStack } from './build-stack';
 import { buildExtendedArtwork } from './build-extended-artwork';
+import { profileLayer } from './profile-layer';
 import { buildTopCopper } from './build-top-copper';
 import { probeModelOf } from './probe-model';
 import type { Artwork, ArtworkDrill, ArtworkLayer, ArtworkShape } from './types';
 
 /** Pen width for the board profile line: the outline is its centre line; width only makes it visible. */
-export const PROFILE_STROKE_WIDTH_MM = 0.1;
 
 /**
  * Builds the artwork. The board spans (0, 0)–(ground.widthMm, ground.lengthMm); the patch is
@@ -39,13 +39,7 @@ export function buildArtwork(sized: SizedDesign): Artwork {
 	const layers: ArtworkLayer[] = [
 		{ id: 'copper-top', title: 'Top copper (patch and feed)', function: { kind: 'copper', copperIndex: 1, side: 'top' }, shapes: top.shapes, voids: top.voids },
 		{ id: 'copper-bottom', title: 'Bottom copper (ground)', function: { kind: 'copper', copperIndex: 2, side: 'bottom' }, shapes: groundShapes, voids: [] },
-		{
-			id: 'profile',
-			title: 'Board profile',
-			function: { kind: 'profile' },
-			shapes: [{ id: 'profile', role: 'profile', polarity: 'dark', geometry: { kind: 'outline', contour: board.outer, strokeWidthMm: PROFILE_STROKE_WIDTH_MM } }],
-			voids: []
-		}
+		profileLayer(board.outer)
 	];
 	if (sized.input.solderMask) {
 		// Mask off the antenna: solder mask over the patch would shift its resonance (common practice, no source).

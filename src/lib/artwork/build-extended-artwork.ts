@@ -4,10 +4,10 @@ import type { SizedDesign } from '../rf/sized-design';
 import { buildElement, layerRolesOf, shapeBounds, type BuiltElement } from './build-element';
 import { buildLayeredStack, copperLayerIds } from './build-stack';
 import { layoutCorporateFeed, pieceBounds, pieceShape } from './build-corporate-feed';
+import { profileLayer } from './profile-layer';
 import { translateShape } from './translate-shape';
 import type { Artwork, ArtworkDimension, ArtworkLayer, ArtworkShape } from './types';
 
-const PROFILE_STROKE_WIDTH_MM = 0.1;
 
 const COPPER_TITLES: Record<string, string> = {
 	'copper-top': 'Top copper',
@@ -93,13 +93,7 @@ export function buildExtendedArtwork(sized: SizedDesign): Artwork {
 		shapes: shapes[i],
 		voids: voids[i]
 	}));
-	layers.push({
-		id: 'profile',
-		title: 'Board profile',
-		function: { kind: 'profile' },
-		shapes: [{ id: 'profile', role: 'profile', polarity: 'dark', geometry: { kind: 'outline', contour: board.outer, strokeWidthMm: PROFILE_STROKE_WIDTH_MM } }],
-		voids: []
-	});
+	layers.push(profileLayer(board.outer));
 	if (sized.input.solderMask) {
 		const openings = (i: number, side: 'top' | 'bottom') =>
 			shapes[i].filter((s) => s.polarity === 'dark' && s.role !== 'ground').map((s): ArtworkShape => ({ ...s, id: `mask-${side}-${s.id}`, role: 'mask-opening', polarity: 'dark' }));

@@ -1,6 +1,7 @@
 // Public face of the artwork room.
 export * from './types';
-export { buildArtwork, PROFILE_STROKE_WIDTH_MM } from './build-artwork';
+export { buildArtwork } from './build-artwork';
+export { profileLayer, PROFILE_STROKE_WIDTH_MM } from './profile-layer';
 export { patchPolygon } from './patch-polygon';
 export { needsExtendedArtwork } from './build-artwork';
 export { copperLayerIds } from './build-stack';

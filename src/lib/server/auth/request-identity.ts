@@ -1,7 +1,7 @@
 // Who is asking: a signed-in session (cookie) or a personal API token (Authorization: Bearer ff_…).
 import type { Cookies } from '@sveltejs/kit';
 import { getDb } from '../db';
-import * as tokenQueries from '../db/api-token.queries';
+import * as tokenQueries from '../db/token.queries';
 import { hashSecret, TOKEN_PREFIX } from './api-token';
 import { getLucia } from './lucia';
 

@@ -1,5 +1,5 @@
-// Personal API tokens: create, list a person's live tokens, revoke (the look-up by hash is in api-token.queries.ts).
-import type { Kysely } from 'kysely';
+// Personal API tokens: create, list a person's live tokens, revoke, and the look-up by hash that authenticates a request.
+import { sql, type Kysely } from 'kysely';
 import type { Database } from './database';
 import type { InsertableApiTokenRow } from './api-token.table';
 
@@ -41,4 +41,30 @@ export async function revokeTokensByTeamAndUser(db: Kysely<Database>, teamId: st
 /** The stored row of a token (tests check that only the hash is kept). */
 export async function findTokenRowById(db: Kysely<Database>, id: string) {
 	return db.selectFrom('api_token').selectAll().where('id', '=', id).executeTakeFirst();
+}
+
+export async function findLiveTokenByHash(db: Kysely<Database>, tokenHash: string) {
+	return db
+		.selectFrom('api_token')
+		.innerJoin('app_user', 'app_user.id', 'api_token.user_id')
+		.select(['api_token.id', 'api_token.team_id', 'api_token.user_id', 'api_token.last_used_at', 'app_user.email', 'app_user.display_name'])
+		.where('api_token.token_hash', '=', tokenHash)
+		.where('api_token.revoked_at', 'is', null)
+		.executeTakeFirst();
+}
+
+/** "Last used" is kept to the minute: a burst of requests with one token must not queue on one row's lock. */
+export const TOKEN_TOUCH_INTERVAL_MS = 60_000;
+
+export function isTouchDue(lastUsedAt: Date | null, now = new Date()): boolean {
+	return lastUsedAt === null || now.getTime() - lastUsedAt.getTime() >= TOKEN_TOUCH_INTERVAL_MS;
+}
+
+export async function touchTokenById(db: Kysely<Database>, id: string): Promise<void> {
+	await db
+		.updateTable('api_token')
+		.set({ last_used_at: new Date() })
+		.where('id', '=', id)
+		.where((eb) => eb.or([eb('last_used_at', 'is', null), eb('last_used_at', '<', sql<Date>`now() - interval '1 minute'`)]))
+		.execute();
 }
