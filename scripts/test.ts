@@ -49,7 +49,20 @@ function readJson(file: string): any {
 	return existsSync(file) ? JSON.parse(readFileSync(file, 'utf8')) : undefined;
 }
 
+/**
+ * `npm test -- PATH…` runs only the named test files or folders (for working on one area): vitest gets the
+ * unit and integration paths, Playwright the `.e2e.ts` ones; a suite with no path given is skipped. Lint and
+ * types run unless `--skip-static` is given; the build runs when an e2e path is given. With no paths, everything runs.
+ */
+function selectedPaths(argv: string[]): { vitest: string[]; e2e: string[] } | undefined {
+	const paths = argv.filter((a) => !a.startsWith('-'));
+	if (paths.length === 0) return undefined;
+	const e2e = paths.filter((p) => p.includes('e2e'));
+	return { vitest: paths.filter((p) => !e2e.includes(p)), e2e: e2e.map((p) => p.replace(/^tests\/e2e\/?/, '')).filter(Boolean) };
+}
+
 runMain(async () => {
+	const only = selectedPaths(process.argv.slice(2));
 	const config = { ...loadConfig(), smtpPort: Number(process.env.TEST_SMTP_PORT || 2526) };
 	const tallies: Tally[] = [];
 	const reports = join(config.dataDir, 'reports');
@@ -66,33 +79,42 @@ runMain(async () => {
 	const env: NodeJS.ProcessEnv = { ...process.env, ...mail, DATABASE_URL: databaseUrl, FRINGEFIELD_TEST: '1' };
 
 	try {
-		console.log('\n── lint ──');
-		const lint = run('npm', ['run', '--silent', 'lint'], env);
-		tallies.push({ suite: 'lint', passed: lint === 0 ? 1 : 0, failed: lint === 0 ? 0 : 1 });
+		if (!process.argv.includes('--skip-static')) {
+			console.log('\n── lint ──');
+			const lint = run('npm', ['run', '--silent', 'lint'], env);
+			tallies.push({ suite: 'lint', passed: lint === 0 ? 1 : 0, failed: lint === 0 ? 0 : 1 });
 
-		console.log('\n── types (svelte-check) ──');
-		const types = run('npm', ['run', '--silent', 'check', '--', '--threshold', 'error'], env);
-		tallies.push({ suite: 'types', passed: types === 0 ? 1 : 0, failed: types === 0 ? 0 : 1 });
+			console.log('\n── types (svelte-check) ──');
+			const types = run('npm', ['run', '--silent', 'check', '--', '--threshold', 'error'], env);
+			tallies.push({ suite: 'types', passed: types === 0 ? 1 : 0, failed: types === 0 ? 0 : 1 });
+		}
 
-		console.log('\n── build ──');
-		const built = run('npx', ['vite', 'build', '--logLevel', 'error'], env);
-		tallies.push({ suite: 'build', passed: built === 0 ? 1 : 0, failed: built === 0 ? 0 : 1 });
+		let built = 0;
+		if (!only || only.e2e.length > 0) {
+			console.log('\n── build ──');
+			built = run('npx', ['vite', 'build', '--logLevel', 'error'], env);
+			tallies.push({ suite: 'build', passed: built === 0 ? 1 : 0, failed: built === 0 ? 0 : 1 });
+		}
 
-		console.log('\n── vitest: unit + integration ──');
-		const vitestReport = join(reports, 'vitest.json');
-		run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`], env);
-		const v = readJson(vitestReport);
-		tallies.push(v ? { suite: 'vitest', passed: v.numPassedTests, failed: v.numFailedTests + (v.numRuntimeErrorTestSuites ?? 0) } : { suite: 'vitest', passed: 0, failed: 1 });
+		if (!only || only.vitest.length > 0) {
+			console.log('\n── vitest: unit + integration ──');
+			const vitestReport = join(reports, 'vitest.json');
+			run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`, ...(only?.vitest ?? [])], env);
+			const v = readJson(vitestReport);
+			tallies.push(v ? { suite: 'vitest', passed: v.numPassedTests, failed: v.numFailedTests + (v.numRuntimeErrorTestSuites ?? 0) } : { suite: 'vitest', passed: 0, failed: 1 });
+		}
 
-		console.log('\n── Playwright end-to-end in Chromium ──');
-		const chromium = ensureChromium();
-		if (built !== 0) {
-			tallies.push({ suite: 'e2e', passed: 0, failed: 1 });
-		} else {
-			const e2eReport = join(reports, 'e2e.json');
-			run('npx', ['playwright', 'test', '--config', 'tests/e2e/playwright.config.ts'], { ...env, CHROMIUM_PATH: chromium, PLAYWRIGHT_JSON_OUTPUT_NAME: e2eReport });
-			const p = readJson(e2eReport);
-			tallies.push(p ? { suite: 'e2e', passed: p.stats.expected + (p.stats.flaky ?? 0), failed: p.stats.unexpected } : { suite: 'e2e', passed: 0, failed: 1 });
+		if (!only || only.e2e.length > 0) {
+			console.log('\n── Playwright end-to-end in Chromium ──');
+			const chromium = ensureChromium();
+			if (built !== 0) {
+				tallies.push({ suite: 'e2e', passed: 0, failed: 1 });
+			} else {
+				const e2eReport = join(reports, 'e2e.json');
+				run('npx', ['playwright', 'test', '--config', 'tests/e2e/playwright.config.ts', ...(only?.e2e ?? [])], { ...env, CHROMIUM_PATH: chromium, PLAYWRIGHT_JSON_OUTPUT_NAME: e2eReport });
+				const p = readJson(e2eReport);
+				tallies.push(p ? { suite: 'e2e', passed: p.stats.expected + (p.stats.flaky ?? 0), failed: p.stats.unexpected } : { suite: 'e2e', passed: 0, failed: 1 });
+			}
 		}
 	} finally {
 		await stopBackground(config, 'mail-test');
