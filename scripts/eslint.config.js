@@ -1,7 +1,8 @@
 // One ESLint config. Its main job: keep the pure core pure (ARCHITECTURE.md, house rules).
 import tseslint from 'typescript-eslint';
+import fringefield from './eslint-rules/one-pipeline.js';
 
-const pureCore = ['schemas', 'units', 'rf', 'geometry', 'artwork', 'drc', 'formats'].map((room) => `src/lib/${room}/**/*.ts`);
+const pureCore = ['schemas', 'units', 'rf', 'geometry', 'artwork', 'drc', 'formats', 'design', 'simulation'].map((room) => `src/lib/${room}/**/*.ts`);
 
 export default tseslint.config(
 	{ ignores: ['**/*.svelte', '.svelte-kit/**', 'build/**', 'node_modules/**', '.data/**', 'tests/fixtures/**'] },
@@ -40,5 +41,22 @@ export default tseslint.config(
 				{ object: 'Date', property: 'now', message: 'Writers take dates from the revision, never the clock.' }
 			]
 		}
+	},
+	{
+		// The server never imports the UI folder: what both need lives in the pure core (src/lib/design).
+		files: ['src/lib/server/**/*.ts', 'src/worker/**/*.ts', 'src/cli/**/*.ts'],
+		rules: {
+			'no-restricted-imports': [
+				'error',
+				{ patterns: [{ group: ['$lib/components', '$lib/components/*', '**/components/**'], message: 'Server, worker and CLI code never import src/lib/components (UI only); shared pure helpers live in src/lib/design.' }] }
+			]
+		}
+	},
+	{
+		// One pipeline: no module but design/pipeline builds an artwork and writes files from it (ARCHITECTURE.md).
+		files: ['src/**/*.ts'],
+		ignores: ['src/lib/design/pipeline.ts'],
+		plugins: { fringefield },
+		rules: { 'fringefield/one-pipeline': 'error' }
 	}
 );

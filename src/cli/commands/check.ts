@@ -1,9 +1,7 @@
 // `check design.json [--profile profile.json]`: design-rule check of a design's artwork against a fab profile, as JSON.
 import { readFileSync } from 'node:fs';
-import { buildArtwork } from '../../lib/artwork';
-import { checkArtwork } from '../../lib/drc';
+import { gate, prepare } from '../../lib/design';
 import { GeometryError } from '../../lib/geometry';
-import { size } from '../../lib/rf';
 import { InputError, formatIssue, parseDesignInput } from '../../lib/schemas';
 import { parseFabProfile, STANDARD_QUICK_TURN_PROFILE } from '../../lib/schemas/fab-profile';
 import { UsageError } from '../usage-error';
@@ -63,7 +61,7 @@ export async function run(argv: string[]): Promise<number> {
 		const args = parseArgs(argv);
 		const input = parseDesignInput(readJson(args.design));
 		const profile = args.profile ? parseFabProfile(readJson(args.profile)) : STANDARD_QUICK_TURN_PROFILE;
-		const violations = checkArtwork(buildArtwork(size(input)), profile);
+		const violations = gate(prepare(input), profile);
 		process.stdout.write(`${JSON.stringify({ design: input.name, profile, clean: violations.length === 0, violations }, null, 2)}\n`);
 		return violations.length === 0 ? 0 : 3;
 	} catch (err) {

@@ -4,16 +4,12 @@
 import { randomUUID } from 'node:crypto';
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { createSVGWindow } from 'svgdom';
-import { buildArtwork } from '../../lib/artwork';
-import { checkArtwork } from '../../lib/drc';
-import { buildBundle, buildFiles, exportFormats, parseExportFormats } from '../../lib/formats/bundle';
+import { bundle, gate, holdsFabFiles, prepare, readBack, writeFiles } from '../../lib/design';
 import { createExportMeta } from '../../lib/formats/export-meta';
-import type { ExportFile } from '../../lib/formats/manifest';
-import { checkReadBack, isFabFileName } from '../../lib/formats/readback';
-import type { SvgWindow } from '../../lib/formats/svg';
+import { formatIds } from '../../lib/formats/format-ids';
+import { hashFiles, type ExportFile } from '../../lib/formats/manifest';
+import { parseFormatList } from '../../lib/formats/parse-format-list';
 import { GeometryError } from '../../lib/geometry';
-import { size } from '../../lib/rf';
 import { InputError, formatIssue, parseDesignInput } from '../../lib/schemas';
 import { parseFabProfile, STANDARD_QUICK_TURN_PROFILE } from '../../lib/schemas/fab-profile';
 import { UsageError } from '../usage-error';
@@ -37,7 +33,7 @@ are acceptable; the reason and every waived violation are then printed in the fa
 Gerber and drill file is also read back (@tracespace/parser) and compared with the artwork.
 
   --out PATH        a folder (created if missing) or a .zip file
-  --formats LIST    comma-separated, from: ${exportFormats.join(', ')} (default: all)
+  --formats LIST    comma-separated, from: ${formatIds.join(', ')} (default: all)
   --revision LABEL  revision label used in file names and headers (default A)
   --date DATE       revision date written into the files (default 2000-01-01; no clock is read)
   --profile FILE    a fab profile JSON (see \`check --help\`); default: the built-in
@@ -80,7 +76,7 @@ function parseArgs(argv: string[]): ExportArgs {
 	}
 	if (file === undefined) throw new UsageError('a design file is required: npm run cli -- export design.json --out DIR|FILE.zip');
 	if (!opts.out) throw new UsageError('--out DIR|FILE.zip is required');
-	return { file, out: opts.out, formats: opts.formats ?? exportFormats.join(','), revision: opts.revision ?? 'A', date: opts.date ?? '2000-01-01', profile: opts.profile ?? null, waive: opts.waive ?? null };
+	return { file, out: opts.out, formats: opts.formats ?? formatIds.join(','), revision: opts.revision ?? 'A', date: opts.date ?? '2000-01-01', profile: opts.profile ?? null, waive: opts.waive ?? null };
 }
 
 export function readJson(path: string, what: string): unknown {
@@ -111,37 +107,34 @@ export async function run(argv: string[], deps: ExportCommandDependencies = {}):
 	try {
 		const args = parseArgs(argv);
 		const raw = readJson(args.file, 'design file');
-		const formats = parseExportFormats(args.formats, '--formats');
+		const formats = parseFormatList(args.formats, '--formats');
 		const waive = parseWaive(args.waive);
 		const profile = args.profile ? parseFabProfile(readJson(args.profile, 'fab profile')) : STANDARD_QUICK_TURN_PROFILE;
 		const input = parseDesignInput(raw);
 		const meta = createExportMeta({ designName: input.name, revisionLabel: args.revision, revisionDate: args.date });
-		const sized = size(raw);
-		const artwork = buildArtwork(sized);
-		const violations = checkArtwork(artwork, profile);
+		const prepared = prepare(input);
+		const violations = gate(prepared, profile);
 		if (violations.length > 0 && waive === null) {
 			process.stdout.write(`${JSON.stringify({ design: input.name, profile, clean: false, violations }, null, 2)}\n`);
 			console.error(`refused: ${violations.length} design-rule violation(s) of the "${profile.name}" profile; nothing written (fix them, or give --waive "reason")`);
 			return 3;
 		}
 		const waiver = violations.length > 0 && waive ? { reason: waive, profileName: profile.name, violations: violations.map((v) => v.message) } : undefined;
-		const written = buildFiles(sized, meta, formats, { svgWindow: createSVGWindow() as unknown as SvgWindow, ...(waiver ? { waiver } : {}) });
-		const files = deps.corruptFiles ? deps.corruptFiles(written) : written;
-		if (files.some((f) => isFabFileName(f.name))) {
+		const written = await writeFiles(prepared, formats, meta, waiver ? { waiver } : {});
+		const files = deps.corruptFiles ? await hashFiles(deps.corruptFiles(written)) : written;
+		if (holdsFabFiles(files)) {
 			// judged with the complete Gerber + drill set, the delivered files taking the place of their twins
-			const names = new Set(files.map((f) => f.name));
-			const companions = buildFiles(sized, meta, ['gerber', 'drill']).filter((f) => isFabFileName(f.name) && !names.has(f.name));
-			const readBack = checkReadBack(artwork, [...files.filter((f) => isFabFileName(f.name)), ...companions]);
-			if (!readBack.ok) {
+			const result = readBack(files, prepared, meta);
+			if (!result.ok) {
 				const supportId = randomUUID();
-				console.error(JSON.stringify({ event: 'export.read-back-mismatch', supportId, mismatches: readBack.mismatches }));
+				console.error(JSON.stringify({ event: 'export.read-back-mismatch', supportId, mismatches: result.mismatches }));
 				console.error(`internal error: the files failed their read-back self-check and nothing was written; please report support id ${supportId}`);
 				return 1;
 			}
 		}
 		// everything is built and checked before anything is written: bad input leaves no partial output
 		if (args.out.toLowerCase().endsWith('.zip')) {
-			writeFileSync(args.out, await buildBundle(files, meta.revisionDate));
+			writeFileSync(args.out, await bundle(files, meta));
 			console.log(`wrote ${args.out} (${files.length} files)${waiver ? `; ${violations.length} violation(s) waived` : ''}`);
 		} else {
 			mkdirSync(args.out, { recursive: true });

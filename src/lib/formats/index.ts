@@ -1,4 +1,4 @@
-// Public face of the formats room (writers; the Touchstone reader lives in ./touchstone).
+// Public face of the formats room (writers, the registry; the Touchstone reader lives in ./touchstone).
 export * from './export-meta';
 export * from './gerber';
 export * from './excellon';
@@ -9,3 +9,6 @@ export * from './fab-notes';
 export * from './manifest';
 export * from './bundle';
 export * from './array-pattern';
+export * from './format-ids';
+export * from './registry';
+export { parseFormatList } from './parse-format-list';

@@ -10,7 +10,7 @@ import * as revisionPage from '../../../src/routes/(app)/designs/[designId]/r/[l
 import * as editPage from '../../../src/routes/(app)/designs/[designId]/edit/+page.server';
 import * as diffPage from '../../../src/routes/(app)/designs/[designId]/diff/+page.server';
 import * as laminatesPage from '../../../src/routes/(app)/laminates/+page.server';
-import { formValuesFromInput } from '../../../src/lib/components/design-form-fields';
+import { formValuesFromInput } from '../../../src/lib/design/design-form-fields';
 import { parseDesignInput } from '../../../src/lib/schemas';
 import { createTestTeam, sampleInput, type TestTeam } from './test-team';
 

@@ -1,6 +1,3 @@
-// Export pipeline: sized design → files → zip.
-export { buildFiles, buildFilesFromInput, type BuildFilesEnvironment } from './build-files';
+// The zip of an export and our file-name pattern. Which files an export holds is the registry's business (../registry.ts).
 export { buildBundle } from './build-bundle';
-export { exportFormats, parseExportFormats, type ExportFormat } from './export-formats';
 export { exportFileName, bundleFileName } from './file-names';
-export { buildArrayBenchFiles, arrayBenchDocument, ARRAY_BENCH_FORMATS } from './array-bench-files';

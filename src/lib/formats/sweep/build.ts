@@ -1,7 +1,7 @@
 // Base design + plan → sweep document: each point sized by rf.size and drawn by artwork.buildArtwork.
 import { buildArtwork, type Artwork, type StackLayer } from '../../artwork';
 import { GeometryError } from '../../geometry';
-import { size } from '../../rf';
+import { size, type SizedDesign } from '../../rf';
 import { InputError, parseDesignInput } from '../../schemas';
 import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
 import { SWEEP_FORMAT, SWEEP_FORMAT_VERSION, SWEEP_SCHEMA_PATH, type SweepDocument, type SweepPoint, type SweepProbeEntry } from './document';
@@ -47,9 +47,10 @@ function withField(doc: unknown, path: string, value: number): unknown {
 /**
  * Builds the sweep. Throws InputError for a bad base design or plan (including more than
  * MAX_SWEEP_POINTS points) before sizing anything; a point that sizing or geometry refuses is
- * recorded as refused, with the reason.
+ * recorded as refused, with the reason. `known` is a design already drawn: a point that sizes to exactly
+ * it takes its artwork instead of drawing it again.
  */
-export function buildSweepDocument(baseRaw: unknown, planRaw: unknown, meta: ExportMeta): SweepDocument {
+export function buildSweepDocument(baseRaw: unknown, planRaw: unknown, meta: ExportMeta, known?: { readonly sized: SizedDesign; readonly artwork: Artwork }): SweepDocument {
 	const base = parseDesignInput(baseRaw);
 	const plan = parseSweepPlan(planRaw);
 	const points: SweepPoint[] = sweepCombinations(plan).map((parameters, index) => {
@@ -57,7 +58,8 @@ export function buildSweepDocument(baseRaw: unknown, planRaw: unknown, meta: Exp
 		for (const [field, value] of Object.entries(parameters)) doc = withField(doc, field, value);
 		try {
 			const sized = size(doc);
-			const artwork = buildArtwork(sized);
+			// a point that is the known design itself (the one-point sweep of an export) reuses its artwork
+			const artwork = known && JSON.stringify(sized) === JSON.stringify(known.sized) ? known.artwork : buildArtwork(sized);
 			const { input: _input, warnings, ...derived } = sized;
 			void _input;
 			return {

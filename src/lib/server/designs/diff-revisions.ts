@@ -1,6 +1,6 @@
 // Two revisions side by side: every input field and every derived dimension, with what changed. Pure.
-import { designFormFields, fieldApplies, switchesOfInput, valueAtPath } from '../../components/design-form-fields';
-import { derivedQuantities, formatPlain, formatValue } from '../../components/derived-quantities';
+import { designFormFields, fieldApplies, switchesOfInput, valueAtPath } from '$lib/design';
+import { derivedQuantities, formatPlain, formatValue } from '$lib/design';
 import type { SizedDesign } from '../../rf';
 import type { DesignInput } from '../../schemas';
 

@@ -1,5 +1,5 @@
 // Validates a design-input document and sizes it; anything the core cannot build becomes an InputError.
-import { sizeDocument } from '../../components/live-sizing';
+import { sizeDocument } from '$lib/design';
 import type { SizedDesign } from '../../rf';
 import { InputError, type DesignInput } from '../../schemas';
 

@@ -1,14 +1,15 @@
-// The design-rule gate: the revision's artwork against the profile it recorded, before anything is built.
-import { buildArtwork, type Artwork } from '$lib/artwork';
-import { checkArtwork, type Violation } from '$lib/drc';
-import type { SizedDesign } from '$lib/rf';
+// The design-rule gate: the revision's prepared artwork against the profile it recorded, before anything is built.
+import type { Artwork } from '$lib/artwork';
+import { gate, prepareSized, type PreparedDesign } from '$lib/design';
+import type { Violation } from '$lib/drc';
 import type { FabProfile } from '$lib/schemas/fab-profile';
 import { getDb } from '../db';
 import { revisionFabProfile } from '../fab-profiles';
 import type { ExportTarget } from './export-target';
-import { createImmutableCache } from './immutable-cache';
 
 export interface GateReport {
+	/** The revision prepared once (sized design and artwork): the download's files are written from it. */
+	prepared: PreparedDesign;
 	artwork: Artwork;
 	profile: FabProfile;
 	/** False for a revision older than the gate, checked against the built-in. */
@@ -16,13 +17,8 @@ export interface GateReport {
 	violations: Violation[];
 }
 
-/** The revision's profile is written with it and never changes, so its report is computed once per process. */
-const reports = createImmutableCache<GateReport>({ maxEntries: 256, maxBytes: Number.POSITIVE_INFINITY, sizeOf: () => 0 });
-
-export function checkExportTarget(target: ExportTarget): Promise<GateReport> {
-	return reports.get(target.revision.id, async () => {
-		const { profile, recorded } = await revisionFabProfile(getDb(), target.revision.id);
-		const artwork = buildArtwork(target.revision.results as SizedDesign);
-		return { artwork, profile, profileRecorded: recorded, violations: checkArtwork(artwork, profile) };
-	});
+export async function checkExportTarget(target: ExportTarget): Promise<GateReport> {
+	const { profile, recorded } = await revisionFabProfile(getDb(), target.revision.id);
+	const prepared = prepareSized(target.revision.results);
+	return { prepared, artwork: prepared.artwork, profile, profileRecorded: recorded, violations: gate(prepared, profile) };
 }

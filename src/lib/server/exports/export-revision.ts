@@ -11,7 +11,8 @@ import { checkExportTarget } from './export-gate';
 import { ExportRefusedError } from './export-refusal';
 import type { ExportTarget } from './export-target';
 import { recordExport } from './record-export';
-import { sha256Hex } from './sha256';
+import { sha256Hex } from '$lib/formats/manifest';
+import type { PreparedDesign } from '$lib/design';
 
 export interface DeliveredExport {
 	exportId: string;
@@ -45,10 +46,12 @@ const builtExports = createImmutableCache<HashedExport>({
 	sizeOf: (h) => h.built.body.byteLength + h.built.files.reduce((n, f) => n + f.bytes.byteLength, 0)
 });
 
-async function buildHashed(target: ExportTarget, kind: ExportKind, opts: Parameters<typeof buildExport>[2]): Promise<HashedExport> {
-	const built = await buildExport(target, kind, opts);
-	const files = built.files.map((f) => ({ name: f.name, sizeBytes: f.bytes.byteLength, sha256: sha256Hex(f.bytes) }));
-	return { built, files, sha256: sha256Hex(built.body) };
+async function buildHashed(target: ExportTarget, prepared: PreparedDesign, kind: ExportKind, opts: Parameters<typeof buildExport>[3]): Promise<HashedExport> {
+	const built = await buildExport(target, prepared, kind, opts);
+	// every file was hashed once when it was written; a one-file delivery is that file, so its hash is known too
+	const files = built.files.map((f) => ({ name: f.name, sizeBytes: f.bytes.byteLength, sha256: f.sha256 }));
+	const sha256 = built.files.length === 1 && built.body === built.files[0].bytes ? built.files[0].sha256 : await sha256Hex(built.body);
+	return { built, files, sha256 };
 }
 
 /**
@@ -64,8 +67,8 @@ export async function exportRevision(target: ExportTarget, kind: ExportKind, by:
 	const buildOpts = { waiver: notesWaiver, deps: opts.deps };
 	// Test hooks change the bytes on purpose: such builds are never shared.
 	const { built, files, sha256 } = opts.deps
-		? await buildHashed(target, kind, buildOpts)
-		: await builtExports.get(`${target.revision.id}\u0000${kind}\u0000${JSON.stringify(notesWaiver ?? null)}`, () => buildHashed(target, kind, buildOpts));
+		? await buildHashed(target, gate.prepared, kind, buildOpts)
+		: await builtExports.get(`${target.revision.id}\u0000${kind}\u0000${JSON.stringify(notesWaiver ?? null)}`, () => buildHashed(target, gate.prepared, kind, buildOpts));
 	const record = await recordExport({ target, userId: by.userId, via: by.via, kind, files, sha256, waiver });
 	return { exportId: record.id, kind, fileName: built.fileName, contentType: built.contentType, body: built.body, sha256, files, waiver, profile: gate.profile, waivedViolations: waiver ? gate.violations : [] };
 }

@@ -1,25 +1,9 @@
-// The read-back self-check on an export's Gerber and drill files: every fab file delivered, plus the fab files
-// it was written with, parsed as a board house would and compared with the artwork. A mismatch refuses the export.
+// The read-back self-check as the server answers it: a mismatch is logged under a support id and refuses the download.
 import { randomUUID } from 'node:crypto';
-import type { Artwork } from '$lib/artwork';
-import type { ExportFile } from '$lib/formats';
-import { checkReadBack, isFabFileName, type ReadBackResult } from '$lib/formats/readback';
+import type { ReadBackResult } from '$lib/formats/readback';
 import { ReadBackFailedError } from './export-refusal';
 
-/**
- * `delivered` are the files about to be offered; `companions` the complete Gerber + drill set of the
- * same revision (a Gerber-only download is compared together with its drill file, and the other way
- * round). A delivered file always wins over its companion of the same name, so what is checked is
- * what is sent.
- */
-export function readBackFiles(delivered: readonly ExportFile[], companions: readonly ExportFile[]): ExportFile[] {
-	const fab = delivered.filter((f) => isFabFileName(f.name));
-	const names = new Set(fab.map((f) => f.name));
-	return [...fab, ...companions.filter((f) => isFabFileName(f.name) && !names.has(f.name))];
-}
-
-export function assertReadBack(artwork: Artwork, files: readonly ExportFile[], context: Record<string, string>, logError: (line: string) => void = console.error): ReadBackResult {
-	const result = checkReadBack(artwork, files);
+export function assertReadBack(result: ReadBackResult, context: Record<string, string>, logError: (line: string) => void = console.error): ReadBackResult {
 	if (!result.ok) {
 		const supportId = randomUUID();
 		logError(JSON.stringify({ event: 'export.read-back-mismatch', supportId, ...context, mismatches: result.mismatches }));

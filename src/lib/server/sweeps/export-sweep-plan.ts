@@ -4,7 +4,7 @@ import { createExportMeta, toSlug } from '../../formats/export-meta';
 import type { ExportVia } from '../db/export-record.table';
 import type { Design, Revision } from '../designs/design-model';
 import { recordExport } from '../exports/record-export';
-import { sha256Hex } from '../exports/sha256';
+import { sha256Hex } from '../../formats/manifest';
 import type { SavedSweepPlan } from './sweep-plan-model';
 
 export interface DeliveredSweep {
@@ -30,7 +30,7 @@ export async function exportSweepPlan(
 	opts: { design: Design; revision: Revision; plan: SavedSweepPlan; userId: string; via: ExportVia }
 ): Promise<DeliveredSweep> {
 	const built = buildSweepFile(opts.design, opts.revision, opts.plan);
-	const sha256 = sha256Hex(built.body);
+	const sha256 = await sha256Hex(built.body);
 	const record = await recordExport({
 		target: { design: opts.design, revision: opts.revision },
 		userId: opts.userId,

@@ -2,10 +2,11 @@
 import { execFileSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import JSZip from 'jszip';
-import { createSVGWindow } from 'svgdom';
 import { describe, expect, it } from 'vitest';
-import { buildFilesFromInput, exportFileName, parseExportFormats } from '../../../../src/lib/formats/bundle';
-import { InputError } from '../../../../src/lib/schemas';
+import { prepare, writeFiles } from '../../../../src/lib/design';
+import { exportFileName } from '../../../../src/lib/formats/bundle';
+import { parseFormatList } from '../../../../src/lib/formats/parse-format-list';
+import { InputError, parseDesignInput } from '../../../../src/lib/schemas';
 import { goldenBundle, goldenDesign, goldenMeta } from '../../../fixtures/bundle/golden-bundle';
 
 /**
@@ -59,12 +60,12 @@ describe('export bundle', () => {
 		expect(manifest.files.length).toBe(names.length - 1);
 	});
 
-	it('builds only the chosen formats, plus the manifest', () => {
-		const files = buildFilesFromInput(goldenDesign, goldenMeta, parseExportFormats('drill,notes'), { svgWindow: createSVGWindow() });
+	it('builds only the chosen formats, plus the manifest', async () => {
+		const files = await writeFiles(prepare(parseDesignInput(goldenDesign)), parseFormatList('drill,notes'), goldenMeta);
 		expect(files.map((f) => f.name)).toEqual(['sunroof-gnss-B.drill-plated.drl', 'sunroof-gnss-B.fab-notes.txt', 'sunroof-gnss-B.manifest.json']);
 	});
 
 	it('refuses an unknown format name with an InputError', () => {
-		expect(() => parseExportFormats('gerber,pdf')).toThrow(InputError);
+		expect(() => parseFormatList('gerber,pdf')).toThrow(InputError);
 	});
 });

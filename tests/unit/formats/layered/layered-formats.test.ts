@@ -1,13 +1,13 @@
 // Layered designs and arrays through every writer, read back by the outside references: @tracespace/parser (Gerber), dxf-parser, ajv (sweep JSON Schema).
 import Ajv2020 from 'ajv/dist/2020';
 import DxfParser from 'dxf-parser';
-import { createSVGWindow } from 'svgdom';
 import { describe, expect, it } from 'vitest';
 import { buildArtwork } from '../../../../src/lib/artwork';
-import { buildDxfCommands, buildFiles, buildSweepDocument, createExportMeta, dxfLayerName, serializeSweep, sweepJsonSchema, toDxf, toGerber } from '../../../../src/lib/formats';
+import { buildDxfCommands, buildSweepDocument, formatIds, createExportMeta, dxfLayerName, serializeSweep, sweepJsonSchema, toDxf, toGerber } from '../../../../src/lib/formats';
 import { size } from '../../../../src/lib/rf';
 import { layeredCases } from '../../../fixtures/designs/layered-cases';
 import { readBackGerber } from '../gerber/read-back';
+import { prepareSized, writeFiles } from '../../../../src/lib/design';
 
 const meta = createExportMeta({ designName: 'Layered demo', revisionLabel: 'A', revisionDate: '2026-12-02' });
 const ajv = new Ajv2020({ allErrors: true, strict: true, strictTypes: false, strictTuples: false });
@@ -72,9 +72,9 @@ describe('layered designs and arrays in every format', () => {
 		}
 	});
 
-	it('writes the whole bundle of a 2×4 aperture-coupled array: three copper Gerbers, DXF, SVG, sweep, notes with the bonding film', () => {
+	it('writes the whole bundle of a 2×4 aperture-coupled array: three copper Gerbers, DXF, SVG, sweep, notes with the bonding film', async () => {
 		const c = cases.find((x) => x.name === '2×4 aperture-coupled array')!;
-		const files = buildFiles(c.sized, meta, undefined, { svgWindow: createSVGWindow() });
+		const files = await writeFiles(prepareSized(c.sized), formatIds, meta);
 		const names = files.map((f) => f.name);
 		expect(names).toEqual(
 			['copper-top.gbr', 'copper-inner-1.gbr', 'copper-bottom.gbr', 'profile.gbr', 'drawing.dxf', 'drawing.svg', 'design.sweep.json', 'array-pattern.json', 'fab-notes.txt', 'manifest.json'].map((n) => `layered-demo-A.${n}`)
@@ -87,8 +87,8 @@ describe('layered designs and arrays in every format', () => {
 		expect(pattern.columns * pattern.rows).toBe(8);
 	});
 
-	it('writes no array-pattern file for a single element', () => {
+	it('writes no array-pattern file for a single element', async () => {
 		const c = cases.find((x) => x.name === 'aperture-coupled patch')!;
-		expect(buildFiles(c.sized, meta, ['sweep']).map((f) => f.name)).toEqual(['layered-demo-A.design.sweep.json', 'layered-demo-A.manifest.json']);
+		expect((await writeFiles(prepareSized(c.sized), ['sweep'], meta)).map((f) => f.name)).toEqual(['layered-demo-A.design.sweep.json', 'layered-demo-A.manifest.json']);
 	});
 });

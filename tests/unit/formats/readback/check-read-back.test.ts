@@ -5,7 +5,7 @@ import { buildArtwork, type Artwork } from '../../../../src/lib/artwork';
 import { createExportMeta } from '../../../../src/lib/formats/export-meta';
 import { toExcellon } from '../../../../src/lib/formats/excellon';
 import { toGerber } from '../../../../src/lib/formats/gerber';
-import { buildFiles } from '../../../../src/lib/formats/bundle';
+import { prepare, readBack, writeFiles } from '../../../../src/lib/design';
 import { checkReadBack, isFabFileName, type FabFile, type ReadBackCheck } from '../../../../src/lib/formats/readback';
 import { regionArea } from '../../../../src/lib/geometry';
 import { size } from '../../../../src/lib/rf';
@@ -81,11 +81,12 @@ describe('checkReadBack on honest writer output', () => {
 		expect(view.layers.find((l) => l.key === 'copper-L1')!.areaMm2 / exact).toBeCloseTo(1, 5);
 	});
 
-	it.each(designs)('passes the export pipeline\'s own Gerber and drill files for a %s design', (_name, doc) => {
-		const sized = size(parseDesignInput({ frequencyHz: 2.45e9, substrate: fr4, solderMask: true, ...doc }));
-		const files = buildFiles(sized, meta, ['gerber', 'drill', 'notes']).filter((f) => isFabFileName(f.name));
+	it.each(designs)('passes the export pipeline\'s own Gerber and drill files for a %s design', async (_name, doc) => {
+		const prepared = prepare(parseDesignInput({ frequencyHz: 2.45e9, substrate: fr4, solderMask: true, ...doc }));
+		const files = (await writeFiles(prepared, ['gerber', 'drill', 'notes'], meta)).filter((f) => isFabFileName(f.name));
 		expect(files.length).toBeGreaterThanOrEqual(4);
-		expect(checkReadBack(buildArtwork(sized), files).mismatches).toEqual([]);
+		expect(checkReadBack(prepared.artwork, files).mismatches).toEqual([]);
+		expect(readBack(files, prepared, meta).mismatches).toEqual([]);
 	});
 
 	it('accepts the files as bytes too', () => {

@@ -48,7 +48,7 @@ function groupExtents(g: Element): { minX: number; minY: number; maxX: number; m
 
 describe('SVG writer', () => {
 	it.each(cases)('parses as XML with mm units, one group per layer and board extents for a $shape / $feed design', ({ artwork }) => {
-		const doc = parseXml(toSvg(artwork, meta, createSVGWindow()));
+		const doc = parseXml(toSvg(artwork, meta));
 		const svg = doc.documentElement;
 		expect(svg.nodeName.toLowerCase()).toBe('svg');
 		expect(svg.getAttribute('width')).toMatch(/^[\d.]+mm$/);
@@ -80,7 +80,7 @@ describe('SVG writer', () => {
 
 	it('dimensions W, L, inset depth, feed width and ground size of an inset-fed patch, and titles the drawing', () => {
 		const a = buildArtwork(sizedCase('rectangular', 'inset'));
-		const text = toSvg(a, meta, createSVGWindow());
+		const text = toSvg(a, meta);
 		const doc = parseXml(text);
 		for (const id of ['patch-width', 'patch-length', 'inset-depth', 'feed-width', 'ground-width', 'ground-length']) {
 			expect(doc.querySelectorAll(`g#dimension-${id}`).length).toBe(1);
@@ -103,13 +103,13 @@ describe('SVG writer', () => {
 
 	it('cuts the probe clearance out of the ground with a mask', () => {
 		const a = buildArtwork(sizedCase('rectangular', 'probe'));
-		const doc = parseXml(toSvg(a, meta, createSVGWindow()));
+		const doc = parseXml(toSvg(a, meta));
 		expect(doc.querySelector('g#layer-copper-bottom')!.getAttribute('mask')).toBe('url(#clear-copper-bottom)');
 		expect(doc.querySelectorAll('mask#clear-copper-bottom circle').length).toBe(1);
 	});
 
 	it('writes the same text from two fresh windows', () => {
 		const a = cases[0].artwork;
-		expect(toSvg(a, meta, createSVGWindow())).toBe(toSvg(a, meta, createSVGWindow()));
+		expect(toSvg(a, meta)).toBe(toSvg(a, meta));
 	});
 });

@@ -3,7 +3,7 @@ import { error } from '@sveltejs/kit';
 import { getDb } from '$lib/server/db';
 import { findDesignWithRevisions } from '$lib/server/designs';
 import { requireDesign } from '$lib/server/designs/design-access';
-import { revisionSummary } from '$lib/components/revision-summary';
+import { revisionSummary } from '$lib/design';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {

@@ -1,6 +1,6 @@
 // The editor: starts from a parent revision; saving makes a new revision from it and goes there.
 import { error, fail, redirect } from '@sveltejs/kit';
-import { documentFromFormValues, fieldIssues, formValuesFromFormData } from '$lib/components/design-form-fields';
+import { documentFromFormValues, fieldIssues, formValuesFromFormData } from '$lib/design';
 import { getDb } from '$lib/server/db';
 import { findDesignWithRevisions, listLaminates, saveRevision } from '$lib/server/designs';
 import { requireDesign } from '$lib/server/designs/design-access';

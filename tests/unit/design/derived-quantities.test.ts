@@ -1,6 +1,6 @@
 // Derived-value rows for the new designs: coupled feeds, the parasitic patch and arrays (their array-factor figures).
 import { describe, expect, it } from 'vitest';
-import { derivedQuantities } from '../../../src/lib/components/derived-quantities';
+import { derivedQuantities } from '../../../src/lib/design/derived-quantities';
 import { size } from '../../../src/lib/rf';
 import { layeredCases } from '../../fixtures/designs/layered-cases';
 

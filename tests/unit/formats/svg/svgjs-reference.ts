@@ -1,7 +1,7 @@
-// SVG element tree → text with svg.js, on whatever window the caller passes (svgdom on the server, the page in a browser).
+// The outside reference for the SVG writer: the element tree written with svg.js on svgdom (dev dependencies only).
 import { SVG, registerWindow, type Element as SvgJsElement } from '@svgdotjs/svg.js';
-import type { SvgDocument, SvgElement } from './commands';
-import { svgNumber } from './build';
+import type { SvgDocument, SvgElement } from '../../../../src/lib/formats/svg/commands';
+import { svgNumber } from '../../../../src/lib/formats/svg/build';
 
 /** The window svg.js draws in: svgdom's createSVGWindow() in Node, `window` in a browser. */
 export type SvgWindow = Window & typeof globalThis;

@@ -12,7 +12,7 @@ import {
 	stackRowsOfValues,
 	switchesOfInput,
 	withStackRows
-} from '../../../src/lib/components/design-form-fields';
+} from '../../../src/lib/design/design-form-fields';
 import { designInputSchema, fromZodError, parseDesignInput } from '../../../src/lib/schemas';
 import { layeredCases } from '../../fixtures/designs/layered-cases';
 

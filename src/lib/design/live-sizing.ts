@@ -1,8 +1,9 @@
 // Input document → validated input, sized design and artwork, or the issues that stop it. Pure: the editor
 // runs it on every keystroke in the browser, and the server runs it before saving a revision.
-import { buildArtwork, type Artwork } from '../artwork';
+import type { Artwork } from '../artwork';
 import { GeometryError } from '../geometry';
-import { size, type SizedDesign } from '../rf';
+import type { SizedDesign } from '../rf';
+import { prepare } from './pipeline';
 import { designInputSchema, fromZodError, InputError, type DesignInput, type InputIssue } from '../schemas';
 
 /** The input field a geometry error is about, so the editor shows it beside that field. */
@@ -28,8 +29,8 @@ export function sizeDocument(raw: unknown): SizingOutcome {
 	const parsed = designInputSchema.safeParse(raw);
 	if (!parsed.success) return { ok: false, issues: fromZodError(parsed.error, raw).issues };
 	try {
-		const sized = size(parsed.data);
-		return { ok: true, input: parsed.data, sized, artwork: buildArtwork(sized) };
+		const { sized, artwork } = prepare(parsed.data);
+		return { ok: true, input: parsed.data, sized, artwork };
 	} catch (err) {
 		if (err instanceof InputError) return { ok: false, issues: err.issues };
 		if (err instanceof GeometryError) {

@@ -1,0 +1,9 @@
+// Public face of the design room: the one pipeline, and the pure helpers the editor, the server and the CLI share.
+export { prepare, prepareSized, gate, writeFiles, readBack, holdsFabFiles, bundle, type PreparedDesign, type WriteOptions } from './pipeline';
+export { sizeDocument, type SizingOutcome } from './live-sizing';
+export * from './design-form-fields';
+export * from './derived-quantities';
+export { revisionSummary } from './revision-summary';
+export { revisionTree, type TreeRevision, type TreeRow } from './revision-tree';
+export { canonicalJson } from './canonical-json';
+export { buildArrayBenchFiles, arrayBenchDocument, ARRAY_BENCH_FORMATS } from './array-bench';
