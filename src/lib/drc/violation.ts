@@ -1,26 +1,8 @@
-// What a design-rule check reports: which rule, which shapes, where, measured against required.
+// What a design-rule check reports: which rule, which shapes, where, measured against required (the type comes from schemas/violation.ts).
 import type { Point } from '../geometry';
 
-/** Our rule names. Stable: the UI, the API's 422 body and waivers refer to them. */
-export type DrcRuleId = 'trace-width' | 'copper-spacing' | 'drill-size' | 'annular-ring' | 'edge-clearance' | 'slot-width';
-
-export const DRC_RULE_IDS: readonly DrcRuleId[] = ['trace-width', 'copper-spacing', 'drill-size', 'annular-ring', 'edge-clearance', 'slot-width'];
-
-export interface Violation {
-	readonly ruleId: DrcRuleId;
-	/** The artwork layer the offending copper is on; null for a drill on its own. */
-	readonly layerId: string | null;
-	/** Artwork shape ids (and drill ids) involved, in a fixed order. */
-	readonly shapeIds: readonly string[];
-	/** Where to draw the marker: board coordinates in mm. */
-	readonly location: { readonly xMm: number; readonly yMm: number };
-	/** What the artwork has. */
-	readonly measuredMm: number;
-	/** What the profile asks for at least. */
-	readonly requiredMm: number;
-	/** One sentence for humans. */
-	readonly message: string;
-}
+export { drcRuleIds as DRC_RULE_IDS, type DrcRuleId, type Violation } from '../schemas/violation';
+import type { Violation } from '../schemas/violation';
 
 /** Rounded to 0.1 µm for messages and reports; the comparison itself uses the full value. */
 export function roundMm(valueMm: number): number {

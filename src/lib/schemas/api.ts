@@ -1,12 +1,14 @@
 // zod schemas of the /api/v1 surface: path parameters, queries, bodies and answers. The OpenAPI document is generated from these.
 import { z } from 'zod';
+import { formatIds } from '../formats/format-ids';
 import { designInputSchema } from './design-input';
+import { sizedDesignSchema } from './sized-design';
 
 /** The design-input document, named for the OpenAPI components. */
 export const designInputDocumentSchema = designInputSchema.meta({ id: 'DesignInput', description: 'The design-input document (see src/lib/schemas/design-input.ts)' });
 
-/** What a download can deliver: the whole zip bundle or one format's files. */
-export const exportKinds = ['bundle', 'gerber', 'drill', 'dxf', 'svg', 'sweep', 'notes'] as const;
+/** What a download can be: the zip bundle, or one format of the registry (formats/format-ids.ts, the registry's ids). */
+export const exportKinds = ['bundle', ...formatIds] as const;
 export type ExportKind = (typeof exportKinds)[number];
 
 export function isExportKind(value: string): value is ExportKind {
@@ -101,22 +103,8 @@ export const designListSchema = z.object({ designs: z.array(designSummarySchema)
 
 export const designDetailSchema = designSummarySchema.extend({ revisions: z.array(revisionSummarySchema) }).meta({ id: 'Design' });
 
-/** The sized design (see src/lib/rf/sized-design.ts): numbers with their unit in their name, and the warnings. */
-export const sizedDesignSchema = z
-	.looseObject({
-		input: designInputDocumentSchema,
-		shape: z.string(),
-		feedKind: z.string(),
-		frequencyHz: z.number(),
-		freeSpaceWavelengthMm: z.number(),
-		effectivePermittivity: z.number(),
-		patch: z.looseObject({ kind: z.string() }),
-		feed: z.looseObject({ kind: z.string() }),
-		ground: z.object({ widthMm: z.number(), lengthMm: z.number(), marginMm: z.number() }),
-		estimates: z.looseObject({ bandwidthFraction: z.number(), gainDbi: z.number() }),
-		warnings: z.array(z.object({ code: z.string(), message: z.string() }))
-	})
-	.meta({ id: 'SizedDesign', description: 'Every derived quantity with its unit in its name (mm, Hz, Ω, S), and the sizing warnings' });
+/** The sized design: one schema for the API, the stored revisions and the sweep points (./sized-design.ts). */
+export { sizedDesignSchema };
 
 export const revisionDetailSchema = revisionSummarySchema
 	.extend({ designId: z.string(), designName: z.string(), input: designInputDocumentSchema, results: sizedDesignSchema })

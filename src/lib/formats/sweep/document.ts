@@ -1,4 +1,4 @@
-// The sweep document's TypeScript shape (version 1); its JSON Schema twin is in schema.ts.
+// The sweep document's TypeScript shape (version 1); its JSON Schema is generated from src/lib/schemas/sweep-point.ts.
 import type { ArtworkDrill, ArtworkLayer, ArtworkProbe, StackLayer } from '../../artwork';
 import type { DesignInput } from '../../schemas';
 import type { SizedDesign } from '../../rf';
@@ -52,3 +52,4 @@ export interface SweepDocument {
 	readonly pointCount: number;
 	readonly points: readonly SweepPoint[];
 }
+

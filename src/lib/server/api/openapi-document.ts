@@ -21,7 +21,7 @@ import {
 	waiverBodySchema
 } from '$lib/schemas/api';
 import { fabProfileSchema } from '$lib/schemas/fab-profile';
-import { DRC_RULE_IDS } from '$lib/drc';
+import { violationSchema } from '$lib/schemas/violation';
 import { SOFTWARE_VERSION } from '$lib/formats/export-meta';
 import { sweepPlanSchema } from '$lib/formats/sweep';
 
@@ -35,18 +35,6 @@ const denied = {
 const badInput = { 400: problemResponse('Bad input: one issue per field, each naming the allowed range') };
 const forbidden = { 403: problemResponse('A member whose role lacks this right (viewers read and download only)') };
 
-/** One broken design rule, as src/lib/drc reports it. */
-const violationSchema = z
-	.object({
-		ruleId: z.enum(DRC_RULE_IDS as [string, ...string[]]),
-		layerId: z.string().nullable().meta({ description: 'The artwork layer of the offending copper; null for a drill on its own' }),
-		shapeIds: z.array(z.string()).meta({ description: 'Artwork shape (and drill) ids involved' }),
-		location: z.object({ xMm: z.number(), yMm: z.number() }).meta({ description: 'Where on the board, mm from its lower left corner' }),
-		measuredMm: z.number().meta({ description: 'What the artwork has' }),
-		requiredMm: z.number().meta({ description: 'What the fab profile asks for at least' }),
-		message: z.string()
-	})
-	.meta({ id: 'Violation' });
 const fabProfileDocSchema = fabProfileSchema.meta({ id: 'FabProfile', description: 'The fab capability profile the revision was checked against (recorded when it was saved)' });
 const refusalSchema = z
 	.object({ error: z.string(), profile: fabProfileDocSchema, violations: z.array(violationSchema).min(1), issues: z.array(z.object({ path: z.string(), message: z.string() })).max(0).meta({ description: 'Always empty here (the input was fine)' }) })

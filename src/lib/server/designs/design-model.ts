@@ -2,6 +2,7 @@
 import type { SizedDesign } from '../../rf';
 import type { DesignInput } from '../../schemas';
 import type { DesignRow } from '../db/design.table';
+import { parseStoredInput, parseStoredResults } from './stored-revision';
 
 export interface Design {
 	id: string;
@@ -56,8 +57,8 @@ export function toRevision(row: RevisionRecord, parentLabel: string | null): Rev
 		seq: row.seq,
 		parentId: row.parent_id,
 		parentLabel,
-		input: row.input as DesignInput,
-		results: row.results as SizedDesign,
+		input: parseStoredInput(row.input, row),
+		results: parseStoredResults(row.results, row),
 		note: row.note,
 		createdBy: row.created_by,
 		createdByName: row.created_by_name,

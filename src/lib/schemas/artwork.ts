@@ -1,0 +1,152 @@
+// The Artwork value as one zod schema: shapes per layer, drills, the stack, dimensions, metadata, in millimetres.
+// The TypeScript types in src/lib/artwork are inferred from it, and the sweep document's JSON Schema is generated from it.
+import { z } from 'zod';
+import { allFeedKinds, patchShapes, probeModels } from './design-input';
+
+/** [x, y] in mm, board origin at its lower-left corner (x to the right, y up). */
+export const pointSchema = z.tuple([z.number(), z.number()]).readonly().meta({ description: '[x, y] in mm, board origin at its lower-left corner' });
+
+export const segmentSchema = z.discriminatedUnion('kind', [
+	z.strictObject({ kind: z.literal('line'), to: pointSchema }).readonly(),
+	z.strictObject({ kind: z.literal('arc'), to: pointSchema, center: pointSchema, clockwise: z.boolean() }).readonly()
+]);
+
+export const contourSchema = z
+	.strictObject({ start: pointSchema, segments: z.array(segmentSchema).min(2).readonly() })
+	.readonly()
+	.meta({ description: 'Closed: the last segment ends at start. Outer contours counter-clockwise, holes clockwise.' });
+
+export const regionSchema = z.strictObject({ outer: contourSchema, holes: z.array(contourSchema).readonly() }).readonly();
+
+export const shapeRoles = [
+	'patch',
+	'feed-line',
+	'transformer',
+	'notch',
+	'probe-pad',
+	'ground',
+	'clearance',
+	'profile',
+	'mask-opening',
+	'parasitic-patch',
+	'coupling-slot',
+	'tuning-stub',
+	'feed-network',
+	'network-transformer'
+] as const;
+
+export const shapeGeometrySchema = z.discriminatedUnion('kind', [
+	/** A filled area bounded by line and arc segments. */
+	z.strictObject({ kind: z.literal('region'), region: regionSchema }).readonly(),
+	/** An exact filled circle (a flash of a round aperture in Gerber). */
+	z.strictObject({ kind: z.literal('circle'), center: pointSchema, diameterMm: z.number().positive() }).readonly(),
+	/** A closed line drawn with a round pen, not filled (the board profile). */
+	z.strictObject({ kind: z.literal('outline'), contour: contourSchema, strokeWidthMm: z.number().positive() }).readonly()
+]);
+
+export const artworkShapeSchema = z
+	.strictObject({
+		id: z.string().meta({ description: 'Unique within the artwork, stable for the same design' }),
+		role: z.enum(shapeRoles),
+		polarity: z.enum(['dark', 'clear']).meta({ description: "dark adds to the layer's image, clear removes what earlier dark shapes drew (Gerber's LPD/LPC)" }),
+		geometry: shapeGeometrySchema
+	})
+	.readonly();
+
+export const layerFunctionSchema = z.discriminatedUnion('kind', [
+	z.strictObject({ kind: z.literal('copper'), copperIndex: z.number().int().min(1), side: z.enum(['top', 'inner', 'bottom']) }).readonly(),
+	z.strictObject({ kind: z.literal('profile') }).readonly(),
+	z.strictObject({ kind: z.literal('solder-mask'), side: z.enum(['top', 'bottom']) }).readonly()
+]);
+
+export const artworkLayerSchema = z
+	.strictObject({
+		id: z.string().meta({ description: 'File-name and group id: copper-top, copper-inner-1, copper-bottom, profile, mask-top, mask-bottom' }),
+		title: z.string(),
+		function: layerFunctionSchema,
+		shapes: z.array(artworkShapeSchema).readonly().meta({ description: 'Drawn in order: a clear shape removes only what dark shapes before it drew' }),
+		voids: z.array(artworkShapeSchema).readonly().meta({ description: 'Copper-free areas by design (inset notch gaps): not drawn, kept for checks and drawings' })
+	})
+	.readonly();
+
+export const artworkDrillSchema = z
+	.strictObject({
+		id: z.string(),
+		role: z.literal('probe'),
+		plated: z.boolean(),
+		center: pointSchema,
+		diameterMm: z.number().positive().meta({ description: 'Finished hole diameter' }),
+		fromCopper: z.number().int().min(1).meta({ description: 'Copper layers the hole spans, 1 = top' }),
+		toCopper: z.number().int().min(1)
+	})
+	.readonly();
+
+export const stackLayerSchema = z.discriminatedUnion('kind', [
+	z
+		.strictObject({
+			kind: z.literal('copper'),
+			id: z.string(),
+			layerId: z.string().meta({ description: 'The artwork layer this copper is patterned by' }),
+			zMm: z.number().min(0),
+			thicknessMm: z.number().positive(),
+			conductivitySPerM: z.number().positive()
+		})
+		.readonly(),
+	z
+		.strictObject({
+			kind: z.literal('dielectric'),
+			id: z.string(),
+			zMm: z.number().min(0),
+			thicknessMm: z.number().positive(),
+			relativePermittivity: z.number().min(1),
+			lossTangent: z.number().min(0),
+			bonding: z.boolean().optional().meta({ description: 'true for a bonding film (prepreg) between cores' })
+		})
+		.readonly()
+]);
+
+export const artworkDimensionSchema = z
+	.strictObject({
+		id: z.enum(['patch-width', 'patch-length', 'patch-diameter', 'inset-depth', 'feed-width', 'ground-width', 'ground-length']),
+		label: z.string().meta({ description: 'Short label: W, L, D, y0, Wf, Wg, Lg' }),
+		from: pointSchema,
+		to: pointSchema,
+		valueMm: z.number(),
+		side: z.enum(['above', 'below', 'left', 'right'])
+	})
+	.readonly();
+
+/**
+ * What conducts in the probe hole. A solid pin fills the finished hole; a plated barrel is a copper
+ * tube whose inside diameter is the finished hole and whose wall is the plating.
+ */
+export const artworkProbeSchema = z
+	.strictObject({
+		model: z.enum(probeModels),
+		drillDiameterMm: z.number().positive(),
+		platingThicknessUm: z.number().positive().nullable().meta({ description: 'Barrel wall copper; null for a solid pin' })
+	})
+	.readonly();
+
+export const boardSchema = z.strictObject({ widthMm: z.number().min(0), lengthMm: z.number().min(0) }).readonly();
+
+export const artworkSchema = z
+	.strictObject({
+		board: boardSchema.meta({ description: 'Board outline: a rectangle from (0, 0) to (widthMm, lengthMm)' }),
+		layers: z.array(artworkLayerSchema).min(1).readonly().meta({ description: 'Top to bottom: copper top first, then the rest' }),
+		drills: z.array(artworkDrillSchema).readonly(),
+		stack: z.array(stackLayerSchema).readonly().meta({ description: 'Top to bottom: the first entry is the top copper' }),
+		dimensions: z.array(artworkDimensionSchema).readonly(),
+		metadata: z
+			.strictObject({
+				designName: z.string(),
+				shape: z.enum(patchShapes),
+				feedKind: z.enum(allFeedKinds),
+				frequencyHz: z.number().positive(),
+				copperLayerCount: z.number().int().min(2),
+				probe: artworkProbeSchema.optional().meta({ description: 'The probe model the design states (absent: not stated)' })
+			})
+			.readonly()
+	})
+	.readonly()
+	.meta({ id: 'Artwork', description: 'Layers of shapes, drills, the stack and dimensions of one design, in mm' });
