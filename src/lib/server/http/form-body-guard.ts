@@ -18,7 +18,7 @@ function refusal(event: RequestEvent, status: number, message: string): Response
 }
 
 /** The body's bytes, or null once more than `maxBytes` arrived (the rest is not read). */
-async function readAtMost(request: Request, maxBytes: number): Promise<Uint8Array | null> {
+async function readAtMost(request: Request, maxBytes: number): Promise<Uint8Array<ArrayBuffer> | null> {
 	const declared = Number(request.headers.get('content-length'));
 	if (Number.isFinite(declared) && declared > maxBytes) return null;
 	if (!request.body) return new Uint8Array(0);
@@ -36,7 +36,13 @@ async function readAtMost(request: Request, maxBytes: number): Promise<Uint8Arra
 		}
 		chunks.push(value);
 	}
-	return Buffer.concat(chunks, total);
+	const bytes = new Uint8Array(total);
+	let at = 0;
+	for (const chunk of chunks) {
+		bytes.set(chunk, at);
+		at += chunk.byteLength;
+	}
+	return bytes;
 }
 
 /** How many times `needle` occurs in `bytes`, counting no further than `stopAfter`. */
