@@ -15,6 +15,13 @@ export function isExportKind(value: string): value is ExportKind {
 	return (exportKinds as readonly string[]).includes(value);
 }
 
+/**
+ * What the export log records: every download kind, and 'sweep-plan' for one saved sweep plan's sweep JSON
+ * (the revision's own sweep definition is 'sweep'). Re-exports are compared only within one kind (and one plan).
+ */
+export const exportLogKinds = [...exportKinds, 'sweep-plan'] as const;
+export type ExportLogKind = (typeof exportLogKinds)[number];
+
 export const exportVias = ['ui', 'api', 'cli'] as const;
 
 const idString = (what: string) =>
@@ -49,7 +56,7 @@ export type ExportSortKey = (typeof exportSortKeys)[number];
 /** Query of the export log: filter, sort, page. */
 export const exportLogQuerySchema = z.strictObject({
 	designId: designIdParam.optional(),
-	kind: z.enum(exportKinds).optional().meta({ description: 'Only this kind of download' }),
+	kind: z.enum(exportLogKinds).optional().meta({ description: "Only this kind of download ('sweep-plan': a saved sweep plan's sweep JSON)" }),
 	via: z.enum(exportVias).optional().meta({ description: 'Only downloads made from here' }),
 	q: z.string().trim().max(100, { error: 'q is at most 100 characters' }).optional().meta({ description: 'Text in the design name, revision label, person or sha256' }),
 	sort: z.enum(exportSortKeys).default('createdAt'),
@@ -132,7 +139,11 @@ export const exportRecordSchema = z
 		createdAt: z.iso.datetime(),
 		design: z.object({ id: z.string(), name: z.string() }),
 		revision: z.object({ label: z.string() }),
-		kind: z.string(),
+		kind: z.enum(exportLogKinds).meta({ description: "'bundle', a format, or 'sweep-plan' (a saved sweep plan's sweep JSON; the revision's own sweep definition is 'sweep')" }),
+		sweepPlan: z
+			.object({ id: z.string(), name: z.string() })
+			.nullable()
+			.meta({ description: "The saved plan a 'sweep-plan' download was built from; null for every other kind" }),
 		via: z.enum(exportVias),
 		user: z.object({ displayName: z.string() }),
 		files: z.array(exportedFileSchema),
@@ -145,7 +156,7 @@ export const exportRecordSchema = z
 		earlier: z
 			.object({ exportId: z.string(), createdAt: z.iso.datetime(), matches: z.boolean() })
 			.nullable()
-			.meta({ description: 'The first earlier export of the same revision and kind, and whether every hash matches it; null for a first export' })
+			.meta({ description: 'The first earlier export of the same revision and kind (and, for a sweep-plan, the same plan), and whether every hash matches it; null for a first export' })
 	})
 	.meta({ id: 'ExportRecord' });
 
