@@ -1,9 +1,11 @@
 // Journey: an editor uploads a measured S11 file, sees the plot with its resonance, confirms the retune and
-// lands on a new revision that names the measurement; a malformed file shows its line-numbered error and changes nothing.
+// lands on a new revision that names the measurement; a malformed file shows its line-numbered error and changes nothing;
+// a 150 000-point file opens with a plot, and the editor deletes it after confirming.
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { expect, test, type Page } from '@playwright/test';
 import { closeDb, getDb } from '../../src/lib/server/db';
+import { longSweepS1p } from '../integration/measurements/helpers/long-sweep';
 import { seedEditorWithDesign } from './helpers/seed';
 
 const fixtures = path.join(path.dirname(fileURLToPath(import.meta.url)), '../fixtures/touchstone-upload');
@@ -69,4 +71,30 @@ test('upload → plot with the resonance → confirm the retune → a new revisi
 	expect(b.retuned_from_measurement_id).toBe(m.id);
 	expect(b.parent_id).toBe(m.rid);
 	expect((b.input as { substrate: { relativePermittivity: number } }).substrate.relativePermittivity).toBe(apparent);
+});
+
+test('a 150 000-point file opens with a plot of at most 2 points per column, and the editor deletes it after confirming', async ({ page }) => {
+	test.setTimeout(180_000);
+	await signIn(page, `/designs/${designId}/r/A/measurements`);
+	const before = await measurementCount();
+	await page.getByLabel('Touchstone file').setInputFiles({ name: 'long-bench.s1p', mimeType: 'text/plain', buffer: Buffer.from(longSweepS1p(150_000)) });
+	await page.getByRole('button', { name: 'Upload' }).click();
+	await expect(page.getByRole('heading', { name: 'long-bench.s1p' })).toBeVisible({ timeout: 120_000 });
+	await expect(page.getByTestId('s11-plot')).toBeVisible();
+	await expect(page.getByTestId('s11-resonance')).toContainText('2.410 GHz');
+	await expect(page.getByTestId('s11-figures')).toContainText('150000 points');
+	// The drawn curve: one move and at most 2 × 688 − 1 line segments (688 pixel columns).
+	const d = (await page.getByTestId('s11-plot').locator('path').getAttribute('d'))!;
+	expect(d.split('L').length).toBeLessThanOrEqual(2 * 688);
+	expect(d.split('L').length).toBeGreaterThan(600);
+	expect(await measurementCount()).toBe(before + 1);
+
+	await page.getByRole('button', { name: 'Delete long-bench.s1p' }).click();
+	const confirm = page.getByTestId('delete-confirm');
+	await expect(confirm).toContainText('security log');
+	expect(await measurementCount()).toBe(before + 1);
+	await confirm.getByRole('button', { name: 'Delete long-bench.s1p' }).click();
+	await expect(page.getByRole('link', { name: 'long-bench.s1p' })).toHaveCount(0);
+	await expect(page.getByTestId('delete-confirm')).toHaveCount(0);
+	expect(await measurementCount()).toBe(before);
 });

@@ -56,7 +56,7 @@ test('the count follows the typing, a plan over 10 000 points cannot be saved, a
 	const saved = page.getByTestId('saved-plan').filter({ hasText: 'Thickness and margin' });
 	await expect(saved).toContainText('6,010 points');
 
-	const before = Number((await getDb().selectFrom('export_record').select((eb) => eb.fn.countAll<string>().as('n')).where('design_id', '=', designId).where('kind', '=', 'sweep').executeTakeFirstOrThrow()).n);
+	const before = Number((await getDb().selectFrom('export_record').select((eb) => eb.fn.countAll<string>().as('n')).where('design_id', '=', designId).where('kind', '=', 'sweep-plan').executeTakeFirstOrThrow()).n);
 	const downloadPromise = page.waitForEvent('download', { timeout: 60_000 });
 	await saved.getByRole('link', { name: 'Download sweep JSON' }).click();
 	await expect(saved.getByRole('status')).toContainText(/Sizing and drawing 6,010 points|Receiving/);
@@ -65,7 +65,7 @@ test('the count follows the typing, a plan over 10 000 points cannot be saved, a
 	const doc = JSON.parse(readFileSync((await download.path())!, 'utf8'));
 	expect(doc.pointCount).toBe(6010);
 	await expect(saved.getByRole('status')).toContainText('Saved');
-	const records = await getDb().selectFrom('export_record').selectAll().where('design_id', '=', designId).where('kind', '=', 'sweep').execute();
+	const records = await getDb().selectFrom('export_record').selectAll().where('design_id', '=', designId).where('kind', '=', 'sweep-plan').execute();
 	expect(records.length).toBe(before + 1);
 	expect(records[records.length - 1].via).toBe('ui');
 });

@@ -121,7 +121,7 @@ export function layoutCorporateFeed(feedPoints: readonly (readonly Point[])[], a
 	const root = nodes[0];
 	const corner: Point = [x, root[1]];
 	piece(root, corner, w, 'feed-network', false, true);
-	const lowest = Math.min(lowestCopperYMm, ...pieces.map((p) => Math.min(p.from[1], p.to[1]) - p.widthMm / 2));
+	const lowest = pieces.reduce((low, p) => Math.min(low, Math.min(p.from[1], p.to[1]) - p.widthMm / 2), lowestCopperYMm);
 	const port: Point = [x, lowest - marginMm];
 	piece(corner, port, w, 'feed-line', true, false);
 	return { pieces, port };
@@ -157,5 +157,10 @@ export function pieceBounds(p: NetworkPiece): Bounds {
 	if (g.kind !== 'region') throw new Error('piece is a region');
 	const o = g.region.outer;
 	const pts = [o.start, ...o.segments.map((s) => s.to)];
-	return { minXMm: Math.min(...pts.map((q) => q[0])), minYMm: Math.min(...pts.map((q) => q[1])), maxXMm: Math.max(...pts.map((q) => q[0])), maxYMm: Math.max(...pts.map((q) => q[1])) };
+	return pts.reduce((b, q) => ({ minXMm: Math.min(b.minXMm, q[0]), minYMm: Math.min(b.minYMm, q[1]), maxXMm: Math.max(b.maxXMm, q[0]), maxYMm: Math.max(b.maxYMm, q[1]) }), {
+		minXMm: Infinity,
+		minYMm: Infinity,
+		maxXMm: -Infinity,
+		maxYMm: -Infinity
+	});
 }

@@ -88,8 +88,8 @@ export function buildElement(sized: SizedDesign, runMm: number): BuiltElement {
 		const below = hy + (feed.kind === 'quarter-wave' ? feed.transformer.lengthMm : 0);
 		center = [0, runMm + below];
 		const top = buildTopCopper(sized, center);
-		shapes[roles.feedIndex].push(...top.shapes);
-		voids[roles.feedIndex].push(...top.voids);
+		for (const s of top.shapes) shapes[roles.feedIndex].push(s);
+		for (const v of top.voids) voids[roles.feedIndex].push(v);
 		if (sized.parasitic) shapes[roles.topIndex].push(region('parasitic-patch', 'parasitic-patch', patchRegion(sized.parasitic.patch, center)));
 	}
 	const all = shapes.filter((_, i) => i !== roles.groundIndex).flat();

@@ -59,7 +59,11 @@ export function buildExtendedArtwork(sized: SizedDesign): Artwork {
 
 	// board: every non-ground copper plus the margin; the bottom edge is the port (or the single feed line's start)
 	let copper: Bounds = emptyBounds;
-	for (let r = 0; r < rows; r++) for (let c = 0; c < columns; c++) copper = mergeBounds(copper, shift(element.footprint, ...origin(r, c)));
+	for (let r = 0; r < rows; r++)
+		for (let c = 0; c < columns; c++) {
+			const [ox, oy] = origin(r, c);
+			copper = mergeBounds(copper, shift(element.footprint, ox, oy));
+		}
 	for (const p of pieces) copper = mergeBounds(copper, pieceBounds(p));
 	const bottomY = array ? copper.minYMm : 0;
 	const offX = marginMm - copper.minXMm;

@@ -43,12 +43,12 @@ export function buildTopCopper(sized: SizedDesign, center: Point): TopCopper {
 	const round = patch.kind === 'circular';
 	const radius = round ? patch.radiusMm : 0;
 	const straight = round ? null : patchPolygon(patch, center);
-	const edgeY = round ? cy - radius : Math.min(...straight!.map((p) => p[1]));
+	const edgeY = round ? cy - radius : straight!.reduce((low, p) => Math.min(low, p[1]), Infinity);
 	const patchRegion = (): Region =>
 		round ? { outer: createCircleContour(center, radius), holes: [] } : { outer: createPolygonContour(straight!), holes: [] };
 
 	const requireHalfWidthInside = (halfWidthMm: number, what: string) => {
-		const limit = round ? radius : Math.min(...straight!.filter((p) => p[1] === edgeY).map((p) => Math.abs(p[0] - cx)));
+		const limit = round ? radius : straight!.filter((p) => p[1] === edgeY).reduce((low, p) => Math.min(low, Math.abs(p[0] - cx)), Infinity);
 		if (!(halfWidthMm < limit)) {
 			throw new GeometryError('notch-outside-patch', `${what} (half width ${halfWidthMm.toFixed(4)} mm) must be narrower than the patch edge it meets (half width ${limit.toFixed(4)} mm)`);
 		}
@@ -91,7 +91,7 @@ export function buildTopCopper(sized: SizedDesign, center: Point): TopCopper {
 				}
 				shapes.push(region('patch', 'patch', { outer: circleWithChannelContour(center, radius, channelHalf, topY), holes: [] }));
 			} else {
-				const topOfPatch = Math.max(...straight!.map((p) => p[1]));
+				const topOfPatch = straight!.reduce((high, p) => Math.max(high, p[1]), -Infinity);
 				if (!(topY < topOfPatch)) {
 					throw new GeometryError('notch-outside-patch', `feed.insetDepthMm (${feed.insetDepthMm.toFixed(4)} mm) must be less than the patch length (${(topOfPatch - edgeY).toFixed(4)} mm)`);
 				}

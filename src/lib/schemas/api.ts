@@ -1,8 +1,10 @@
 // zod schemas of the /api/v1 surface: path parameters, queries, bodies and answers. The OpenAPI document is generated from these.
 import { z } from 'zod';
 import { formatIds } from '../formats/format-ids';
-import { designInputSchema } from './design-input';
+import { designInputSchema, designNameSchema } from './design-input';
+import { revisionNoteSchema } from './revision-note';
 import { sizedDesignSchema } from './sized-design';
+import { waiverReasonSchema } from './waiver-reason';
 
 /** The design-input document, named for the OpenAPI components. */
 export const designInputDocumentSchema = designInputSchema.meta({ id: 'DesignInput', description: 'The design-input document (see src/lib/schemas/design-input.ts)' });
@@ -14,6 +16,13 @@ export type ExportKind = (typeof exportKinds)[number];
 export function isExportKind(value: string): value is ExportKind {
 	return (exportKinds as readonly string[]).includes(value);
 }
+
+/**
+ * What the export log records: every download kind, and 'sweep-plan' for one saved sweep plan's sweep JSON
+ * (the revision's own sweep definition is 'sweep'). Re-exports are compared only within one kind (and one plan).
+ */
+export const exportLogKinds = [...exportKinds, 'sweep-plan'] as const;
+export type ExportLogKind = (typeof exportLogKinds)[number];
 
 export const exportVias = ['ui', 'api', 'cli'] as const;
 
@@ -40,7 +49,7 @@ export const sweepPlanParamsSchema = revisionParamsSchema.extend({ planId: idStr
 
 /** POST body of a download that goes out despite design-rule violations (editors and owners). */
 export const waiverBodySchema = z
-	.strictObject({ waiver: z.string({ error: 'required: why the violations are acceptable' }).meta({ description: 'Why the violations are acceptable; stored on the export record and printed in the fab notes' }) })
+	.strictObject({ waiver: z.string({ error: 'required: why the violations are acceptable' }).pipe(waiverReasonSchema).meta({ description: 'Why the violations are acceptable; stored on the export record and printed in the fab notes' }) })
 	.meta({ id: 'WaiverBody' });
 
 export const exportSortKeys = ['createdAt', 'design', 'revision', 'kind', 'via', 'user', 'sizeBytes'] as const;
@@ -49,7 +58,7 @@ export type ExportSortKey = (typeof exportSortKeys)[number];
 /** Query of the export log: filter, sort, page. */
 export const exportLogQuerySchema = z.strictObject({
 	designId: designIdParam.optional(),
-	kind: z.enum(exportKinds).optional().meta({ description: 'Only this kind of download' }),
+	kind: z.enum(exportLogKinds).optional().meta({ description: "Only this kind of download ('sweep-plan': a saved sweep plan's sweep JSON)" }),
 	via: z.enum(exportVias).optional().meta({ description: 'Only downloads made from here' }),
 	q: z.string().trim().max(100, { error: 'q is at most 100 characters' }).optional().meta({ description: 'Text in the design name, revision label, person or sha256' }),
 	sort: z.enum(exportSortKeys).default('createdAt'),
@@ -61,10 +70,10 @@ export type ExportLogQuery = z.output<typeof exportLogQuerySchema>;
 
 export const createDesignBodySchema = z
 	.strictObject({
-		name: z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).optional().meta({ description: 'Design name (default: the input document’s name)', example: 'Roof GNSS L1' }),
+		name: designNameSchema.optional().meta({ description: 'Design name (default: the input document’s name)', example: 'Roof GNSS L1' }),
 		/** The design-input document of revision A. */
 		input: designInputDocumentSchema,
-		note: z.string().max(500, { error: 'at most 500 characters' }).optional()
+		note: revisionNoteSchema.optional()
 	})
 	.meta({ id: 'CreateDesign' });
 export type CreateDesignBody = z.output<typeof createDesignBodySchema>;
@@ -74,7 +83,7 @@ export const createRevisionBodySchema = z
 		parent: revisionLabelParam.meta({ description: 'Label of the revision this one starts from' }),
 		/** The complete design-input document of the new revision. */
 		input: designInputDocumentSchema,
-		note: z.string().max(500, { error: 'at most 500 characters' }).optional()
+		note: revisionNoteSchema.optional()
 	})
 	.meta({ id: 'CreateRevision' });
 export type CreateRevisionBody = z.output<typeof createRevisionBodySchema>;
@@ -118,7 +127,11 @@ export const exportRecordSchema = z
 		createdAt: z.iso.datetime(),
 		design: z.object({ id: z.string(), name: z.string() }),
 		revision: z.object({ label: z.string() }),
-		kind: z.string(),
+		kind: z.enum(exportLogKinds).meta({ description: "'bundle', a format, or 'sweep-plan' (a saved sweep plan's sweep JSON; the revision's own sweep definition is 'sweep')" }),
+		sweepPlan: z
+			.object({ id: z.string(), name: z.string() })
+			.nullable()
+			.meta({ description: "The saved plan a 'sweep-plan' download was built from; null for every other kind" }),
 		via: z.enum(exportVias),
 		user: z.object({ displayName: z.string() }),
 		files: z.array(exportedFileSchema),
@@ -131,7 +144,7 @@ export const exportRecordSchema = z
 		earlier: z
 			.object({ exportId: z.string(), createdAt: z.iso.datetime(), matches: z.boolean() })
 			.nullable()
-			.meta({ description: 'The first earlier export of the same revision and kind, and whether every hash matches it; null for a first export' })
+			.meta({ description: 'The first earlier export of the same revision and kind (and, for a sweep-plan, the same plan), and whether every hash matches it; null for a first export' })
 	})
 	.meta({ id: 'ExportRecord' });
 

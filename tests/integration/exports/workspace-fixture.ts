@@ -93,13 +93,13 @@ export async function identityOf(ws: Workspace, who: CallerKind, via: AuthVia, u
 /** Calls a route handler the way SvelteKit would, with locals set from the identity. */
 export async function callRoute(
 	handler: (event: RequestEvent) => Response | Promise<Response>,
-	opts: { identity: RequestIdentity; path: string; params: Record<string, string>; method?: string; body?: unknown; rawBody?: string; contentType?: string }
+	opts: { identity: RequestIdentity; path: string; params: Record<string, string>; method?: string; body?: unknown; rawBody?: string; contentType?: string; headers?: Record<string, string> }
 ): Promise<Response> {
 	const url = new URL(opts.path, 'http://127.0.0.1');
 	const hasBody = opts.body !== undefined || opts.rawBody !== undefined;
 	const request = new Request(url, {
 		method: opts.method ?? 'GET',
-		headers: hasBody ? { 'content-type': opts.contentType ?? 'application/json' } : {},
+		headers: { ...(hasBody ? { 'content-type': opts.contentType ?? 'application/json' } : {}), ...opts.headers },
 		body: hasBody ? (opts.rawBody ?? JSON.stringify(opts.body)) : undefined
 	});
 	const event = {

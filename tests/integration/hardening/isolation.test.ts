@@ -78,6 +78,8 @@ const pageActions = (w: HardeningWorkspace): { path: string; form: Record<string
 		{ path: `${r}/sweeps?/save`, form: { name: 'Intruder', combine: 'grid', 'axes.0.field': 'substrate.heightMm', 'axes.0.from': '1', 'axes.0.to': '2', 'axes.0.step': '0.5' } },
 		{ path: `${r}/measurements?/retune`, form: { measurementId: b.measurementId } },
 		{ path: `/designs/${w.a.designId}/r/${w.a.label}/measurements?/retune`, form: { measurementId: b.measurementId } },
+		{ path: `${r}/measurements?/delete`, form: { measurementId: b.measurementId, confirm: 'yes' } },
+		{ path: `/designs/${w.a.designId}/r/${w.a.label}/measurements?/delete`, form: { measurementId: b.measurementId, confirm: 'yes' } },
 		{ path: '/settings/tokens?/revoke', form: { tokenId: w.outsider.tokenId } }
 	];
 };

@@ -117,7 +117,7 @@ describe('exporting a sweep plan', () => {
 	});
 
 	it('over the API with a viewer token: the sweep JSON, valid against its JSON Schema, recorded once via api', async () => {
-		const before = (await exportsOf('sweep')).length;
+		const before = (await exportsOf('sweep-plan')).length;
 		const res = await call(apiRoute.GET as never, await tokenIdentity('viewer'), { designId, label: 'A', planId });
 		expect(res.status).toBe(200);
 		const body = new Uint8Array(await res.arrayBuffer());
@@ -128,10 +128,10 @@ describe('exporting a sweep plan', () => {
 		const validate = new Ajv2020({ strict: false, allErrors: true }).compile(sweepJsonSchema);
 		expect(validate(doc), JSON.stringify(validate.errors?.slice(0, 3))).toBe(true);
 
-		const records = await exportsOf('sweep');
+		const records = await exportsOf('sweep-plan');
 		expect(records.length).toBe(before + 1);
 		const record = records[records.length - 1];
-		expect(record).toMatchObject({ via: 'api', user_id: team.users.viewer.id, team_id: team.teamId, sha256: res.headers.get('x-content-sha256') });
+		expect(record).toMatchObject({ via: 'api', user_id: team.users.viewer.id, team_id: team.teamId, sweep_plan_id: planId, sha256: res.headers.get('x-content-sha256') });
 		expect(record.files).toEqual([{ name: expect.stringMatching(/-A\.sweep-bench-study\.sweep\.json$/), sizeBytes: body.byteLength, sha256: record.sha256 }]);
 		expect(res.headers.get('x-export-id')).toBe(record.id);
 	});
@@ -141,14 +141,14 @@ describe('exporting a sweep plan', () => {
 		const res = await call(pageRoute.GET as never, session, { designId, label: 'A', planId });
 		expect(res.status).toBe(200);
 		expect(res.headers.get('content-disposition')).toMatch(/^attachment; filename=".+\.sweep\.json"$/);
-		const records = await exportsOf('sweep');
+		const records = await exportsOf('sweep-plan');
 		expect(records[records.length - 1]).toMatchObject({ via: 'ui', user_id: team.users.editor.id, sha256: records[records.length - 2].sha256 });
 	});
 
 	it('answers 404 to a token of another team and to an unknown plan, recording nothing', async () => {
-		const before = (await exportsOf('sweep')).length;
+		const before = (await exportsOf('sweep-plan')).length;
 		expect((await call(apiRoute.GET as never, await tokenIdentity('outsider'), { designId, label: 'A', planId })).status).toBe(404);
 		expect((await call(apiRoute.GET as never, await tokenIdentity('viewer'), { designId, label: 'A', planId: randomUUID() })).status).toBe(404);
-		expect((await exportsOf('sweep')).length).toBe(before);
+		expect((await exportsOf('sweep-plan')).length).toBe(before);
 	});
 });

@@ -13,8 +13,8 @@ export function probeComment(probe: ArtworkProbe): string {
 
 export function buildExcellonCommands(artwork: Artwork, plated: boolean, meta: ExportMeta): ExcellonCommand[] {
 	const drills = artwork.drills.filter((d) => d.plated === plated);
-	const from = Math.min(...drills.map((d) => d.fromCopper), 1);
-	const to = Math.max(...drills.map((d) => d.toCopper), artwork.metadata.copperLayerCount);
+	const from = drills.reduce((low, d) => Math.min(low, d.fromCopper), 1);
+	const to = drills.reduce((high, d) => Math.max(high, d.toCopper), artwork.metadata.copperLayerCount);
 	const out: ExcellonCommand[] = [{ type: 'header-start' }];
 	out.push({ type: 'comment', text: `${SOFTWARE_NAME} ${meta.designName} revision ${meta.revisionLabel}: ${plated ? 'plated' : 'non-plated'} holes` });
 	const probe = artwork.metadata.probe;

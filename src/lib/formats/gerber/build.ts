@@ -41,13 +41,14 @@ export function buildGerberCommands(artwork: Artwork, layerId: string, meta: Exp
 	const layer = artwork.layers.find((l) => l.id === layerId);
 	if (!layer) throw new Error(`no layer "${layerId}" in the artwork`);
 	const out: GerberCommand[] = [];
-	const file = (name: string, ...values: string[]) => out.push({ type: 'attribute', scope: 'file', name, values });
+	const fileValues = (name: string, values: string[]) => out.push({ type: 'attribute', scope: 'file', name, values });
+	const file = (name: string, ...values: string[]) => fileValues(name, values);
 	out.push({ type: 'comment', text: `${SOFTWARE_NAME} ${meta.designName} revision ${meta.revisionLabel}: ${layer.title}` });
 	file('TF.GenerationSoftware', SOFTWARE_NAME, SOFTWARE_NAME, meta.softwareVersion);
 	file('TF.CreationDate', `${meta.revisionDate}T00:00:00+00:00`);
 	file('TF.ProjectId', meta.designSlug, projectGuid(meta), meta.revisionLabel);
 	file('TF.SameCoordinates', `${meta.designSlug}-${meta.revisionLabel}`);
-	file('TF.FileFunction', ...gerberFileFunction(layer));
+	fileValues('TF.FileFunction', gerberFileFunction(layer));
 	file('TF.FilePolarity', layer.function.kind === 'solder-mask' ? 'Negative' : 'Positive');
 	file('TF.Part', 'Single');
 	out.push({ type: 'format', format: GERBER_COORDINATE_FORMAT });

@@ -84,7 +84,7 @@ export function compareFabView(artwork: Artwork, view: FabView): ReadBackMismatc
 			out.push({ check: 'layer-missing', fileName: null, layerKey: null, message: `no ${plated ? 'plated' : 'non-plated'} drill file for ${drills.length} holes` });
 			continue;
 		}
-		out.push(...compareHoles(plated, drills, files.flatMap((f) => f.holes), files[0]?.fileName ?? null));
+		for (const m of compareHoles(plated, drills, files.flatMap((f) => f.holes), files[0]?.fileName ?? null)) out.push(m);
 	}
 	return out;
 }

@@ -79,7 +79,7 @@ export function readGerber(text: string): ReadGerber {
 			else {
 				// a closing line back to the start makes the path a contour; flattenContour drops exactly that line's end
 				const pts = flattenContour({ start: strokeStart, segments: [...strokeSegments, { kind: 'line', to: strokeStart }] }, CHORD_TOLERANCE_MM);
-				items.push(...strokeItems(pts, lengthInMm(d, nf.units), polarity));
+				for (const item of strokeItems(pts, lengthInMm(d, nf.units), polarity)) items.push(item);
 			}
 		}
 		strokeStart = null;

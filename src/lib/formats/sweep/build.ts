@@ -3,6 +3,7 @@ import { buildArtwork, type Artwork, type StackLayer } from '../../artwork';
 import { GeometryError } from '../../geometry';
 import { size, type SizedDesign } from '../../rf';
 import { InputError, parseDesignInput } from '../../schemas';
+import { replaceControlCharacters } from '../../schemas/plain-text';
 import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
 import { SWEEP_FORMAT, SWEEP_FORMAT_VERSION, SWEEP_SCHEMA_PATH, type SweepDocument, type SweepPoint, type SweepProbeEntry } from './document';
 import { axisValues, parseSweepPlan, type SweepPlan } from './plan';
@@ -45,13 +46,23 @@ function withField(doc: unknown, path: string, value: number): unknown {
 }
 
 /**
+ * A revision stored before names with control characters were refused still sweeps: its name (a label,
+ * sized by nothing) has them replaced by spaces instead of failing the schema. New input is refused earlier.
+ */
+function withoutControlCharactersInName(raw: unknown): unknown {
+	if (!raw || typeof raw !== 'object' || Array.isArray(raw)) return raw;
+	const name = (raw as { name?: unknown }).name;
+	return typeof name === 'string' ? { ...raw, name: replaceControlCharacters(name) } : raw;
+}
+
+/**
  * Builds the sweep. Throws InputError for a bad base design or plan (including more than
  * MAX_SWEEP_POINTS points) before sizing anything; a point that sizing or geometry refuses is
  * recorded as refused, with the reason. `known` is a design already drawn: a point that sizes to exactly
  * it takes its artwork instead of drawing it again.
  */
 export function buildSweepDocument(baseRaw: unknown, planRaw: unknown, meta: ExportMeta, known?: { readonly sized: SizedDesign; readonly artwork: Artwork }): SweepDocument {
-	const base = parseDesignInput(baseRaw);
+	const base = parseDesignInput(withoutControlCharactersInName(baseRaw));
 	const plan = parseSweepPlan(planRaw);
 	const points: SweepPoint[] = sweepCombinations(plan).map((parameters, index) => {
 		let doc: unknown = base;

@@ -10,3 +10,4 @@ export { writeTouchstone } from './write-touchstone';
 export { s11FromNetwork, type S11Sample } from './s11-from-network';
 export { portCountFromFileName } from './port-count-from-file-name';
 export { describeNetwork, type NetworkDescription } from './describe-network';
+export { decimateTrace, type TracePoint } from './decimate-trace';

@@ -493,7 +493,7 @@ function readVersion2(lines: SourceLine[], endLineNo: number, options: ReadTouch
 				if (values.length % 2 !== 0 || values.length > remaining) {
 					throw new TouchstoneError(line.lineNo, `the remaining ${remaining} values (whole pairs) of the frequency set begun on line ${openSet.lineNo}`, line.text);
 				}
-				openSet.values.push(...values);
+				for (const v of values) openSet.values.push(v);
 			}
 			if (openSet.values.length === setSize) {
 				const previousHz = points.length > 0 ? points[points.length - 1].frequencyHz : undefined;

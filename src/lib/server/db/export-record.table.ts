@@ -16,8 +16,10 @@ export interface ExportRecordTable {
 	revision_id: string;
 	user_id: string;
 	via: ExportVia;
-	/** What was downloaded: 'bundle' or one format name. */
+	/** What was downloaded: 'bundle', one format name, or 'sweep-plan' (one saved plan's sweep; see sweep_plan_id). */
 	kind: string;
+	/** The plan of a 'sweep-plan' download (migration 2026-12-02T0620); NULL for every other kind. */
+	sweep_plan_id: ColumnType<string | null, string | null | undefined, never>;
 	files: ColumnType<ExportedFile[], string, never>;
 	/** sha256 of the bytes delivered (the zip for a bundle). */
 	sha256: string;

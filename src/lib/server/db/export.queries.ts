@@ -29,6 +29,8 @@ export interface ExportLogRow {
 	design_name: string;
 	revision_label: string;
 	kind: string;
+	sweep_plan_id: string | null;
+	sweep_plan_name: string | null;
 	via: ExportVia;
 	user_display_name: string;
 	files: ExportedFile[];
@@ -52,6 +54,7 @@ export async function listExportsByTeam(db: Kysely<Database>, teamId: string, qu
 		.innerJoin('design as d', 'd.id', 'e.design_id')
 		.innerJoin('revision as r', 'r.id', 'e.revision_id')
 		.innerJoin('app_user as u', 'u.id', 'e.user_id')
+		.leftJoin('sweep_plan as sp', 'sp.id', 'e.sweep_plan_id')
 		.where('e.team_id', '=', teamId);
 	if (query.designId) base = base.where('e.design_id', '=', query.designId);
 	if (query.kind) base = base.where('e.kind', '=', query.kind);
@@ -91,6 +94,10 @@ export async function listExportsByTeam(db: Kysely<Database>, teamId: string, qu
 					.select(['p.id', 'p.created_at', 'p.sha256', 'p.files'])
 					.whereRef('p.revision_id', '=', 'e.revision_id')
 					.whereRef('p.kind', '=', 'e.kind')
+					// Like with like: a plan's sweep only with downloads of the same plan (rows of a plan the migration
+					// could not tell apart from another of the same name are compared by file name).
+					.where(sql<boolean>`p.sweep_plan_id is not distinct from e.sweep_plan_id`)
+					.where(sql<boolean>`(e.kind <> 'sweep-plan' or e.sweep_plan_id is not null or p.files->0->>'name' = e.files->0->>'name')`)
 					.where(sql<boolean>`(p.created_at, p.id) < (e.created_at, e.id)`)
 					.orderBy('p.created_at', 'asc')
 					.orderBy('p.id', 'asc')
@@ -105,6 +112,8 @@ export async function listExportsByTeam(db: Kysely<Database>, teamId: string, qu
 			'd.name as design_name',
 			'r.label as revision_label',
 			'e.kind',
+			'e.sweep_plan_id',
+			'sp.name as sweep_plan_name',
 			'e.via',
 			'u.display_name as user_display_name',
 			'e.files',

@@ -30,6 +30,17 @@ export async function listMeasurementsByRevision(db: Kysely<Database>, revisionI
 		.execute();
 }
 
+/** One measurement with its plot trace (NULL for rows stored before the trace column), without its samples. */
+export async function findMeasurementTraceByRevisionAndId(db: Kysely<Database>, revisionId: string, id: string) {
+	return db
+		.selectFrom('measurement')
+		.innerJoin('app_user', 'app_user.id', 'measurement.uploaded_by')
+		.select([...listColumns, 'measurement.trace'])
+		.where('measurement.revision_id', '=', revisionId)
+		.where('measurement.id', '=', id)
+		.executeTakeFirst();
+}
+
 /** One measurement with its samples. */
 export async function findMeasurementByRevisionAndId(db: Kysely<Database>, revisionId: string, id: string) {
 	return db
@@ -39,6 +50,12 @@ export async function findMeasurementByRevisionAndId(db: Kysely<Database>, revis
 		.where('measurement.revision_id', '=', revisionId)
 		.where('measurement.id', '=', id)
 		.executeTakeFirst();
+}
+
+/** Deletes one measurement of a revision; the number of rows deleted (0 or 1). */
+export async function deleteMeasurementByRevisionAndId(db: Kysely<Database>, revisionId: string, id: string): Promise<number> {
+	const result = await db.deleteFrom('measurement').where('revision_id', '=', revisionId).where('id', '=', id).executeTakeFirst();
+	return Number(result.numDeletedRows);
 }
 
 export async function countMeasurementsByRevision(db: Kysely<Database>, revisionId: string): Promise<number> {

@@ -11,6 +11,8 @@ export interface MeasurementTable {
 	touchstone: string;
 	/** S11 samples: { frequencyHz, s11: { re, im } }[]. */
 	points: ColumnType<unknown, string, never>;
+	/** The plot's thinned trace: [frequencyHz, s11Db][] (migration 2026-12-02T0610; NULL for rows stored before it). */
+	trace: ColumnType<unknown, string | undefined, never>;
 	/** Resonance, band, minimum VSWR and file facts (see server/measurements/measurement-model.ts). */
 	summary: ColumnType<unknown, string, never>;
 	uploaded_by: string;

@@ -1,4 +1,5 @@
-// The export log as the API answers it: one page of records, each with whether it matches the first earlier export of its revision and kind.
+// The export log as the API answers it: one page of records, each with whether it matches the first earlier export of its revision
+// and kind (and, for a sweep-plan download, its plan).
 import type { z } from 'zod';
 import type { ExportLogQuery, exportLogSchema, exportRecordSchema } from '$lib/schemas/api';
 import { getDb } from '../db';
@@ -13,7 +14,8 @@ export function toExportLogEntry(row: exportQueries.ExportLogRow): ExportLogEntr
 		createdAt: row.created_at.toISOString(),
 		design: { id: row.design_id, name: row.design_name },
 		revision: { label: row.revision_label },
-		kind: row.kind,
+		kind: row.kind as ExportLogEntry['kind'],
+		sweepPlan: row.sweep_plan_id ? { id: row.sweep_plan_id, name: row.sweep_plan_name ?? '' } : null,
 		via: row.via,
 		user: { displayName: row.user_display_name },
 		files: row.files,

@@ -1,6 +1,7 @@
 // Public face of server/exports: build a revision's files or bundle, hash them, record the download, and read the log.
 export { buildExport, exportMetaOf, revisionDateOf, type BuiltExport, type BuildExportOptions } from './build-export';
 export { downloadResponse } from './download-response';
+export { refuseCrossSiteDownload, RECORDABLE_FETCH_SITES, CROSS_SITE_DOWNLOAD_MESSAGE } from './download-site';
 export { exportForRequest, type ExportRequestOptions } from './export-for-request';
 export { checkExportTarget, type GateReport } from './export-gate';
 export { ExportRefusedError, ReadBackFailedError } from './export-refusal';

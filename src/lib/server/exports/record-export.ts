@@ -5,12 +5,15 @@ import * as exportQueries from '../db/export.queries';
 import { recordAuditEvent } from '../audit/record-audit-event';
 import type { ExportedFile, ExportVia } from '../db/export-record.table';
 import type { ExportTarget } from './export-target';
+import type { ExportLogKind } from '$lib/schemas/api';
 
 export interface ExportRecordInput {
 	target: ExportTarget;
 	userId: string;
 	via: ExportVia;
-	kind: string;
+	kind: ExportLogKind;
+	/** The saved plan a 'sweep-plan' download was built from; absent for every other kind. */
+	sweepPlanId?: string | null;
 	files: ExportedFile[];
 	sha256: string;
 	/** Why design-rule violations were accepted; null/absent for a clean design. */
@@ -30,6 +33,7 @@ export async function recordExport(input: ExportRecordInput): Promise<{ id: stri
 				user_id: input.userId,
 				via: input.via,
 				kind: input.kind,
+				sweep_plan_id: input.sweepPlanId ?? null,
 				files: input.files,
 				sha256: input.sha256,
 				waiver: input.waiver ?? null

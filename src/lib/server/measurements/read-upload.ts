@@ -1,8 +1,9 @@
 // An uploaded Touchstone file, checked before anything is stored: size, name, text content, then the strict reader.
-import { InputError } from '../../schemas';
-import { describeNetwork, portCountFromFileName, readTouchstone, s11FromNetwork, type S11Sample } from '../../formats/touchstone';
+import { findControlCharacter, InputError } from '../../schemas';
+import { describeNetwork, portCountFromFileName, readTouchstone, s11FromNetwork, type S11Sample, type TracePoint } from '../../formats/touchstone';
 import { analyzeMeasuredResponse } from '../../rf/measured-response';
 import type { MeasurementSummary } from './measurement-model';
+import { traceOf } from './measurement-trace';
 
 /** Largest file accepted: 5 MB (5 × 1024 × 1024 bytes). A 2-port sweep of 10 000 points in RI is about 1 MB. */
 export const MAX_TOUCHSTONE_BYTES = 5 * 1024 * 1024;
@@ -14,6 +15,8 @@ export interface ReadUpload {
 	text: string;
 	samples: S11Sample[];
 	summary: MeasurementSummary;
+	/** What the plot draws: at most 2 points per pixel column (see measurement-trace.ts). */
+	trace: TracePoint[];
 }
 
 function refuse(path: string, value: unknown, message: string): never {
@@ -24,6 +27,8 @@ function refuse(path: string, value: unknown, message: string): never {
 export function readTouchstoneUpload(fileName: string, bytes: Uint8Array): ReadUpload {
 	const name = fileName.trim();
 	if (name === '' || name.length > MAX_FILE_NAME_CHARS) refuse('file', fileName, `choose a Touchstone file (.s1p, .s2p or .ts; a name of 1–${MAX_FILE_NAME_CHARS} characters)`);
+	const control = findControlCharacter(name);
+	if (control) refuse('file', name, `the file name must not contain control characters (found ${control})`);
 	const extension = (/\.[^.]+$/.exec(name)?.[0] ?? '').toLowerCase();
 	if (!(TOUCHSTONE_EXTENSIONS as readonly string[]).includes(extension)) {
 		refuse('file', name, `must be a Touchstone file named *.s1p, *.s2p or *.ts (got "${extension || 'no extension'}")`);
@@ -48,5 +53,5 @@ export function readTouchstoneUpload(fileName: string, bytes: Uint8Array): ReadU
 		minimumVswr: Number.isFinite(response.minimumVswr) ? response.minimumVswr : null,
 		minimumVswrFrequencyHz: response.minimumVswrFrequencyHz
 	};
-	return { text, samples, summary };
+	return { text, samples, summary, trace: traceOf(response.points) };
 }

@@ -14,7 +14,7 @@ export interface UploadMeasurementOptions {
 
 /** Throws InputError (TouchstoneError for a malformed file) before writing anything. Returns the new id. */
 export async function uploadMeasurement(db: Kysely<Database>, opts: UploadMeasurementOptions): Promise<{ id: string }> {
-	const { text, samples, summary } = readTouchstoneUpload(opts.fileName, opts.bytes);
+	const { text, samples, summary, trace } = readTouchstoneUpload(opts.fileName, opts.bytes);
 	const id = randomUUID();
 	await measurementQueries.insertMeasurement(db, {
 		id,
@@ -24,6 +24,7 @@ export async function uploadMeasurement(db: Kysely<Database>, opts: UploadMeasur
 		touchstone: text,
 		points: JSON.stringify(samples),
 		summary: JSON.stringify(summary),
+		trace: JSON.stringify(trace),
 		uploaded_by: opts.userId
 	});
 	return { id };

@@ -1,4 +1,4 @@
-// One sweep download: the plan's sweep JSON built by formats/sweep from the revision, hashed, and recorded as a 'sweep' export.
+// One sweep download: the plan's sweep JSON built by formats/sweep from the revision, hashed, and recorded as a 'sweep-plan' export naming the plan.
 import { buildSweepDocument, serializeSweep } from '../../formats/sweep';
 import { createExportMeta, toSlug } from '../../formats/export-meta';
 import type { ExportVia } from '../db/export-record.table';
@@ -35,7 +35,8 @@ export async function exportSweepPlan(
 		target: { design: opts.design, revision: opts.revision },
 		userId: opts.userId,
 		via: opts.via,
-		kind: 'sweep',
+		kind: 'sweep-plan',
+		sweepPlanId: opts.plan.id,
 		files: [{ name: built.fileName, sizeBytes: built.body.byteLength, sha256 }],
 		sha256
 	});

@@ -119,6 +119,7 @@ export function fuzzTargets(ws: HardeningWorkspace): FuzzTarget[] {
 				}))
 		},
 		{ name: 'POST /designs/[designId]/r/[label]/measurements?/retune', kind: 'action', requests: post(`${page}/measurements?/retune`, formBodies(['measurementId', 'holdWidth']), editor) },
+		{ name: 'POST /designs/[designId]/r/[label]/measurements?/delete', kind: 'action', requests: post(`${page}/measurements?/delete`, formBodies(['measurementId', 'confirm']), editor) },
 		{ name: 'POST /laminates?/add', kind: 'action', requests: post('/laminates?/add', formBodies(laminateFormNames).map((b) => (b.form ? { form: { teamId: a.teamId, ...b.form } } : b)), editor) },
 		{ name: 'POST /settings/tokens?/create', kind: 'action', requests: post('/settings/tokens?/create', formBodies(['name']), editor) },
 		{ name: 'POST /settings/tokens?/revoke', kind: 'action', requests: post('/settings/tokens?/revoke', formBodies(['tokenId']), editor) }

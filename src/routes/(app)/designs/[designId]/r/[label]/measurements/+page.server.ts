@@ -1,9 +1,9 @@
-// A revision's measured S11 files: upload (multipart, ≤ 5 MB, strict), the plot of one, its retune proposal, and confirming it.
+// A revision's measured S11 files: upload (multipart, ≤ 5 MB, strict), the plot of one (its thinned trace, never the raw samples),
+// its retune proposal, confirming it, and deleting a file (editors and owners, after a confirm step; recorded in the security log).
 import { error, fail, redirect } from '@sveltejs/kit';
 import { can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
 import * as measurements from '$lib/server/measurements';
-import { analyzeMeasuredResponse } from '$lib/rf/measured-response';
 import { InputError } from '$lib/schemas';
 import { TouchstoneError } from '$lib/formats/touchstone';
 import type { Actions, PageServerLoad } from './$types';
@@ -13,10 +13,9 @@ export const load: PageServerLoad = async ({ locals, params, url }) => {
 	const db = getDb();
 	const list = await measurements.listMeasurements(db, revision.id);
 	const chosenId = url.searchParams.get('m') ?? list[0]?.id;
-	const chosen = chosenId ? await measurements.findMeasurement(db, revision.id, chosenId) : null;
+	const chosen = chosenId ? await measurements.findMeasurementView(db, revision.id, chosenId) : null;
 	let selected = null;
 	if (chosen) {
-		const response = analyzeMeasuredResponse(chosen.samples);
 		let proposal = null;
 		let proposalError: string | null = null;
 		try {
@@ -25,11 +24,10 @@ export const load: PageServerLoad = async ({ locals, params, url }) => {
 			if (!(err instanceof InputError)) throw err;
 			proposalError = err.first.message;
 		}
-		const { samples: _samples, ...facts } = chosen;
-		void _samples;
+		const { trace, ...facts } = chosen;
 		selected = {
 			...facts,
-			points: response.points.map((p) => [p.frequencyHz, p.s11Db] as const),
+			points: trace,
 			proposal,
 			proposalError,
 			retunedInto: await measurements.listRetunedRevisions(db, chosen.id)
@@ -45,6 +43,7 @@ export const load: PageServerLoad = async ({ locals, params, url }) => {
 		retunedFrom: await measurements.findRetuneSource(db, revision.id),
 		canUpload: can(role, 'measurement.upload'),
 		canRetune: can(role, 'revision.create'),
+		canDelete: can(role, 'measurement.delete'),
 		maxBytes: measurements.MAX_TOUCHSTONE_BYTES
 	};
 };
@@ -69,7 +68,7 @@ export const actions: Actions = {
 	retune: async ({ locals, params, request }) => {
 		const { design, revision } = await measurements.requireRevision(locals.identity, params.designId, params.label, 'revision.create');
 		const form = await request.formData();
-		const measurement = await measurements.findMeasurement(getDb(), revision.id, String(form.get('measurementId') ?? ''));
+		const measurement = await measurements.findMeasurementView(getDb(), revision.id, String(form.get('measurementId') ?? ''));
 		if (!measurement) error(404, 'Measurement not found');
 		let label: string;
 		try {
@@ -79,5 +78,19 @@ export const actions: Actions = {
 			throw err;
 		}
 		redirect(303, `/designs/${design.id}/r/${label}/measurements`);
+	},
+	delete: async ({ locals, params, request }) => {
+		const { design, revision } = await measurements.requireRevision(locals.identity, params.designId, params.label, 'measurement.delete');
+		const form = await request.formData();
+		const measurementId = String(form.get('measurementId') ?? '');
+		// The confirm step: without it nothing is deleted and the page asks again.
+		if (form.get('confirm') !== 'yes') return fail(400, { remove: { measurementId, confirm: true, message: 'Delete this measurement? The file and its analysis are removed for the whole team, and the security log records who deleted it.' } });
+		try {
+			if (!(await measurements.deleteMeasurement(getDb(), { design, revision, measurementId, userId: locals.user!.id }))) error(404, 'Measurement not found');
+		} catch (err) {
+			if (err instanceof measurements.MeasurementInUseError) return fail(409, { remove: { measurementId, confirm: false, message: err.message } });
+			throw err;
+		}
+		redirect(303, `/designs/${design.id}/r/${revision.label}/measurements`);
 	}
 };

@@ -4,7 +4,7 @@
 import { json } from '@sveltejs/kit';
 import { apiHandler } from '$lib/server/api/api-handler';
 import { parseJsonBody, parseParams } from '$lib/server/api/parse-request';
-import { downloadResponse, exportForRequest, readBackSupportIdOf, refusalOf } from '$lib/server/exports';
+import { downloadResponse, exportForRequest, readBackSupportIdOf, refusalOf, refuseCrossSiteDownload } from '$lib/server/exports';
 import { exportParamsSchema, waiverBodySchema } from '$lib/schemas/api';
 import type { RequestHandler } from './$types';
 
@@ -21,6 +21,7 @@ async function answer(run: () => ReturnType<typeof exportForRequest>): Promise<R
 }
 
 export const GET: RequestHandler = apiHandler(async ({ event, identity }) => {
+	refuseCrossSiteDownload(event.request, identity);
 	const { designId, label, format } = parseParams(exportParamsSchema, event.params);
 	return answer(() => exportForRequest(identity, { designId, label, kind: format }, 'api'));
 });
