@@ -3,7 +3,18 @@
 import type { z } from 'zod';
 import type { SizedDesign } from '../../rf';
 import { designInputSchema, type DesignInput } from '../../schemas';
+import { replaceControlCharacters } from '../../schemas/plain-text';
 import { sizedDesignSchema } from '../../schemas/sized-design';
+
+/**
+ * The parse-time upgrade of what older rules let in: a design name stored before control characters were
+ * refused has them replaced as the writers already replace them, so the revision parses and exports as before.
+ */
+function upgradeStoredInput(raw: unknown): unknown {
+	if (!raw || typeof raw !== 'object' || Array.isArray(raw)) return raw;
+	const name = (raw as { name?: unknown }).name;
+	return typeof name === 'string' ? { ...raw, name: replaceControlCharacters(name) } : raw;
+}
 
 export class StoredRevisionError extends Error {
 	constructor(
@@ -18,7 +29,7 @@ export class StoredRevisionError extends Error {
 }
 
 export function parseStoredInput(raw: unknown, revision: { id: string; label: string }): DesignInput {
-	const parsed = designInputSchema.safeParse(raw);
+	const parsed = designInputSchema.safeParse(upgradeStoredInput(raw));
 	if (!parsed.success) throw new StoredRevisionError(revision.id, revision.label, 'input', parsed.error.issues[0]);
 	return parsed.data;
 }
@@ -28,8 +39,9 @@ export function parseStoredInput(raw: unknown, revision: { id: string; label: st
  * the rest as stored (a revision holds whatever its sizing engine wrote), so the value is the stored one.
  */
 export function parseStoredResults(raw: unknown, revision: { id: string; label: string }): SizedDesign {
-	const parsed = sizedDesignSchema.safeParse(raw);
+	const upgraded = raw && typeof raw === 'object' && 'input' in raw ? { ...raw, input: upgradeStoredInput(raw.input) } : raw;
+	const parsed = sizedDesignSchema.safeParse(upgraded);
 	if (!parsed.success) throw new StoredRevisionError(revision.id, revision.label, 'results', parsed.error.issues[0]);
-	// checked above; the stored object itself is returned so no field or value is re-shaped
-	return raw as SizedDesign;
+	// checked above; the stored object itself is returned (upgraded name aside) so no other field or value is re-shaped
+	return upgraded as SizedDesign;
 }

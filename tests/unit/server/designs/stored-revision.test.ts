@@ -26,4 +26,13 @@ describe('a stored revision', () => {
 		expect(() => parseStoredResults(broken, revision)).toThrow(/^Stored revision C \(3f1c2a9e-0000-4000-8000-000000000001\) no longer parses: results\.patch\.kind: /);
 		expect(() => parseStoredInput({ ...sized.input, frequencyHz: -1 }, revision)).toThrow(/no longer parses: input\.frequencyHz: /);
 	});
+
+	it('stored before control characters were refused parses with them replaced, as the writers replace them', () => {
+		const input = parseDesignInput(designDocument('rectangular', 'inset'));
+		const sized = stored(size(input));
+		const hostile = 'Pier\u0001sensor';
+		expect(() => parseDesignInput({ ...input, name: hostile })).toThrow();
+		expect(parseStoredInput({ ...stored(input), name: hostile }, revision).name).not.toContain('\u0001');
+		expect(parseStoredResults({ ...sized, input: { ...sized.input, name: hostile } }, revision).input.name).not.toContain('\u0001');
+	});
 });
