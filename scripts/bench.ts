@@ -26,16 +26,16 @@ function table(rows: BenchRow[]): string {
 /** What profiling (node --cpu-prof) found where targets are missed; kept beside the numbers. */
 const findings = `## Findings
 
-- **One bundle vs deflateRaw.** The floor compresses ~18 KB with zlib's C code (≈ 70 µs). Our bundle
-  also sizes, draws and writes eight files before zipping. A \`node --cpu-prof\` run of 400 bundles
-  (≈ 4 ms each) puts ≈ 20 % in pako's deflate inside jszip, ≈ 11 % in the pure SHA-256 of the manifest,
-  ≈ 3 % in polygon-clipping and ≈ 3 % in zod re-validating the one-point sweep; the SVG writer, once
-  ≈ 1.6 ms through svgdom, now writes text directly (byte-identical) and is ≈ 2 %. jszip (the zip
-  package we chose) deflates in JavaScript: on its own it is ≈ 12× zlib for these files, so the 2× target
-  is out of reach without replacing it; we keep it and note the miss.
-- **Downloads.** A revision is immutable, so the server keeps each delivery's bytes, hashes and gate
-  report in a bounded in-process cache (64 deliveries / 64 MB); every download still passes the gate and
-  writes its export record. Profiling the download route under autocannon also showed every API-token
+- **One bundle download vs deflateRaw.** The floor compresses ~18 KB with zlib's C code (≈ 70 µs). A download
+  also sizes, draws, checks, writes eight files, reads the Gerbers and drill back and zips. The "before" row
+  replays the old chain in the same run (the artwork drawn for the gate, the files, the read-back and the
+  one-point sweep; every file hashed by the hand-written SHA-256 for the manifest and again by node:crypto for
+  the record); the "after" row is the single pipeline (the artwork drawn once and handed along, each file hashed
+  once by Web Crypto). jszip deflates in JavaScript (≈ 12× zlib for these files), so the 2× target stays out of
+  reach without replacing it; we keep it and note the miss.
+- **Downloads.** A revision is immutable, so the server keeps each delivery's bytes and hashes in a bounded
+  in-process cache (64 deliveries / 64 MB); every download still prepares the revision once, passes the gate
+  and writes its export record. Profiling the download route under autocannon also showed every API-token
   request updating its token's "last used" time, so 50 connections queued on one row lock; it is now
   written at most once a minute.
 - **p99 under 50 connections.** One Node process serves all 50 connections, so a request waits behind
