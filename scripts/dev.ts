@@ -15,7 +15,7 @@ runMain(async () => {
 	const vite = spawn('npx', ['vite', 'dev', '--host', '127.0.0.1', '--port', String(config.appPort), '--strictPort'], {
 		cwd: rootDir,
 		stdio: 'inherit',
-		env: { ...process.env, ...mail, DATABASE_URL: databaseUrl, FRINGEFIELD_DEV_MAILBOX: '1' }
+		env: { ...process.env, ...mail, DATABASE_URL: databaseUrl, FRINGEFIELD_MODE: 'demo' }
 	});
 	await new Promise<void>((done) => vite.on('exit', () => done()));
 });

@@ -1,7 +1,10 @@
 // Every request: who is asking (session or API token) on locals, security headers on the answer;
 // a database that cannot be reached: 503 "try again shortly" (JSON under /api/v1), never a 500;
-// every unexpected error: logged with an id support can find.
-import { isHttpError, json, type Handle, type HandleServerError } from '@sveltejs/kit';
+// every unexpected error: logged with an id support can find. At start: the app's mode (demo or production),
+// decided once; a production server without what it needs stops with one line naming the setting.
+import { isHttpError, json, type Handle, type HandleServerError, type ServerInit } from '@sveltejs/kit';
+import { building } from '$app/environment';
+import { SettingError, startAppMode } from '$lib/server/app-mode';
 import { identify } from '$lib/server/auth/request-identity';
 import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from '$lib/server/db';
 import { refuseUnreadableForm, refuseUnstorableAddress, refuseUnstorableJson } from '$lib/server/http/form-body-guard';
@@ -30,6 +33,17 @@ function secure(response: Response): Response {
 	if (response.status === 503 && !response.headers.has('retry-after')) response.headers.set('retry-after', RETRY_AFTER_SECONDS);
 	return response;
 }
+
+export const init: ServerInit = () => {
+	if (building) return;
+	try {
+		startAppMode(process.env);
+	} catch (err) {
+		if (!(err instanceof SettingError)) throw err;
+		console.error(err.message);
+		process.exit(1);
+	}
+};
 
 export const handle: Handle = async ({ event, resolve }) => {
 	try {

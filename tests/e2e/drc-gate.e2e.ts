@@ -74,7 +74,7 @@ test('a violating design is marked, its download refused with the list, and a wa
 	expect(download.suggestedFilename()).toBe(`${slug}-B.zip`);
 	const zip = await JSZip.loadAsync(await readFile((await download.path())!));
 	const notes = await zip.file(`${slug}-B.fab-notes.txt`)!.async('string');
-	expect(notes).toContain(`against the "${profileName}" profile accepted by the design team. Reason: ${reason}`);
+	expect(notes).toContain(`against the "${profileName}" profile accepted by the design team. Reason: "${reason}"`);
 	expect(notes.match(/ - Waived: /g)?.length).toBe(body.violations.length);
 
 	// The export log marks the waived download and shows the reason when its row is opened.

@@ -43,7 +43,8 @@ export default defineConfig({
 			PORT: String(port),
 			ORIGIN: baseURL,
 			BODY_SIZE_LIMIT: '6M',
-			FRINGEFIELD_DEV_MAILBOX: '1'
+			// the demo mode (src/lib/server/app-mode.ts): the journeys read caught mail at /dev/mailbox.json
+			FRINGEFIELD_MODE: 'demo'
 		}
 	}
 });

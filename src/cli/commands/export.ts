@@ -14,15 +14,11 @@ import { checkReadBack, isFabFileName } from '../../lib/formats/readback';
 import type { SvgWindow } from '../../lib/formats/svg';
 import { GeometryError } from '../../lib/geometry';
 import { size } from '../../lib/rf';
-import { InputError, formatIssue, parseDesignInput } from '../../lib/schemas';
+import { InputError, formatIssue, parseDesignInput, WAIVER_MAX_CHARS, WAIVER_MIN_CHARS, waiverReasonSchema } from '../../lib/schemas';
 import { parseFabProfile, STANDARD_QUICK_TURN_PROFILE } from '../../lib/schemas/fab-profile';
 import { UsageError } from '../usage-error';
 
 export const summary = 'write Gerber, drill, DXF, SVG, sweep JSON and fab notes for a design, or one zip of them';
-
-/** Same bounds as a waiver recorded by the web app (src/lib/server/exports/waiver-reason.ts). */
-const WAIVER_MIN_CHARS = 5;
-const WAIVER_MAX_CHARS = 500;
 
 export const help = `Usage: npm run cli -- export design.json --out DIR|FILE.zip [--formats LIST] [--revision LABEL] [--date YYYY-MM-DD]
                             [--profile profile.json] [--waive "reason"]
@@ -98,13 +94,12 @@ export function readJson(path: string, what: string): unknown {
 	}
 }
 
+/** The same schema as a waiver recorded by the web app (src/lib/schemas/waiver-reason.ts). */
 function parseWaive(raw: string | null): string | null {
 	if (raw === null) return null;
-	const reason = raw.replace(/\s+/g, ' ').trim();
-	if (reason.length < WAIVER_MIN_CHARS || reason.length > WAIVER_MAX_CHARS) {
-		throw new InputError([{ path: '--waive', value: raw, message: `must say why, in ${WAIVER_MIN_CHARS}–${WAIVER_MAX_CHARS} characters; allowed range [${WAIVER_MIN_CHARS}, ${WAIVER_MAX_CHARS}] characters` }]);
-	}
-	return reason;
+	const result = waiverReasonSchema.safeParse(raw);
+	if (!result.success) throw new InputError([{ path: '--waive', value: raw, message: result.error.issues[0].message }]);
+	return result.data;
 }
 
 export async function run(argv: string[], deps: ExportCommandDependencies = {}): Promise<number> {

@@ -1,5 +1,6 @@
 // What every writer needs besides the artwork: names, revision label and date. Dates come from here, never from the clock.
 import { InputError } from '../schemas';
+import { replaceControlCharacters } from '../schemas/plain-text';
 
 export interface ExportMeta {
 	/** URL-safe design name: lowercase letters, digits and hyphens ("sunroof-gnss"). */
@@ -53,7 +54,8 @@ export function createExportMeta(opts: { designName: string; revisionLabel: stri
 	}
 	return {
 		designSlug: toDesignSlug(opts.designName),
-		designName: opts.designName,
+		// A name stored before control characters were refused must not break a file's syntax (see schemas/plain-text.ts).
+		designName: replaceControlCharacters(opts.designName),
 		revisionLabel: opts.revisionLabel,
 		revisionDate: opts.revisionDate,
 		softwareVersion: opts.softwareVersion ?? SOFTWARE_VERSION

@@ -1,14 +1,12 @@
 // Account and team forms: sign-up, sign-in, password reset, team name, invites, roles, API token names.
 import { z } from 'zod';
+import { plainText } from './plain-text';
 
 export const PASSWORD_MIN_LENGTH = 10;
 export const PASSWORD_MAX_LENGTH = 200;
 export const TEAM_NAME_MAX_LENGTH = 80;
 export const DISPLAY_NAME_MAX_LENGTH = 80;
 export const TOKEN_NAME_MAX_LENGTH = 60;
-
-/** Names end up in e-mail subjects and headers: no line breaks or other control characters. */
-const NO_CONTROL_CHARACTERS = /^[^\p{Cc}]*$/u;
 
 export const teamRoles = ['owner', 'editor', 'viewer'] as const;
 export const teamRoleSchema = z.enum(teamRoles, { message: 'role must be one of owner, editor, viewer' });
@@ -31,21 +29,21 @@ export const displayNameSchema = z
 	.trim()
 	.min(1, { message: 'name must be 1 to 80 characters' })
 	.max(DISPLAY_NAME_MAX_LENGTH, { message: 'name must be 1 to 80 characters' })
-	.regex(NO_CONTROL_CHARACTERS, { message: 'name must not contain line breaks or control characters' });
+	.superRefine(plainText('name')); // names end up in e-mail subjects and headers
 
 export const teamNameSchema = z
 	.string({ message: 'team name is required' })
 	.trim()
 	.min(1, { message: `team name must be 1 to ${TEAM_NAME_MAX_LENGTH} characters` })
 	.max(TEAM_NAME_MAX_LENGTH, { message: `team name must be 1 to ${TEAM_NAME_MAX_LENGTH} characters` })
-	.regex(NO_CONTROL_CHARACTERS, { message: 'team name must not contain line breaks or control characters' });
+	.superRefine(plainText('team name'));
 
 export const tokenNameSchema = z
 	.string({ message: 'token name is required' })
 	.trim()
 	.min(1, { message: `token name must be 1 to ${TOKEN_NAME_MAX_LENGTH} characters` })
 	.max(TOKEN_NAME_MAX_LENGTH, { message: `token name must be 1 to ${TOKEN_NAME_MAX_LENGTH} characters` })
-	.regex(NO_CONTROL_CHARACTERS, { message: 'token name must not contain line breaks or control characters' });
+	.superRefine(plainText('token name'));
 
 export const signUpSchema = z.object({ displayName: displayNameSchema, email: emailSchema, password: passwordSchema });
 export type SignUpInput = z.infer<typeof signUpSchema>;

@@ -1,6 +1,8 @@
 // zod schemas of the /api/v1 surface: path parameters, queries, bodies and answers. The OpenAPI document is generated from these.
 import { z } from 'zod';
-import { designInputSchema } from './design-input';
+import { designInputSchema, designNameSchema } from './design-input';
+import { revisionNoteSchema } from './revision-note';
+import { waiverReasonSchema } from './waiver-reason';
 
 /** The design-input document, named for the OpenAPI components. */
 export const designInputDocumentSchema = designInputSchema.meta({ id: 'DesignInput', description: 'The design-input document (see src/lib/schemas/design-input.ts)' });
@@ -45,7 +47,7 @@ export const sweepPlanParamsSchema = revisionParamsSchema.extend({ planId: idStr
 
 /** POST body of a download that goes out despite design-rule violations (editors and owners). */
 export const waiverBodySchema = z
-	.strictObject({ waiver: z.string({ error: 'required: why the violations are acceptable' }).meta({ description: 'Why the violations are acceptable; stored on the export record and printed in the fab notes' }) })
+	.strictObject({ waiver: z.string({ error: 'required: why the violations are acceptable' }).pipe(waiverReasonSchema).meta({ description: 'Why the violations are acceptable; stored on the export record and printed in the fab notes' }) })
 	.meta({ id: 'WaiverBody' });
 
 export const exportSortKeys = ['createdAt', 'design', 'revision', 'kind', 'via', 'user', 'sizeBytes'] as const;
@@ -66,10 +68,10 @@ export type ExportLogQuery = z.output<typeof exportLogQuerySchema>;
 
 export const createDesignBodySchema = z
 	.strictObject({
-		name: z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).optional().meta({ description: 'Design name (default: the input document’s name)', example: 'Roof GNSS L1' }),
+		name: designNameSchema.optional().meta({ description: 'Design name (default: the input document’s name)', example: 'Roof GNSS L1' }),
 		/** The design-input document of revision A. */
 		input: designInputDocumentSchema,
-		note: z.string().max(500, { error: 'at most 500 characters' }).optional()
+		note: revisionNoteSchema.optional()
 	})
 	.meta({ id: 'CreateDesign' });
 export type CreateDesignBody = z.output<typeof createDesignBodySchema>;
@@ -79,7 +81,7 @@ export const createRevisionBodySchema = z
 		parent: revisionLabelParam.meta({ description: 'Label of the revision this one starts from' }),
 		/** The complete design-input document of the new revision. */
 		input: designInputDocumentSchema,
-		note: z.string().max(500, { error: 'at most 500 characters' }).optional()
+		note: revisionNoteSchema.optional()
 	})
 	.meta({ id: 'CreateRevision' });
 export type CreateRevisionBody = z.output<typeof createRevisionBodySchema>;

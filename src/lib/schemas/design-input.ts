@@ -1,5 +1,6 @@
 // The design-input document: what a user types, what the API and the CLI take, what a revision stores.
 import { z } from 'zod';
+import { plainText } from './plain-text';
 
 /** Speed of light in vacuum, m/s (exact, SI definition). */
 const SPEED_OF_LIGHT_M_PER_S = 299_792_458;
@@ -175,9 +176,12 @@ export const arrayOptionsSchema = z.strictObject({
 
 const isPowerOfTwo = (n: number) => Number.isInteger(n) && n >= 1 && (n & (n - 1)) === 0;
 
+/** A design's name: shown in every file of its exports (titles, comments, the fab notes). */
+export const designNameSchema = z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).superRefine(plainText('name'));
+
 const designInputObject = z.strictObject({
 	schemaVersion: z.literal(1).default(1),
-	name: z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).default('Untitled patch'),
+	name: designNameSchema.default('Untitled patch'),
 	/** Target resonant frequency f0. */
 	frequencyHz: bounded(100e6, 100e9),
 	shape: z.enum(patchShapes).default('rectangular'),

@@ -1,6 +1,7 @@
 // A fab capability profile: the smallest features a board house promises to build, and its tolerances.
 import { z } from 'zod';
 import { parseWith } from './input-error';
+import { plainText } from './plain-text';
 
 /** A finite length in mm within [min, max]; the error message states the allowed range. */
 function lengthMm(min: number, max: number) {
@@ -19,7 +20,7 @@ function lengthMm(min: number, max: number) {
 export const fabProfileSchema = z
 	.strictObject({
 		/** Human name, shown in the check report and the fab notes. */
-		name: z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }),
+		name: z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).superRefine(plainText('name')),
 		/** Narrowest copper line (feed line, transformer section). */
 		minTraceWidthMm: lengthMm(0.01, 10),
 		/** Narrowest gap between two separate copper features on one layer; also drill barrel to plane. */

@@ -4,6 +4,9 @@ export * from './input-error';
 export * from './fab-profile';
 export * from './laminate';
 export * from './account';
+export * from './plain-text';
+export * from './revision-note';
+export * from './waiver-reason';
 import { designInputSchema, type DesignInput } from './design-input';
 import { parseWith } from './input-error';
 

@@ -1,6 +1,7 @@
 // A laminate in a team's library: the substrate values a design copies, validated like the design's own substrate.
 import { z } from 'zod';
 import { substrateSchema } from './design-input';
+import { plainText } from './plain-text';
 
 const s = substrateSchema.shape;
 
@@ -26,7 +27,7 @@ export const laminatePropertiesSchema = z.strictObject({
 
 /** What the "add laminate" form and the API take. */
 export const laminateInputSchema = z.strictObject({
-	name: z.string().trim().min(1, { error: 'must not be empty' }).max(80, { error: 'at most 80 characters' }),
+	name: z.string().trim().min(1, { error: 'must not be empty' }).max(80, { error: 'at most 80 characters' }).superRefine(plainText('name')),
 	properties: laminatePropertiesSchema
 });
 

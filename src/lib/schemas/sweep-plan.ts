@@ -1,6 +1,7 @@
 // The sweep-plan FORM: what an editor types (rows of text, display units) and its conversion to a sweep-plan
 // document. The document itself, its point count and its 10 000-point limit are formats/sweep/plan.ts: one schema per concept.
 import { z } from 'zod';
+import { plainText } from './plain-text';
 
 /** Rows the form offers (the document allows up to 6 axes; four cover every practical study). */
 export const SWEEP_FORM_AXES = 4;
@@ -54,7 +55,7 @@ export const sweepAxisDraftSchema = z.object({
 });
 
 export const sweepPlanDraftSchema = z.object({
-	name: z.string().trim().min(1, { error: 'give the plan a name' }).max(80, { error: 'at most 80 characters' }),
+	name: z.string().trim().min(1, { error: 'give the plan a name' }).max(80, { error: 'at most 80 characters' }).superRefine(plainText('name')),
 	combine: z.enum(['grid', 'zip']).default('grid'),
 	axes: z.array(sweepAxisDraftSchema).max(SWEEP_FORM_AXES)
 });

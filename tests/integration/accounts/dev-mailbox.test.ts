@@ -1,8 +1,9 @@
-// The dev mailbox: 404 unless FRINGEFIELD_DEV_MAILBOX=1; then the caught .eml files, parsed, newest first, filterable by recipient.
+// The dev mailbox: 404 unless the app runs in demo mode (src/lib/server/app-mode.ts); then the caught .eml files, parsed, newest first, filterable by recipient.
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startAppMode } from '../../../src/lib/server/app-mode';
 import * as mailboxJson from '../../../src/routes/dev/mailbox.json/+server';
 import * as mailboxPage from '../../../src/routes/dev/mailbox/+page.server';
 import { call } from './helpers/route-event';
@@ -21,18 +22,17 @@ beforeAll(() => {
 });
 afterAll(() => {
 	rmSync(dir, { recursive: true, force: true });
-	delete process.env.FRINGEFIELD_DEV_MAILBOX;
 });
 
 describe('the dev mailbox', () => {
-	it('does not exist unless FRINGEFIELD_DEV_MAILBOX=1', async () => {
-		delete process.env.FRINGEFIELD_DEV_MAILBOX;
+	it('does not exist in production mode, not even with the old FRINGEFIELD_DEV_MAILBOX=1', async () => {
+		startAppMode({ FRINGEFIELD_MODE: 'production', FRINGEFIELD_LOCAL_TRIAL: '1', FRINGEFIELD_DEV_MAILBOX: '1' });
 		expect((await call(mailboxPage.load as never, { identity: anonymous, path: '/dev/mailbox' })).outcome).toBe(404);
 		expect((await call(mailboxJson.GET as never, { identity: anonymous, path: '/dev/mailbox.json' })).outcome).toBe(404);
 	});
 
 	it('lists the caught messages newest first with their links, and filters by recipient', async () => {
-		process.env.FRINGEFIELD_DEV_MAILBOX = '1';
+		startAppMode({ FRINGEFIELD_MODE: 'demo' });
 		const page = await call(mailboxPage.load as never, { identity: anonymous, path: '/dev/mailbox' });
 		const messages = (page.data as { messages: { subject: string; to: string[]; links: string[]; date: string }[] }).messages;
 		expect(messages.map((m) => m.subject)).toEqual(['Second', 'First']);

@@ -122,7 +122,7 @@ describe('the design-rule gate', () => {
 		const rec = after.find((r) => r.id === res.headers.get('x-export-id'))!;
 		expect(rec).toMatchObject({ waiver: reason, via: 'ui', user_id: ws.people.editor.id, kind: 'bundle' });
 		const notes = await fabNotesOf(await res.arrayBuffer());
-		expect(notes).toContain(`DESIGN-RULE WAIVER: 2 design-rule violations against the "${STANDARD_QUICK_TURN_PROFILE.name}" profile accepted by the design team. Reason: ${reason}`);
+		expect(notes).toContain(`DESIGN-RULE WAIVER: 2 design-rule violations against the "${STANDARD_QUICK_TURN_PROFILE.name}" profile accepted by the design team. Reason: "${reason}"`);
 		expect(notes.match(/ - Waived: /g)?.length).toBe(2);
 	});
 
@@ -131,7 +131,7 @@ describe('the design-rule gate', () => {
 		expect(res.status).toBe(200);
 		const rec = (await recordsOf(wideTraceRule)).find((r) => r.id === res.headers.get('x-export-id'))!;
 		expect(rec).toMatchObject({ waiver: 'Coarse profile is only a drill', via: 'api', kind: 'notes' });
-		expect(await res.text()).toContain('Reason: Coarse profile is only a drill');
+		expect(await res.text()).toContain('Reason: "Coarse profile is only a drill');
 	});
 
 	it.each([

@@ -96,7 +96,7 @@ describe('cli export: the design-rule gate and the read-back self-check', () => 
 		expect(r.code).toBe(0);
 		expect(r.out).toMatch(/2 violation\(s\) waived/);
 		const notes = readFileSync(join(out, 'sunroof-gnss-C.fab-notes.txt'), 'utf8');
-		expect(notes).toContain(`   - DESIGN-RULE WAIVER: 2 design-rule violations against the "${STANDARD_QUICK_TURN_PROFILE.name}" profile accepted by the design team. Reason: Board house confirmed 0.15 mm gaps`);
+		expect(notes).toContain(`   - DESIGN-RULE WAIVER: 2 design-rule violations against the "${STANDARD_QUICK_TURN_PROFILE.name}" profile accepted by the design team. Reason: "Board house confirmed 0.15 mm gaps"`);
 		expect(notes.match(/^ {3}- Waived: /gm)).toHaveLength(2);
 	});
 

@@ -1,4 +1,5 @@
 // Excellon commands → text: metric, decimal coordinates with 3 places (1 µm), LF endings.
+import { replaceControlCharacters } from '../../schemas/plain-text';
 import type { ExcellonCommand } from './commands';
 
 /** Decimal places of drill coordinates: 1 µm, matching the METRIC,TZ,000.000 header and finer than drill machines position. */
@@ -8,7 +9,8 @@ const num = (v: number) => {
 	const s = v.toFixed(EXCELLON_DECIMAL_PLACES);
 	return s === `-${(0).toFixed(EXCELLON_DECIMAL_PLACES)}` ? s.slice(1) : s;
 };
-const clean = (t: string) => t.replace(/[\r\n,]/g, ' ');
+/** A comment stays one line: no comma (a field separator in attributes), no control character (a stored name may hold one). */
+const clean = (t: string) => replaceControlCharacters(t).replace(/,/g, ' ');
 const tool = (n: number) => `T${String(n).padStart(2, '0')}`;
 
 export function serializeExcellon(commands: readonly ExcellonCommand[]): string {

@@ -1,6 +1,9 @@
 // Fab notes: fills the plain-text template from templates/ with the artwork's stack, drills and cautions.
+// Text from users (design name, profile name, waiver reason) goes in on one line with control characters
+// removed, and quoted inside our own sentences, so it can never forge a line of the notes.
 import { fabNotesTemplate } from '../../../../templates/fab-notes';
 import type { Artwork } from '../../artwork';
+import { replaceControlCharacters, toOneLine } from '../../schemas/plain-text';
 import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
 
 /**
@@ -28,9 +31,17 @@ export interface FabNotesWaiver {
 	readonly violations: readonly string[];
 }
 
+/** User text inside one of our sentences: one line, in double quotes (a quote or backslash in it escaped as in JSON). */
+export function quoteUserText(text: string): string {
+	return JSON.stringify(toOneLine(text));
+}
+
 function waiverCautions(w: FabNotesWaiver): string[] {
 	const count = `${w.violations.length} design-rule violation${w.violations.length === 1 ? '' : 's'}`;
-	return [`DESIGN-RULE WAIVER: ${count} against the "${w.profileName}" profile accepted by the design team. Reason: ${w.reason.replace(/\s+/g, ' ').trim()}`, ...w.violations.map((v) => `Waived: ${v}`)];
+	return [
+		`DESIGN-RULE WAIVER: ${count} against the ${quoteUserText(w.profileName)} profile accepted by the design team. Reason: ${quoteUserText(w.reason)}`,
+		...w.violations.map((v) => `Waived: ${v}`)
+	];
 }
 
 const n = (v: number, digits = 3) => String(Number(v.toFixed(digits)));
@@ -91,7 +102,8 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 		.map((c) => `   - ${c}`)
 		.join('\n');
 	return fillTemplate(fabNotesTemplate, {
-		designName: meta.designName,
+		// the title line: control characters become spaces, nothing else changes (old revisions re-export byte for byte)
+		designName: replaceControlCharacters(meta.designName),
 		revisionLabel: meta.revisionLabel,
 		revisionDate: meta.revisionDate,
 		software: `${SOFTWARE_NAME} ${meta.softwareVersion}`,

@@ -1,5 +1,6 @@
 // Artwork → SVG element tree: layers as groups (y flipped once: svgY = boardLength − y), dimensions, title block.
 import type { Artwork, ArtworkDimension, ArtworkShape } from '../../artwork';
+import { replaceControlCharacters } from '../../schemas/plain-text';
 import { arcSweepRad, type Contour, type Point } from '../../geometry';
 import type { ExportMeta } from '../export-meta';
 import type { SvgDocument, SvgElement } from './commands';
@@ -21,8 +22,9 @@ export function svgNumber(v: number): string {
 	return String(n === 0 ? 0 : n);
 }
 
+/** Text content never holds a control character: most are not allowed in XML 1.0 at all (§2.2 Characters). */
 const el = (name: SvgElement['name'], attributes: Record<string, string>, children: SvgElement[] = [], text?: string): SvgElement =>
-	text === undefined ? { name, attributes, children } : { name, attributes, children, text };
+	text === undefined ? { name, attributes, children } : { name, attributes, children, text: replaceControlCharacters(text) };
 
 export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
 	const H = artwork.board.lengthMm;

@@ -3,6 +3,7 @@ import { buildArtwork, type Artwork, type StackLayer } from '../../artwork';
 import { GeometryError } from '../../geometry';
 import { size } from '../../rf';
 import { InputError, parseDesignInput } from '../../schemas';
+import { replaceControlCharacters } from '../../schemas/plain-text';
 import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
 import { SWEEP_FORMAT, SWEEP_FORMAT_VERSION, SWEEP_SCHEMA_PATH, type SweepDocument, type SweepPoint, type SweepProbeEntry } from './document';
 import { axisValues, parseSweepPlan, type SweepPlan } from './plan';
@@ -45,12 +46,22 @@ function withField(doc: unknown, path: string, value: number): unknown {
 }
 
 /**
+ * A revision stored before names with control characters were refused still sweeps: its name (a label,
+ * sized by nothing) has them replaced by spaces instead of failing the schema. New input is refused earlier.
+ */
+function withoutControlCharactersInName(raw: unknown): unknown {
+	if (!raw || typeof raw !== 'object' || Array.isArray(raw)) return raw;
+	const name = (raw as { name?: unknown }).name;
+	return typeof name === 'string' ? { ...raw, name: replaceControlCharacters(name) } : raw;
+}
+
+/**
  * Builds the sweep. Throws InputError for a bad base design or plan (including more than
  * MAX_SWEEP_POINTS points) before sizing anything; a point that sizing or geometry refuses is
  * recorded as refused, with the reason.
  */
 export function buildSweepDocument(baseRaw: unknown, planRaw: unknown, meta: ExportMeta): SweepDocument {
-	const base = parseDesignInput(baseRaw);
+	const base = parseDesignInput(withoutControlCharactersInName(baseRaw));
 	const plan = parseSweepPlan(planRaw);
 	const points: SweepPoint[] = sweepCombinations(plan).map((parameters, index) => {
 		let doc: unknown = base;

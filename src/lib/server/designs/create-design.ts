@@ -2,6 +2,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Kysely } from 'kysely';
 import { toDesignSlug } from '../../formats';
+import { parseRevisionNote } from '../../schemas';
 import type { Database } from '../db/database';
 import * as designQueries from '../db/design.queries';
 import { toDesign, type Design } from './design-model';
@@ -24,6 +25,7 @@ export interface CreatedDesign {
 /** Throws InputError for bad input (nothing written). */
 export async function createDesign(db: Kysely<Database>, opts: CreateDesignOptions): Promise<CreatedDesign> {
 	const { input, sized } = sizeInput(opts.raw);
+	const note = parseRevisionNote(opts.note);
 	const base = toDesignSlug(input.name);
 	// Two designs of one name made at once: the loser of the unique (team, slug) constraint tries the next number.
 	for (let attempt = 0; ; attempt++) {
@@ -43,7 +45,7 @@ export async function createDesign(db: Kysely<Database>, opts: CreateDesignOptio
 					parent_id: null,
 					input: JSON.stringify(input),
 					results: JSON.stringify(sized),
-					note: opts.note ?? '',
+					note,
 					created_by: opts.userId
 				});
 				const row = await designQueries.findDesignById(trx, id);

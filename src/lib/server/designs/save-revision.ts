@@ -2,7 +2,7 @@
 // so two editors saving from the same parent each get their own revision (a fork), never an overwrite.
 import { randomUUID } from 'node:crypto';
 import type { Kysely } from 'kysely';
-import { InputError } from '../../schemas';
+import { InputError, parseRevisionNote } from '../../schemas';
 import type { FabProfile } from '../../schemas/fab-profile';
 import type { Database } from '../db/database';
 import * as designQueries from '../db/design.queries';
@@ -32,8 +32,7 @@ export interface SavedRevision {
 /** Throws InputError for bad input or an unknown parent (nothing written). */
 export async function saveRevision(db: Kysely<Database>, opts: SaveRevisionOptions): Promise<SavedRevision> {
 	const { input, sized } = sizeInput(opts.raw);
-	const note = (opts.note ?? '').trim();
-	if (note.length > 500) throw new InputError([{ path: 'note', value: note, message: 'at most 500 characters' }]);
+	const note = parseRevisionNote(opts.note);
 	return db.transaction().execute(async (trx) => {
 		const design = await designQueries.lockDesignById(trx, opts.designId);
 		if (!design) throw new InputError([{ path: 'designId', value: opts.designId, message: 'no such design' }]);

@@ -1,7 +1,7 @@
 // The "new design" form: a name, a frequency, a shape and a laminate become a full first revision.
 import type { Kysely } from 'kysely';
 import { z } from 'zod';
-import { defaultFeedFor, patchShapes } from '../../schemas';
+import { defaultFeedFor, designNameSchema, patchShapes } from '../../schemas';
 import { InputError, parseWith } from '../../schemas/input-error';
 import { hzFromGhz } from '../../units';
 import type { Database } from '../db/database';
@@ -9,7 +9,7 @@ import { createDesign, type CreatedDesign } from './create-design';
 import { listLaminates } from './laminates';
 
 export const startDesignSchema = z.strictObject({
-	name: z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }),
+	name: designNameSchema,
 	frequencyGHz: z.coerce.number({ error: 'must be a number in GHz; allowed range [0.1, 100]' }).gte(0.1, { error: 'allowed range [0.1, 100] GHz' }).lte(100, { error: 'allowed range [0.1, 100] GHz' }),
 	shape: z.enum(patchShapes, { error: `one of: ${patchShapes.join(', ')}` }),
 	laminateId: z.string().min(1, { error: 'choose a laminate' })

@@ -1,20 +1,21 @@
-// Sending one templated message through SMTP (SMTP_HOST/SMTP_PORT; the local catcher by default).
+// Sending one templated message through SMTP (the SMTP_* settings, see mail-settings.ts; the local catcher by default).
 import nodemailer, { type Transporter } from 'nodemailer';
+import { mailSettingsFrom, type MailSettings } from './mail-settings';
 import { renderMailTemplate } from './render-template';
 import { mailTemplates, type MailTemplateName } from './templates';
 
-export const DEFAULT_MAIL_FROM = 'Fringefield <noreply@fringefield.test>';
+export { DEFAULT_MAIL_FROM } from './mail-settings';
 
 const transports = new Map<string, Transporter>();
 
-function transport(): Transporter {
-	const host = process.env.SMTP_HOST || '127.0.0.1';
-	const port = Number(process.env.SMTP_PORT || 2525);
-	const key = `${host}:${port}`;
+function transport(s: MailSettings): Transporter {
+	const key = `${s.host}:${s.port}:${s.tls}:${s.user ?? ''}`;
 	let t = transports.get(key);
 	if (!t) {
-		const auth = process.env.SMTP_USER ? { user: process.env.SMTP_USER, pass: process.env.SMTP_PASSWORD ?? '' } : undefined;
-		t = nodemailer.createTransport({ host, port, secure: port === 465, auth, connectionTimeout: 10_000, greetingTimeout: 10_000 });
+		const auth = s.user ? { user: s.user, pass: s.password ?? '' } : undefined;
+		// implicit: TLS from the start; starttls: refuse to send unless the server upgrades; none: never upgrade.
+		const tls = s.tls === 'implicit' ? { secure: true } : s.tls === 'starttls' ? { secure: false, requireTLS: true } : { secure: false, ignoreTLS: true };
+		t = nodemailer.createTransport({ host: s.host, port: s.port, ...tls, auth, connectionTimeout: 10_000, greetingTimeout: 10_000 });
 		transports.set(key, t);
 	}
 	return t;
@@ -28,7 +29,8 @@ export class MailDeliveryError extends Error {
 export async function sendMail(to: string, template: MailTemplateName, values: Record<string, string>): Promise<void> {
 	const { subject, text } = renderMailTemplate(mailTemplates[template], values);
 	try {
-		await transport().sendMail({ from: process.env.MAIL_FROM || DEFAULT_MAIL_FROM, to, subject, text });
+		const settings = mailSettingsFrom(process.env);
+		await transport(settings).sendMail({ from: settings.from, to, subject, text });
 	} catch (err) {
 		throw new MailDeliveryError(`could not send "${template}" mail: ${err instanceof Error ? err.message : String(err)}`);
 	}

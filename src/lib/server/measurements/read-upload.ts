@@ -1,5 +1,5 @@
 // An uploaded Touchstone file, checked before anything is stored: size, name, text content, then the strict reader.
-import { InputError } from '../../schemas';
+import { findControlCharacter, InputError } from '../../schemas';
 import { describeNetwork, portCountFromFileName, readTouchstone, s11FromNetwork, type S11Sample, type TracePoint } from '../../formats/touchstone';
 import { analyzeMeasuredResponse } from '../../rf/measured-response';
 import type { MeasurementSummary } from './measurement-model';
@@ -27,6 +27,8 @@ function refuse(path: string, value: unknown, message: string): never {
 export function readTouchstoneUpload(fileName: string, bytes: Uint8Array): ReadUpload {
 	const name = fileName.trim();
 	if (name === '' || name.length > MAX_FILE_NAME_CHARS) refuse('file', fileName, `choose a Touchstone file (.s1p, .s2p or .ts; a name of 1–${MAX_FILE_NAME_CHARS} characters)`);
+	const control = findControlCharacter(name);
+	if (control) refuse('file', name, `the file name must not contain control characters (found ${control})`);
 	const extension = (/\.[^.]+$/.exec(name)?.[0] ?? '').toLowerCase();
 	if (!(TOUCHSTONE_EXTENSIONS as readonly string[]).includes(extension)) {
 		refuse('file', name, `must be a Touchstone file named *.s1p, *.s2p or *.ts (got "${extension || 'no extension'}")`);

@@ -76,6 +76,8 @@ export async function startBuiltServer(opts: StartOptions): Promise<BuiltServer>
 			BODY_SIZE_LIMIT: '6M',
 			SMTP_HOST: process.env.SMTP_HOST ?? '127.0.0.1',
 			SMTP_PORT: process.env.SMTP_PORT ?? '2526',
+			// production mode on loopback: plain http and the test mail catcher (see src/lib/server/app-mode.ts)
+			FRINGEFIELD_LOCAL_TRIAL: '1',
 			...opts.env
 		}
 	});
