@@ -16,7 +16,7 @@ export const actions: Actions = {
 	create: async ({ request, locals, url, cookies }) => {
 		const user = requireSessionUser(locals, url);
 		const values = await formFields(request);
-		const { current } = await currentTeam(user.id, cookies);
+		const { current } = await currentTeam(locals.identity, cookies);
 		if (!current) return fail(400, { form: 'create', message: 'Make or join a team first: a token reaches exactly one team.', issues: {}, values } as FormProblem);
 		authorize(await roleInTeam(locals.identity, current.id), 'token.manage-own', 'Team not found');
 		try {
