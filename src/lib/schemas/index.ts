@@ -3,7 +3,9 @@ export * from './design-input';
 export * from './input-error';
 export * from './fab-profile';
 export * from './laminate';
-export * from './account';
+// Account schemas are imported from './account' by server code only (they carry the common-password list);
+// the browser gets the shared sizes and role names.
+export * from './account-limits';
 import { designInputSchema, type DesignInput } from './design-input';
 import { parseWith } from './input-error';
 

@@ -51,7 +51,7 @@ function userIdOf(who: Caller): string | null {
 async function withParent(opts: CallOptions): Promise<CallOptions> {
 	const user = opts.identity.user;
 	const jar = opts.cookies ?? cookieJar();
-	const layout = user ? await currentTeam(user.id, jar) : { current: null, teams: [] };
+	const layout = user ? await currentTeam(opts.identity, jar) : { current: null, teams: [] };
 	return { ...opts, cookies: jar, parent: async () => ({ user, team: layout.current, teams: layout.teams }) };
 }
 

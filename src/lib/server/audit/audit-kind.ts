@@ -1,5 +1,5 @@
 // The security events we record, and a sentence for each on the team's audit page.
-export const auditKinds = ['signin.failed', 'member.role-changed', 'member.removed', 'token.created', 'token.revoked', 'export.waived'] as const;
+export const auditKinds = ['signin.failed', 'member.role-changed', 'member.removed', 'token.created', 'token.revoked', 'export.waived', 'invite.sent', 'invite.revoked', 'invite.accepted'] as const;
 export type AuditKind = (typeof auditKinds)[number];
 
 export const auditKindLabel: Record<AuditKind, string> = {
@@ -8,5 +8,8 @@ export const auditKindLabel: Record<AuditKind, string> = {
 	'member.removed': 'Member removed',
 	'token.created': 'API token created',
 	'token.revoked': 'API token revoked',
-	'export.waived': 'Design-rule waiver on an export'
+	'export.waived': 'Design-rule waiver on an export',
+	'invite.sent': 'Invitation sent',
+	'invite.revoked': 'Invitation revoked',
+	'invite.accepted': 'Invitation accepted'
 };
