@@ -58,6 +58,11 @@ export interface Throttle {
 type Keyed = [LimiterName, string];
 
 const subject = (value: string) => createHash('sha256').update(value).digest('hex');
+
+/** The rate_limit row key of one limiter and subject (tests read and clear rows by it). */
+export function throttleKey(name: LimiterName, value: string): string {
+	return `${name}:${subject(name.includes('Email') ? value.trim().toLowerCase() : value)}`;
+}
 const emailKey = (email: string) => subject(email.trim().toLowerCase());
 
 /** Takes one point from every key; the wait is the longest among the keys that are used up. */

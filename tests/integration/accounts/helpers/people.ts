@@ -3,6 +3,7 @@ import { randomBytes } from 'node:crypto';
 import { signUp, createTeam, type AccountUser } from '../../../../src/lib/server/accounts';
 import { getDb } from '../../../../src/lib/server/db';
 import * as memberQueries from '../../../../src/lib/server/db/member.queries';
+import { throttleKey } from '../../../../src/lib/server/accounts/attempt-throttle';
 import * as verificationQueries from '../../../../src/lib/server/db/verification.queries';
 import type { TeamRole } from '../../../../src/lib/server/db/team.table';
 
@@ -44,4 +45,12 @@ export async function teamWithRoles(suffix: string): Promise<TeamFixture> {
 
 export async function addMember(teamId: string, userId: string, role: TeamRole): Promise<void> {
 	await memberQueries.insertMember(getDb(), teamId, userId, role);
+}
+
+/** Gives a team and its inviter a fresh hourly invitation allowance (for tests that send many invitations). */
+export async function forgetInviteAllowance(teamId: string, userId: string): Promise<void> {
+	await getDb()
+		.deleteFrom('rate_limit')
+		.where('key', 'in', [throttleKey('invitesPerPerson', userId), throttleKey('invitesPerTeam', teamId)])
+		.execute();
 }
