@@ -65,18 +65,20 @@ export function throttleKey(name: LimiterName, value: string): string {
 }
 const emailKey = (email: string) => subject(email.trim().toLowerCase());
 
-/** Takes one point from every key; the wait is the longest among the keys that are used up. */
+/**
+ * Takes one point from each key in order and stops at the first that is used up (its wait is returned):
+ * a person over their own allowance does not spend the team's or the address's.
+ */
 async function take(keys: Keyed[]): Promise<Throttle> {
-	let wait = 0;
 	for (const [name, key] of keys) {
 		try {
 			await limiter(name).consume(key);
 		} catch (err) {
 			if (!(err instanceof RateLimiterRes)) throw err;
-			wait = Math.max(wait, Math.max(1, Math.ceil(err.msBeforeNext / 1000)));
+			return { retryAfterSeconds: Math.max(1, Math.ceil(err.msBeforeNext / 1000)) };
 		}
 	}
-	return { retryAfterSeconds: wait };
+	return { retryAfterSeconds: 0 };
 }
 
 const signInKeys = (email: string, clientAddress: string): Keyed[] => [
