@@ -7,6 +7,8 @@
 // - reset mails: 5 per e-mail and 20 per client address an hour.
 // - invitations: 10 per person and 20 per team an hour.
 // - sign-up mails (the confirmation link, or "someone tried to sign up with your address"): 5 per e-mail an hour.
+// The per-address limits leave loopback addresses alone: behind a reverse proxy without ADDRESS_HEADER every
+// client looks like 127.0.0.1, and one shared count would let anyone lock everybody out.
 // The same rule applies to every e-mail, so being throttled reveals no account. Keys hold the sha256 of the
 // e-mail, address or id, never the value itself.
 import { createHash } from 'node:crypto';
@@ -81,9 +83,17 @@ async function take(keys: Keyed[]): Promise<Throttle> {
 	return { retryAfterSeconds: 0 };
 }
 
+/** 127.0.0.0/8 and ::1, also IPv4-mapped (RFC 5735 §3 and RFC 4291 §2.5.3, §2.5.5.2). */
+export function isLoopbackAddress(address: string): boolean {
+	const a = address.trim().toLowerCase().replace(/^::ffff:/, '');
+	return a === '::1' || /^127\.\d{1,3}\.\d{1,3}\.\d{1,3}$/.test(a);
+}
+
+const addressLimited = (clientAddress: string) => clientAddress !== '' && !isLoopbackAddress(clientAddress);
+
 const signInKeys = (email: string, clientAddress: string): Keyed[] => [
 	['signInPerEmail', emailKey(email)],
-	['signInPerAddress', subject(clientAddress)]
+	...(addressLimited(clientAddress) ? [['signInPerAddress', subject(clientAddress)] as Keyed] : [])
 ];
 
 /**
@@ -97,7 +107,7 @@ export async function takeSignInAttempt(email: string, clientAddress: string): P
 /** After a successful sign-in: the e-mail's failures are forgotten and the address gets its point back. */
 export async function settleSuccessfulSignIn(email: string, clientAddress: string): Promise<void> {
 	await limiter('signInPerEmail').delete(emailKey(email));
-	await limiter('signInPerAddress').reward(subject(clientAddress), 1);
+	if (addressLimited(clientAddress)) await limiter('signInPerAddress').reward(subject(clientAddress), 1);
 }
 
 /** Forgets an e-mail's sign-in attempts (a completed password reset proves the person holds the mailbox). */
@@ -111,7 +121,7 @@ export async function clearSignInFailures(email: string): Promise<void> {
  */
 export async function takeResetMailAllowance(email: string, clientAddress = ''): Promise<Throttle> {
 	const keys: Keyed[] = [['resetMailsPerEmail', emailKey(email)]];
-	if (clientAddress) keys.push(['resetRequestsPerAddress', subject(clientAddress)]);
+	if (addressLimited(clientAddress)) keys.push(['resetRequestsPerAddress', subject(clientAddress)]);
 	return take(keys);
 }
 
