@@ -4,6 +4,8 @@ import { expect, test } from '@playwright/test';
 import { inviteViewerJourney, latestMailTo } from './helpers/accounts';
 
 test('an invited person signs up from the e-mailed link and lands in the team as a viewer', async ({ browser }) => {
+	// Two sign-ups, each confirmed through the caught mail: longer than one page's worth of steps.
+	test.setTimeout(120_000);
 	const ownerContext = await browser.newContext();
 	const inviteeContext = await browser.newContext();
 	const ownerPage = await ownerContext.newPage();

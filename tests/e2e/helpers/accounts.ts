@@ -23,7 +23,8 @@ export function newPerson(label: string): E2ePerson {
  */
 export async function signUp(page: Page, who: E2ePerson, path = '/signup'): Promise<void> {
 	if (path) await page.goto(path);
-	const fromInvite = page.url().includes('invite=');
+	await expect(page.getByLabel('Your name')).toBeVisible();
+	const fromInvite = new URL(page.url()).searchParams.has('invite');
 	await page.getByLabel('Your name').fill(who.name);
 	await page.getByLabel('E-mail').fill(who.email);
 	await page.getByLabel('Password').fill(who.password);
