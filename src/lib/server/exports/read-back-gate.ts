@@ -3,7 +3,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Artwork } from '$lib/artwork';
 import type { ExportFile } from '$lib/formats';
-import { checkReadBack, isFabFileName, type ReadBackResult } from '$lib/formats/readback';
+import { checkReadBack, isFabFileName, type ReadBackMismatch, type ReadBackResult } from '$lib/formats/readback';
 import { ReadBackFailedError } from './export-refusal';
 
 /**
@@ -18,12 +18,15 @@ export function readBackFiles(delivered: readonly ExportFile[], companions: read
 	return [...fab, ...companions.filter((f) => isFabFileName(f.name) && !names.has(f.name))];
 }
 
+/** Logs the mismatches under a new support id and refuses the export (ReadBackFailedError: the caller sees only the id). */
+export function refuseReadBack(mismatches: readonly ReadBackMismatch[], context: Record<string, string>, logError: (line: string) => void = console.error): never {
+	const supportId = randomUUID();
+	logError(JSON.stringify({ event: 'export.read-back-mismatch', supportId, ...context, mismatches }));
+	throw new ReadBackFailedError(supportId, mismatches);
+}
+
 export function assertReadBack(artwork: Artwork, files: readonly ExportFile[], context: Record<string, string>, logError: (line: string) => void = console.error): ReadBackResult {
 	const result = checkReadBack(artwork, files);
-	if (!result.ok) {
-		const supportId = randomUUID();
-		logError(JSON.stringify({ event: 'export.read-back-mismatch', supportId, ...context, mismatches: result.mismatches }));
-		throw new ReadBackFailedError(supportId, result.mismatches);
-	}
+	if (!result.ok) refuseReadBack(result.mismatches, context, logError);
 	return result;
 }
