@@ -9,8 +9,9 @@ export function workBudgetMs(): number {
 	return Number.isFinite(raw) && raw > 0 ? raw : DEFAULT_WORK_BUDGET_MS;
 }
 
-/** Human form of a budget: "120 s", "0.5 s". */
+/** Human form of a budget: "120 s", "2.5 s", "50 ms". */
 export function formatBudget(ms: number): string {
+	if (ms < 1000) return `${Math.round(ms)} ms`;
 	return `${ms >= 10_000 ? Math.round(ms / 1000) : Math.round(ms / 100) / 10} s`;
 }
 
