@@ -54,7 +54,7 @@ export function sweepFileFor(design: Design, revision: Revision, plan: SavedSwee
 	let pending = building.get(key);
 	if (!pending) {
 		builds++;
-		pending = runBudgetedWork({ type: 'sweep', job: { input: revision.input, plan: plan.plan, meta, fileName, bodyPath, factsPath } }, { what: `The sweep file of plan "${plan.name}"` })
+		pending = runBudgetedWork({ type: 'sweep', job: { input: revision.input, plan: plan.plan, meta, fileName, bodyPath, factsPath } }, { what: `The sweep file of plan "${plan.name}"`, retireThread: true })
 			.then((result) => ({ ...result.facts, path: bodyPath }))
 			.finally(() => building.delete(key));
 		building.set(key, pending);

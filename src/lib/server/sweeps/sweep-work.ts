@@ -41,8 +41,9 @@ export function writeFileAtomically(path: string, bytes: Uint8Array | string): v
 
 export function writeSweepFile(job: SweepBuildInput): SweepFileFacts {
 	const doc = buildSweepDocument(job.input, job.plan, job.meta);
-	const body = new TextEncoder().encode(serializeSweep(doc));
-	const facts: SweepFileFacts = { fileName: job.fileName, sizeBytes: body.byteLength, sha256: sha256Hex(body), pointCount: doc.pointCount };
+	// the text is written and hashed as UTF-8 directly: no second 44 MB copy as bytes
+	const body = serializeSweep(doc);
+	const facts: SweepFileFacts = { fileName: job.fileName, sizeBytes: Buffer.byteLength(body, 'utf8'), sha256: sha256Hex(body), pointCount: doc.pointCount };
 	// the body first: facts on disk always describe a complete body
 	writeFileAtomically(job.bodyPath, body);
 	writeFileAtomically(job.factsPath, JSON.stringify(facts));

@@ -5,7 +5,7 @@ import { WorkBudgetExceededError } from './work-budget';
 import { runWork } from './work-pool';
 import type { WorkResult, WorkTask } from './work-task';
 
-export async function runBudgetedWork<T extends WorkTask['type']>(task: Extract<WorkTask, { type: T }>, opts: { what: string; budgetMs?: number }): Promise<Extract<WorkResult, { type: T }>> {
+export async function runBudgetedWork<T extends WorkTask['type']>(task: Extract<WorkTask, { type: T }>, opts: { what: string; budgetMs?: number; retireThread?: boolean }): Promise<Extract<WorkResult, { type: T }>> {
 	let result: WorkResult;
 	try {
 		result = await runWork(task, opts);

@@ -11,6 +11,8 @@ interface Job {
 	readonly task: WorkTask;
 	readonly what: string;
 	readonly budgetMs: number;
+	/** End the thread when the job is done (its heap is large: give the memory back at once). */
+	readonly retire: boolean;
 	readonly resolve: (value: WorkResult) => void;
 	readonly reject: (reason: unknown) => void;
 	timer: ReturnType<typeof setTimeout> | null;
@@ -75,6 +77,7 @@ async function spawn(): Promise<Thread> {
 		const job = thread.job;
 		if (!job || job.id !== msg.id) return;
 		finish(thread, job);
+		if (job.retire) retire(thread);
 		if (msg.ok) job.resolve(msg.result!);
 		else job.reject(Object.assign(new Error(msg.error?.message ?? 'work failed'), { name: msg.error?.name ?? 'Error' }));
 		pump();
@@ -107,6 +110,14 @@ function finish(thread: Thread, job: Job): void {
 		void thread.worker.terminate();
 	}, IDLE_MS);
 	thread.idleTimer.unref();
+}
+
+function retire(thread: Thread): void {
+	if (thread.idleTimer) clearTimeout(thread.idleTimer);
+	thread.idleTimer = null;
+	const i = threads.indexOf(thread);
+	if (i >= 0) threads.splice(i, 1);
+	void thread.worker.terminate();
 }
 
 let spawning = 0;
@@ -149,10 +160,10 @@ function pump(): void {
  * when it runs out the job is dropped from the queue, or its thread is ended, and the promise rejects with
  * WorkBudgetExceededError naming `what` and the budget.
  */
-export function runWork(task: WorkTask, opts: { what: string; budgetMs?: number }): Promise<WorkResult> {
+export function runWork(task: WorkTask, opts: { what: string; budgetMs?: number; retireThread?: boolean }): Promise<WorkResult> {
 	const budgetMs = opts.budgetMs ?? workBudgetMs();
 	return new Promise<WorkResult>((resolve, reject) => {
-		const job: Job = { id: nextId++, task, what: opts.what, budgetMs, resolve, reject, timer: null, thread: null };
+		const job: Job = { id: nextId++, task, what: opts.what, budgetMs, retire: opts.retireThread ?? false, resolve, reject, timer: null, thread: null };
 		job.timer = setTimeout(() => {
 			job.timer = null;
 			const waiting = queue.indexOf(job);
@@ -161,9 +172,7 @@ export function runWork(task: WorkTask, opts: { what: string; budgetMs?: number 
 			if (thread) {
 				// ending the thread is the only way to stop synchronous work; a fresh one is started on demand
 				thread.job = null;
-				const i = threads.indexOf(thread);
-				if (i >= 0) threads.splice(i, 1);
-				void thread.worker.terminate();
+				retire(thread);
 			}
 			reject(new WorkBudgetExceededError(opts.what, budgetMs));
 			pump();
