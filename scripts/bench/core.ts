@@ -122,7 +122,7 @@ async function medianMs(fn: () => unknown | Promise<unknown>, runs: number): Pro
  * Issue 13, item 1: the design-rule check of the largest array (64 × 64) and each step of an array's download
  * at 8 × 8 and 32 × 32 (16× the elements): near-linear steps grow by about 16×, within 20×.
  */
-async function arrayDownloadRows(svgWindow: unknown): Promise<BenchRow[]> {
+export async function arrayDownloadRows(svgWindow: unknown): Promise<BenchRow[]> {
 	const rows: BenchRow[] = [];
 	const P = STANDARD_QUICK_TURN_PROFILE;
 	const meta = createExportMeta({ designName: 'Bench array', revisionLabel: 'A', revisionDate: '2026-12-02' });
