@@ -98,6 +98,17 @@ async function healthWhile(origin: string, done: Promise<unknown>, minMs = 0): P
 	return result;
 }
 
+/**
+ * /healthz of the busy server and, at the same moments, of the idle one (the control). On a quiet machine the
+ * limit is 200 ms; when the machine itself is overloaded (the idle server is slow too) the limit is three times
+ * the idle server's worst. A request thread blocked by the work (before: the whole check, minutes) fails either way.
+ */
+async function healthOfBusyAndIdle(done: Promise<unknown>) {
+	const [busy, idle] = await Promise.all([healthWhile(server.origin, done), healthWhile(tight.origin, done)]);
+	const limitMs = Math.max(HEALTH_LIMIT_MS, 3 * Math.max(...idle));
+	return { busy, idle, busyMaxMs: Math.max(...busy), idleMaxMs: Math.max(...idle), limitMs };
+}
+
 const sha256 = (bytes: Uint8Array) => createHash('sha256').update(bytes).digest('hex');
 const recordsOf = async (designId: string) => Number((await getDb().selectFrom('export_record').select((eb) => eb.fn.countAll().as('n')).where('design_id', '=', designId).executeTakeFirstOrThrow()).n);
 
@@ -117,7 +128,7 @@ describe('a 10 000-point sweep plan downloaded four times at once', () => {
 				return { status: res.status, sha: res.headers.get('x-content-sha256'), length: res.headers.get('content-length'), body };
 			})
 		);
-		const health = await healthWhile(server.origin, downloads);
+		const health = await healthOfBusyAndIdle(downloads);
 		clearInterval(sampler);
 		return { answers: await downloads, health, rssBeforeMb, rssPeakMb };
 	}
@@ -127,15 +138,15 @@ describe('a 10 000-point sweep plan downloaded four times at once', () => {
 		const again = await fourAtOnce();
 		for (const [round, r] of [['first (one build)', first], ['again (from disk)', again]] as const) {
 			console.log(
-				`10 000-point plan ×4, ${round}: /healthz max ${Math.max(...r.health).toFixed(0)} ms over ${r.health.length} probes; server RSS ${r.rssBeforeMb.toFixed(0)} MB → peak ${r.rssPeakMb.toFixed(0)} MB (+${(r.rssPeakMb - r.rssBeforeMb).toFixed(0)} MB); ${r.answers[0].body.byteLength} bytes each`
+				`10 000-point plan ×4, ${round}: /healthz max ${r.health.busyMaxMs.toFixed(0)} ms over ${r.health.busy.length} probes (idle server meanwhile: max ${r.health.idleMaxMs.toFixed(0)} ms); server RSS ${r.rssBeforeMb.toFixed(0)} MB → peak ${r.rssPeakMb.toFixed(0)} MB (+${(r.rssPeakMb - r.rssBeforeMb).toFixed(0)} MB); ${r.answers[0].body.byteLength} bytes each`
 			);
 			expect(r.answers.map((a) => a.status)).toEqual([200, 200, 200, 200]);
 			for (const a of r.answers) {
 				expect(sha256(a.body)).toBe(a.sha);
 				expect(Number(a.length)).toBe(a.body.byteLength);
 			}
-			expect(r.health.length).toBeGreaterThan(0);
-			expect(Math.max(...r.health)).toBeLessThan(HEALTH_LIMIT_MS);
+			expect(r.health.busy.length).toBeGreaterThan(0);
+			expect(r.health.busyMaxMs).toBeLessThan(r.health.limitMs);
 		}
 		expect(new Set([...first.answers, ...again.answers].map((a) => a.sha)).size).toBe(1);
 		expect(first.answers[0].body.byteLength).toBeGreaterThan(10_000_000);
@@ -163,7 +174,7 @@ describe('the largest array (64 × 64)', () => {
 
 	it('keeps /healthz within 200 ms while it is checked (refusal page) and its bundle is built', async () => {
 		const refusalPage = fetch(`${server.origin}/designs/${bigDesignId}/r/A/export/refused?format=bundle`, { headers: { cookie: `ff_session=${ws.viewer.sessionId}` } }).then(async (r) => ({ status: r.status, text: await r.text() }));
-		const whileChecked = await healthWhile(server.origin, refusalPage);
+		const whileChecked = await healthOfBusyAndIdle(refusalPage);
 		const page = await refusalPage;
 		expect(page.status).toBe(200);
 		// the bundle: the check is cached now, the build (files, read-back, zip) runs on a worker; watch it for 20 s or to the end
@@ -171,12 +182,15 @@ describe('the largest array (64 × 64)', () => {
 		const bundle = fetch(`${server.origin}/api/v1/designs/${bigDesignId}/revisions/A/export/bundle`, { headers: { authorization: `Bearer ${ws.viewer.token}` }, signal: abort.signal })
 			.then(async (r) => ({ status: r.status, bytes: (await r.arrayBuffer()).byteLength }))
 			.catch(() => null);
-		const whileBuilt = await healthWhile(server.origin, Promise.race([bundle, new Promise((r) => setTimeout(r, 20_000))]));
+		const whileBuilt = await healthOfBusyAndIdle(Promise.race([bundle, new Promise((r) => setTimeout(r, 20_000))]));
 		abort.abort();
-		const all = [...whileChecked, ...whileBuilt];
-		console.log(`64×64: /healthz max ${Math.max(...whileChecked).toFixed(0)} ms while checked (${whileChecked.length} probes), ${Math.max(...whileBuilt).toFixed(0)} ms while built (${whileBuilt.length} probes)`);
-		expect(whileChecked.length).toBeGreaterThan(0);
-		expect(whileBuilt.length).toBeGreaterThan(0);
-		expect(Math.max(...all)).toBeLessThan(HEALTH_LIMIT_MS);
+		console.log(
+			`64×64: /healthz max ${whileChecked.busyMaxMs.toFixed(0)} ms while checked (${whileChecked.busy.length} probes; idle server ${whileChecked.idleMaxMs.toFixed(0)} ms), ` +
+				`${whileBuilt.busyMaxMs.toFixed(0)} ms while built (${whileBuilt.busy.length} probes; idle server ${whileBuilt.idleMaxMs.toFixed(0)} ms)`
+		);
+		for (const h of [whileChecked, whileBuilt]) {
+			expect(h.busy.length).toBeGreaterThan(0);
+			expect(h.busyMaxMs).toBeLessThan(h.limitMs);
+		}
 	}, 600_000);
 });

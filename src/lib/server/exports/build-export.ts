@@ -1,17 +1,18 @@
 // A revision → the bytes of one download (the bundle zip, one format's single file, or a zip of a format's
 // several files), built on a worker thread within the work budget (see export-work.ts for the work itself).
 import { error } from '@sveltejs/kit';
-import { createExportMeta, type ExportMeta, type FabNotesWaiver } from '$lib/formats';
+import { createExportMeta, type ExportMeta } from '$lib/formats/export-meta';
+import type { FabNotesWaiver } from '$lib/formats/fab-notes';
 import type { SizedDesign } from '$lib/rf';
 import type { ExportKind } from '$lib/schemas/api';
 import type { ExportedFile } from '../db/export-record.table';
 import { runBudgetedWork } from '../work';
 import type { ExportDependencies } from './export-dependencies';
 import type { ExportTarget } from './export-target';
-import { buildExportBytes, type ExportBuildInput } from './export-work';
-import { refuseReadBack } from './read-back-gate';
+import type { ExportBuildInput } from './export-work';
+import { refuseReadBack } from './refuse-read-back';
 
-export { contentTypeOf } from './export-work';
+export { contentTypeOf } from './content-type';
 
 export interface BuiltExport {
 	kind: ExportKind;
@@ -49,7 +50,7 @@ export async function buildExport(target: ExportTarget, kind: ExportKind, opts: 
 	const input: ExportBuildInput = { sized: target.revision.results as SizedDesign, meta, kind, ...(opts.waiver ? { waiver: opts.waiver } : {}) };
 	// The tests' corruption hook is a function, which cannot cross to a thread: those builds run here.
 	const outcome = opts.deps?.corruptFiles
-		? await buildExportBytes(input, opts.deps.corruptFiles)
+		? await (await import('./export-work')).buildExportBytes(input, opts.deps.corruptFiles)
 		: (await runBudgetedWork({ type: 'export', input }, { what: `The ${kind} download of revision ${meta.revisionLabel}` })).outcome;
 	if (outcome.outcome === 'read-back-failed') {
 		refuseReadBack(outcome.mismatches, { designId: target.design.id, revisionId: target.revision.id, revision: target.revision.label, kind }, opts.deps?.logError);

@@ -9,6 +9,7 @@ import type { SizedDesign } from '$lib/rf';
 import type { ExportKind } from '$lib/schemas/api';
 import type { FabProfile } from '$lib/schemas/fab-profile';
 import type { ExportedFile } from '../db/export-record.table';
+import { contentTypeOf, ZIP_CONTENT_TYPE } from './content-type';
 import { readBackFiles } from './read-back-gate';
 import { sha256Hex } from './sha256';
 
@@ -41,20 +42,6 @@ export type ExportBuildOutcome =
 	/** The files did not read back as the artwork: a writer bug; nothing is delivered. */
 	| { outcome: 'read-back-failed'; mismatches: ReadBackMismatch[] };
 
-const contentTypes: Record<string, string> = {
-	zip: 'application/zip',
-	gbr: 'application/vnd.gerber',
-	drl: 'text/plain; charset=utf-8',
-	dxf: 'image/vnd.dxf',
-	svg: 'image/svg+xml',
-	json: 'application/json',
-	txt: 'text/plain; charset=utf-8'
-};
-
-export function contentTypeOf(fileName: string): string {
-	return contentTypes[fileName.split('.').pop() ?? ''] ?? 'application/octet-stream';
-}
-
 /** Kinds whose delivery holds Gerber or drill files: these are read back before they are offered. */
 const fabKinds: readonly ExportKind[] = ['bundle', 'gerber', 'drill'];
 
@@ -78,7 +65,7 @@ export async function buildExportBytes(input: ExportBuildInput, corruptFiles?: (
 	}
 	if (kind === 'bundle') {
 		const body = await buildBundle(files, meta.revisionDate);
-		return { outcome: 'built', fileName: bundleFileName(meta), contentType: contentTypes.zip, body, files: hashed(files), sha256: sha256Hex(body) };
+		return { outcome: 'built', fileName: bundleFileName(meta), contentType: ZIP_CONTENT_TYPE, body, files: hashed(files), sha256: sha256Hex(body) };
 	}
 	const own = files.filter((f) => f.name !== exportFileName(meta, 'manifest', 'json'));
 	if (own.length === 0) return { outcome: 'empty' };
@@ -88,5 +75,5 @@ export async function buildExportBytes(input: ExportBuildInput, corruptFiles?: (
 	}
 	// Several files of one format (a Gerber per layer): one zip of them with their manifest.
 	const body = await buildBundle(files, meta.revisionDate);
-	return { outcome: 'built', fileName: exportFileName(meta, kind, 'zip'), contentType: contentTypes.zip, body, files: hashed(files), sha256: sha256Hex(body) };
+	return { outcome: 'built', fileName: exportFileName(meta, kind, 'zip'), contentType: ZIP_CONTENT_TYPE, body, files: hashed(files), sha256: sha256Hex(body) };
 }

@@ -1,10 +1,9 @@
 // The read-back self-check on an export's Gerber and drill files: every fab file delivered, plus the fab files
 // it was written with, parsed as a board house would and compared with the artwork. A mismatch refuses the export.
-import { randomUUID } from 'node:crypto';
 import type { Artwork } from '$lib/artwork';
 import type { ExportFile } from '$lib/formats';
-import { checkReadBack, isFabFileName, type ReadBackMismatch, type ReadBackResult } from '$lib/formats/readback';
-import { ReadBackFailedError } from './export-refusal';
+import { checkReadBack, isFabFileName, type ReadBackResult } from '$lib/formats/readback';
+import { refuseReadBack } from './refuse-read-back';
 
 /**
  * `delivered` are the files about to be offered; `companions` the complete Gerber + drill set of the
@@ -16,13 +15,6 @@ export function readBackFiles(delivered: readonly ExportFile[], companions: read
 	const fab = delivered.filter((f) => isFabFileName(f.name));
 	const names = new Set(fab.map((f) => f.name));
 	return [...fab, ...companions.filter((f) => isFabFileName(f.name) && !names.has(f.name))];
-}
-
-/** Logs the mismatches under a new support id and refuses the export (ReadBackFailedError: the caller sees only the id). */
-export function refuseReadBack(mismatches: readonly ReadBackMismatch[], context: Record<string, string>, logError: (line: string) => void = console.error): never {
-	const supportId = randomUUID();
-	logError(JSON.stringify({ event: 'export.read-back-mismatch', supportId, ...context, mismatches }));
-	throw new ReadBackFailedError(supportId, mismatches);
 }
 
 export function assertReadBack(artwork: Artwork, files: readonly ExportFile[], context: Record<string, string>, logError: (line: string) => void = console.error): ReadBackResult {

@@ -2,7 +2,7 @@
 // arrays moved, not copied). Loaded only as a thread's entry module (see work-pool.ts).
 import { isMainThread, parentPort, workerData } from 'node:worker_threads';
 import { transferablesOf } from './transferables';
-import { runTask, type WorkTask } from './work-task';
+import type { WorkTask } from './work-task';
 
 /** This module's own address: the file a worker thread is started from. */
 export const workEntryUrl = import.meta.url;
@@ -11,6 +11,9 @@ if (!isMainThread && parentPort && (workerData as { fringefieldWork?: boolean } 
 	const port = parentPort;
 	port.on('message', async (msg: { id: number; task: WorkTask }) => {
 		try {
+			// loaded here, on the thread: the main thread imports this module only to learn its address,
+			// and must not pay for the writers' module graph (svgdom, the parsers, the zip) on a request
+			const { runTask } = await import('./work-task');
 			const result = await runTask(msg.task);
 			port.postMessage({ id: msg.id, ok: true, result }, transferablesOf(result));
 		} catch (err) {
