@@ -2,8 +2,11 @@
 import { deflateRawSync } from 'node:zlib';
 import { createSVGWindow } from 'svgdom';
 import { Bench } from 'tinybench';
-import { buildArtwork } from '../../src/lib/artwork';
-import { buildArrayBenchFiles, buildBundle, buildFiles, buildSweepDocument, createExportMeta, serializeSweep, toSvg } from '../../src/lib/formats';
+import { buildArtwork, type Artwork } from '../../src/lib/artwork';
+import { checkArtwork } from '../../src/lib/drc';
+import { arrayBenchDocument, buildArrayBenchFiles, buildBundle, buildFiles, buildSweepDocument, createExportMeta, serializeSweep, toSvg } from '../../src/lib/formats';
+import { checkReadBack, isFabFileName } from '../../src/lib/formats/readback';
+import { STANDARD_QUICK_TURN_PROFILE } from '../../src/lib/schemas/fab-profile';
 import { parseDesignInput } from '../../src/lib/schemas';
 import { size } from '../../src/lib/rf';
 
@@ -97,5 +100,53 @@ export async function coreRows(): Promise<BenchRow[]> {
 	// Arrays (issue 10): Gerber + drill + DXF + SVG of an 8×8 and a 32×32 array; 16× the elements.
 	const arrays = await medianUs({ a8: () => buildArrayBenchFiles(8, { svgWindow }), a32: () => buildArrayBenchFiles(32, { svgWindow }) }, 4000);
 	rows.push({ work: '32×32 array files (Gerber, drill, DXF, SVG)', ours: arrays.a32 / 1000, floor: arrays.a8 / 1000, unit: 'ms', floorName: '8×8 array files', ratio: arrays.a32 / arrays.a8, target: '< 1000 ms; ≈ 16× growth', pass: arrays.a32 / 1000 < 1000 && arrays.a32 / arrays.a8 <= 20 });
+	rows.push(...(await arrayDownloadRows(svgWindow)));
+	return rows;
+}
+
+/** A fresh copy of the artwork's layers: the design-rule check keeps its copper grouping per layer object, so a repeat on the same object would be a cache hit. */
+const freshLayers = (artwork: Artwork): Artwork => ({ ...artwork, layers: artwork.layers.map((l) => ({ ...l })) });
+
+/** Median of `runs` timings of fn, in ms (for work too slow for tinybench's many samples). */
+async function medianMs(fn: () => unknown | Promise<unknown>, runs: number): Promise<number> {
+	const times: number[] = [];
+	for (let i = 0; i < runs; i++) {
+		const t0 = performance.now();
+		await fn();
+		times.push(performance.now() - t0);
+	}
+	return times.sort((a, b) => a - b)[Math.floor(times.length / 2)];
+}
+
+/**
+ * Issue 13, item 1: the design-rule check of the largest array (64 × 64) and each step of an array's download
+ * at 8 × 8 and 32 × 32 (16× the elements): near-linear steps grow by about 16×, within 20×.
+ */
+export async function arrayDownloadRows(svgWindow: unknown): Promise<BenchRow[]> {
+	const rows: BenchRow[] = [];
+	const P = STANDARD_QUICK_TURN_PROFILE;
+	const meta = createExportMeta({ designName: 'Bench array', revisionLabel: 'A', revisionDate: '2026-12-02' });
+	const art = (side: number) => buildArtwork(size(arrayBenchDocument(side)));
+	const a8 = art(8), a32 = art(32), a64 = art(64);
+	const check8 = await medianMs(() => checkArtwork(freshLayers(a8), P), 5);
+	const check64 = await medianMs(() => checkArtwork(freshLayers(a64), P), 3);
+	rows.push({ work: '64×64 array design-rule check (28 732 copper shapes)', ours: check64, floor: check8, unit: 'ms', floorName: '8×8 array check', ratio: check64 / check8, target: '< 1000 ms', pass: check64 < 1000 });
+	type Step = { name: string; run: (side: number) => unknown | Promise<unknown> };
+	const sized = { 8: size(arrayBenchDocument(8)), 32: size(arrayBenchDocument(32)) } as const;
+	const files = { 8: buildFiles(sized[8], meta, undefined, { svgWindow: svgWindow as never }), 32: buildFiles(sized[32], meta, undefined, { svgWindow: svgWindow as never }) } as const;
+	const artworks = { 8: a8, 32: a32 } as const;
+	const steps: Step[] = [
+		{ name: 'artwork build', run: (side) => buildArtwork(sized[side as 8 | 32]) },
+		{ name: 'design-rule check', run: (side) => checkArtwork(freshLayers(artworks[side as 8 | 32]), P) },
+		{ name: 'all files written', run: (side) => buildFiles(sized[side as 8 | 32], meta, undefined, { svgWindow: svgWindow as never }) },
+		{ name: 'read-back self-check (@tracespace/parser)', run: (side) => checkReadBack(artworks[side as 8 | 32], files[side as 8 | 32].filter((f) => isFabFileName(f.name))) },
+		{ name: 'zip', run: (side) => buildBundle(files[side as 8 | 32], meta.revisionDate) }
+	];
+	for (const step of steps) {
+		const small = await medianMs(() => step.run(8), 3);
+		const large = await medianMs(() => step.run(32), 1);
+		const growth = large / small;
+		rows.push({ work: `array download step: ${step.name}, 8×8 → 32×32`, ours: large, floor: small, unit: 'ms', floorName: '8×8, same step', ratio: growth, target: '≤ 20× for 16× the elements', pass: growth <= 20 });
+	}
 	return rows;
 }

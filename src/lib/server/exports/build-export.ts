@@ -1,25 +1,18 @@
-// A revision → the bytes of one download, built by the pure core: the bundle zip, one format's single file, or a zip of a format's several files.
-import { createSVGWindow } from 'svgdom';
+// A revision → the bytes of one download (the bundle zip, one format's single file, or a zip of a format's
+// several files), built on a worker thread within the work budget (see export-work.ts for the work itself).
 import { error } from '@sveltejs/kit';
-import {
-	buildBundle,
-	buildFiles,
-	bundleFileName,
-	createExportMeta,
-	exportFileName,
-	exportFormats,
-	type ExportFile,
-	type ExportFormat,
-	type ExportMeta,
-	type FabNotesWaiver,
-	type SvgWindow
-} from '$lib/formats';
-import { buildArtwork } from '$lib/artwork';
+import { createExportMeta, type ExportMeta } from '$lib/formats/export-meta';
+import type { FabNotesWaiver } from '$lib/formats/fab-notes';
 import type { SizedDesign } from '$lib/rf';
 import type { ExportKind } from '$lib/schemas/api';
+import type { ExportedFile } from '../db/export-record.table';
+import { runBudgetedWork } from '../work';
 import type { ExportDependencies } from './export-dependencies';
 import type { ExportTarget } from './export-target';
-import { assertReadBack, readBackFiles } from './read-back-gate';
+import type { ExportBuildInput } from './export-work';
+import { refuseReadBack } from './refuse-read-back';
+
+export { contentTypeOf } from './content-type';
 
 export interface BuiltExport {
 	kind: ExportKind;
@@ -28,22 +21,10 @@ export interface BuiltExport {
 	contentType: string;
 	/** The delivered bytes. */
 	body: Uint8Array;
-	/** Every file the delivery holds (for a zip: its entries, manifest included). */
-	files: ExportFile[];
-}
-
-const contentTypes: Record<string, string> = {
-	zip: 'application/zip',
-	gbr: 'application/vnd.gerber',
-	drl: 'text/plain; charset=utf-8',
-	dxf: 'image/vnd.dxf',
-	svg: 'image/svg+xml',
-	json: 'application/json',
-	txt: 'text/plain; charset=utf-8'
-};
-
-export function contentTypeOf(fileName: string): string {
-	return contentTypes[fileName.split('.').pop() ?? ''] ?? 'application/octet-stream';
+	/** Every file the delivery holds (for a zip: its entries, manifest included), with sizes and hashes. */
+	files: ExportedFile[];
+	/** sha256 of the body. */
+	sha256: string;
 }
 
 /** The revision's date (UTC calendar day of created_at): the only date any file carries. */
@@ -57,13 +38,6 @@ export function exportMetaOf(target: ExportTarget): ExportMeta {
 	return { ...meta, designSlug: target.design.slug };
 }
 
-function isManifest(meta: ExportMeta, file: ExportFile): boolean {
-	return file.name === exportFileName(meta, 'manifest', 'json');
-}
-
-/** Kinds whose delivery holds Gerber or drill files: these are read back before they are offered. */
-const fabKinds: readonly ExportKind[] = ['bundle', 'gerber', 'drill'];
-
 export interface BuildExportOptions {
 	/** Waived design-rule violations, printed in the fab notes. */
 	waiver?: FabNotesWaiver;
@@ -73,28 +47,14 @@ export interface BuildExportOptions {
 export async function buildExport(target: ExportTarget, kind: ExportKind, opts: BuildExportOptions = {}): Promise<BuiltExport> {
 	const meta = exportMetaOf(target);
 	// The sized design stored with the revision: what the revision is, whatever later engines compute.
-	const sized = target.revision.results as SizedDesign;
-	const formats: readonly ExportFormat[] = kind === 'bundle' ? exportFormats : [kind];
-	const env = { ...(formats.includes('svg') ? { svgWindow: createSVGWindow() as unknown as SvgWindow } : {}), ...(opts.waiver ? { waiver: opts.waiver } : {}) };
-	const written = buildFiles(sized, meta, formats, env);
-	const files = opts.deps?.corruptFiles ? opts.deps.corruptFiles(written) : written;
-	if (fabKinds.includes(kind)) {
-		// The Gerber + drill set this delivery belongs to, so that a Gerber-only download is judged with its holes.
-		const companions = kind === 'bundle' ? [] : buildFiles(sized, meta, ['gerber', 'drill']);
-		const context = { designId: target.design.id, revisionId: target.revision.id, revision: target.revision.label, kind };
-		assertReadBack(buildArtwork(sized), readBackFiles(files, companions), context, opts.deps?.logError);
+	const input: ExportBuildInput = { sized: target.revision.results as SizedDesign, meta, kind, ...(opts.waiver ? { waiver: opts.waiver } : {}) };
+	// The tests' corruption hook is a function, which cannot cross to a thread: those builds run here.
+	const outcome = opts.deps?.corruptFiles
+		? await (await import('./export-work')).buildExportBytes(input, opts.deps.corruptFiles)
+		: (await runBudgetedWork({ type: 'export', input }, { what: `The ${kind} download of revision ${meta.revisionLabel}` })).outcome;
+	if (outcome.outcome === 'read-back-failed') {
+		refuseReadBack(outcome.mismatches, { designId: target.design.id, revisionId: target.revision.id, revision: target.revision.label, kind }, opts.deps?.logError);
 	}
-
-	if (kind === 'bundle') {
-		return { kind, fileName: bundleFileName(meta), contentType: contentTypes.zip, body: await buildBundle(files, meta.revisionDate), files };
-	}
-	const own = files.filter((f) => !isManifest(meta, f));
-	if (own.length === 0) error(404, `Revision ${meta.revisionLabel} has no ${kind} files (the design has nothing of that kind)`);
-	if (own.length === 1) {
-		const [file] = own;
-		return { kind, fileName: file.name, contentType: contentTypeOf(file.name), body: file.bytes, files: [file] };
-	}
-	// Several files of one format (a Gerber per layer): one zip of them with their manifest.
-	const name = exportFileName(meta, kind, 'zip');
-	return { kind, fileName: name, contentType: contentTypes.zip, body: await buildBundle(files, meta.revisionDate), files };
+	if (outcome.outcome === 'empty') error(404, `Revision ${meta.revisionLabel} has no ${kind} files (the design has nothing of that kind)`);
+	return { kind, fileName: outcome.fileName, contentType: outcome.contentType, body: outcome.body, files: outcome.files, sha256: outcome.sha256 };
 }

@@ -1,15 +1,15 @@
 // The design-rule gate: the revision's artwork against the profile it recorded, before anything is built.
-import { buildArtwork, type Artwork } from '$lib/artwork';
-import { checkArtwork, type Violation } from '$lib/drc';
+// The check runs on a worker thread (a large array takes seconds), within the work budget.
+import type { Violation } from '$lib/drc';
 import type { SizedDesign } from '$lib/rf';
 import type { FabProfile } from '$lib/schemas/fab-profile';
 import { getDb } from '../db';
 import { revisionFabProfile } from '../fab-profiles';
+import { runBudgetedWork } from '../work';
 import type { ExportTarget } from './export-target';
 import { createImmutableCache } from './immutable-cache';
 
 export interface GateReport {
-	artwork: Artwork;
 	profile: FabProfile;
 	/** False for a revision older than the gate, checked against the built-in. */
 	profileRecorded: boolean;
@@ -22,7 +22,10 @@ const reports = createImmutableCache<GateReport>({ maxEntries: 256, maxBytes: Nu
 export function checkExportTarget(target: ExportTarget): Promise<GateReport> {
 	return reports.get(target.revision.id, async () => {
 		const { profile, recorded } = await revisionFabProfile(getDb(), target.revision.id);
-		const artwork = buildArtwork(target.revision.results as SizedDesign);
-		return { artwork, profile, profileRecorded: recorded, violations: checkArtwork(artwork, profile) };
+		const { violations } = await runBudgetedWork(
+			{ type: 'gate', sized: target.revision.results as SizedDesign, profile },
+			{ what: `The design-rule check of revision ${target.revision.label}` }
+		);
+		return { profile, profileRecorded: recorded, violations };
 	});
 }

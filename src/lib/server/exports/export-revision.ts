@@ -11,7 +11,6 @@ import { checkExportTarget } from './export-gate';
 import { ExportRefusedError } from './export-refusal';
 import type { ExportTarget } from './export-target';
 import { recordExport } from './record-export';
-import { sha256Hex } from './sha256';
 
 export interface DeliveredExport {
 	exportId: string;
@@ -28,28 +27,17 @@ export interface DeliveredExport {
 	waivedViolations: Violation[];
 }
 
-interface HashedExport {
-	built: BuiltExport;
-	files: ExportedFile[];
-	sha256: string;
-}
-
 /**
  * A revision never changes, and neither do the profile it recorded or the bytes its files make: a download's
  * build and hashes are kept (at most 64 deliveries or 64 MB) and shared by every later download of the same
- * revision, kind and waiver. Each download still passes the gate and writes its own export record.
+ * revision, kind and waiver; concurrent downloads of one key share one build. Each download still passes the
+ * gate and writes its own export record.
  */
-const builtExports = createImmutableCache<HashedExport>({
+const builtExports = createImmutableCache<BuiltExport>({
 	maxEntries: 64,
 	maxBytes: 64 * 1024 * 1024,
-	sizeOf: (h) => h.built.body.byteLength + h.built.files.reduce((n, f) => n + f.bytes.byteLength, 0)
+	sizeOf: (b) => b.body.byteLength
 });
-
-async function buildHashed(target: ExportTarget, kind: ExportKind, opts: Parameters<typeof buildExport>[2]): Promise<HashedExport> {
-	const built = await buildExport(target, kind, opts);
-	const files = built.files.map((f) => ({ name: f.name, sizeBytes: f.bytes.byteLength, sha256: sha256Hex(f.bytes) }));
-	return { built, files, sha256: sha256Hex(built.body) };
-}
 
 /**
  * Refuses (ExportRefusedError, nothing recorded) a revision that breaks its fab profile unless
@@ -63,9 +51,10 @@ export async function exportRevision(target: ExportTarget, kind: ExportKind, by:
 	const notesWaiver = waiver ? { reason: waiver, profileName: gate.profile.name, violations: gate.violations.map((v) => v.message) } : undefined;
 	const buildOpts = { waiver: notesWaiver, deps: opts.deps };
 	// Test hooks change the bytes on purpose: such builds are never shared.
-	const { built, files, sha256 } = opts.deps
-		? await buildHashed(target, kind, buildOpts)
-		: await builtExports.get(`${target.revision.id}\u0000${kind}\u0000${JSON.stringify(notesWaiver ?? null)}`, () => buildHashed(target, kind, buildOpts));
+	const built = opts.deps
+		? await buildExport(target, kind, buildOpts)
+		: await builtExports.get(`${target.revision.id}\u0000${kind}\u0000${JSON.stringify(notesWaiver ?? null)}`, () => buildExport(target, kind, buildOpts));
+	const { files, sha256 } = built;
 	const record = await recordExport({ target, userId: by.userId, via: by.via, kind, files, sha256, waiver });
 	return { exportId: record.id, kind, fileName: built.fileName, contentType: built.contentType, body: built.body, sha256, files, waiver, profile: gate.profile, waivedViolations: waiver ? gate.violations : [] };
 }

@@ -6,7 +6,8 @@ export { exportForRequest, type ExportRequestOptions } from './export-for-reques
 export { checkExportTarget, type GateReport } from './export-gate';
 export { ExportRefusedError, ReadBackFailedError } from './export-refusal';
 export { type ExportDependencies, type ExportOptions } from './export-dependencies';
-export { assertReadBack, readBackFiles } from './read-back-gate';
+export { refuseReadBack } from './refuse-read-back';
+export type { ExportBuildInput, ExportBuildOutcome } from './export-work';
 export { parseWaiverReason, WAIVER_MAX_CHARS, WAIVER_MIN_CHARS } from './waiver-reason';
 export { asHttpRefusal, readBackSupportIdOf, refusalBody, refusalOf, type RefusalBody } from './refusal-body';
 export { exportRevision, type DeliveredExport } from './export-revision';

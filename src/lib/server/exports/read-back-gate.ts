@@ -1,10 +1,9 @@
 // The read-back self-check on an export's Gerber and drill files: every fab file delivered, plus the fab files
 // it was written with, parsed as a board house would and compared with the artwork. A mismatch refuses the export.
-import { randomUUID } from 'node:crypto';
 import type { Artwork } from '$lib/artwork';
 import type { ExportFile } from '$lib/formats';
 import { checkReadBack, isFabFileName, type ReadBackResult } from '$lib/formats/readback';
-import { ReadBackFailedError } from './export-refusal';
+import { refuseReadBack } from './refuse-read-back';
 
 /**
  * `delivered` are the files about to be offered; `companions` the complete Gerber + drill set of the
@@ -20,10 +19,6 @@ export function readBackFiles(delivered: readonly ExportFile[], companions: read
 
 export function assertReadBack(artwork: Artwork, files: readonly ExportFile[], context: Record<string, string>, logError: (line: string) => void = console.error): ReadBackResult {
 	const result = checkReadBack(artwork, files);
-	if (!result.ok) {
-		const supportId = randomUUID();
-		logError(JSON.stringify({ event: 'export.read-back-mismatch', supportId, ...context, mismatches: result.mismatches }));
-		throw new ReadBackFailedError(supportId, result.mismatches);
-	}
+	if (!result.ok) refuseReadBack(result.mismatches, context, logError);
 	return result;
 }

@@ -1,0 +1,13 @@
+import { size } from '../src/lib/rf';
+import { arrayBenchDocument, createExportMeta } from '../src/lib/formats';
+import { buildExportBytes, checkRevisionArtwork } from '../src/lib/server/exports/export-work';
+import { STANDARD_QUICK_TURN_PROFILE } from '../src/lib/schemas/fab-profile';
+const side = Number(process.argv[2]);
+let s = performance.now();
+const sized = size(arrayBenchDocument(side));
+console.log('size', (performance.now() - s).toFixed(0)); s = performance.now();
+console.log('violations', checkRevisionArtwork(sized, STANDARD_QUICK_TURN_PROFILE).length, (performance.now() - s).toFixed(0)); s = performance.now();
+const meta = createExportMeta({ designName: 'x', revisionLabel: 'A', revisionDate: '2026-12-02' });
+const out: any = await buildExportBytes({ sized, meta, kind: 'bundle' });
+console.log('bundle', out.outcome, out.body?.byteLength, (performance.now() - s).toFixed(0), JSON.stringify(out.mismatches ?? []).slice(0, 300));
+console.log('json size of sized', JSON.stringify(sized).length);
