@@ -1,6 +1,6 @@
 // Artwork + stack → the full-wave model: materials, copper sheets, probe, lumped port, boundaries, mesh.
 import type { Artwork, ArtworkShape, StackLayer } from '../artwork';
-import { createCircleContour, flattenContour, isPointInRing, type Point } from '../geometry';
+import { createCircleContour, createPolygonContour, flattenContour, isPointInRing, unionRegions, type Contour, type Point, type Region } from '../geometry';
 import { InputError } from '../schemas/input-error';
 import type { FieldCheckMode } from '../schemas/field-check';
 import { SPEED_OF_LIGHT_M_PER_S, VACUUM_PERMITTIVITY_F_PER_M, freeSpaceWavelengthMm, mmFromUm } from '../units';
@@ -36,6 +36,27 @@ const unsupported = (message: string) => new InputError([{ path: 'feed', value: 
 /** κ = 2π·f·ε0·εr·tanδ: the conductivity whose loss equals tanδ at f (exact at f only). */
 export function conductivityForLossTangent(relativePermittivity: number, lossTangent: number, frequencyHz: number): number {
 	return 2 * Math.PI * frequencyHz * VACUUM_PERMITTIVITY_F_PER_M * relativePermittivity * lossTangent;
+}
+
+/**
+ * The dark copper of one layer as outlines: the shapes are united first (a feed line that only
+ * touches the patch along an edge would otherwise meet it between mesh lines and may not connect).
+ */
+function copperOutlines(shapes: readonly ArtworkShape[]): Point[][] {
+	const regions: Region[] = shapes
+		.filter((s) => s.polarity === 'dark')
+		.map((s) => {
+			const g = s.geometry;
+			// round outlines become chords first: the boolean operations take straight contours only
+			const straight = (c: Contour) => createPolygonContour(flattenContour(c, ROUND_CHORD_TOLERANCE_MM));
+			if (g.kind === 'region') return { outer: straight(g.region.outer), holes: g.region.holes.map(straight) };
+			if (g.kind === 'circle') return { outer: straight(createCircleContour(g.center, g.diameterMm / 2)), holes: [] };
+			throw unsupported(`the Field check cannot model outline shape "${s.id}" as copper`);
+		});
+	return unionRegions(regions).map((r) => {
+		if (r.holes.length > 0) throw unsupported('the Field check cannot model copper with holes');
+		return flattenContour(r.outer, ROUND_CHORD_TOLERANCE_MM);
+	});
 }
 
 function shapeOutline(shape: ArtworkShape): Point[] {
@@ -120,8 +141,8 @@ export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number,
 	const topLayer = artwork.layers.find((l) => l.id === topCopper.layerId);
 	const groundLayer = artwork.layers.find((l) => l.id === bottomCopper.layerId);
 	if (!topLayer || !groundLayer) throw unsupported('the artwork lacks its copper layers');
-	const topOutlines = topLayer.shapes.filter((s) => s.polarity === 'dark').map(shapeOutline);
-	const groundOutlines = groundLayer.shapes.filter((s) => s.polarity === 'dark').map(shapeOutline);
+	const topOutlines = copperOutlines(topLayer.shapes);
+	const groundOutlines = copperOutlines(groundLayer.shapes);
 
 	const sheet = (name: string, layer: typeof topCopper, outlines: Point[][], zMm: number): ModelProperty => ({
 		kind: 'sheet',
@@ -164,15 +185,16 @@ export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number,
 		const pts = shapeOutline(line);
 		const x0 = Math.min(...pts.map((p) => p[0]));
 		const x1 = Math.max(...pts.map((p) => p[0]));
-		const y0 = Math.min(...pts.map((p) => p[1]));
+		// one thirds-rule cell in from the board edge, so the port sits on copper at both ends
+		const y0 = Math.min(...pts.map((p) => p[1])) + edgeCellMm;
 		port = { fromMm: [x0, y0, groundZMm], toMm: [x1, y0, topZMm], referenceImpedanceOhm };
 		fixedY.push(y0);
 	} else {
 		throw unsupported(`the Field check does not model a ${artwork.metadata.feedKind} feed yet`);
 	}
 
-	// edges lying on a fixed line are resolved by it (the port plane at the board edge)
-	const awayFrom = (fixed: number[]) => (e: MetalEdge) => fixed.every((f) => Math.abs(f - e.positionMm) > edgeCellMm);
+	// edges lying on or beside a fixed line are resolved by it (the port plane near the board edge)
+	const awayFrom = (fixed: number[]) => (e: MetalEdge) => fixed.every((f) => Math.abs(f - e.positionMm) > edgeCellMm * 1.01);
 	// each copper layer's edges on its own: the ground under the patch does not hide the patch's edges
 	const edgesOf = (axis: 0 | 1) => [...metalEdges(topOutlines, axis), ...metalEdges(groundOutlines, axis)];
 	const planXY: AxisPlan = { maxFineCellMm, maxAirCellMm, edgeCellMm };

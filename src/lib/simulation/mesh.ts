@@ -104,7 +104,8 @@ export function buildAxis(features: AxisFeatures, plan: AxisPlan): number[] {
 		const cumulative: number[] = [0];
 		for (let k = 0; k < SIZE_FIELD_SAMPLES; k++) cumulative.push(cumulative[k] + step / size(a + (k + 0.5) * step));
 		const total = cumulative[SIZE_FIELD_SAMPLES];
-		const cells = Math.max(1, Math.ceil(total - 1e-6), Math.ceil((b - a) / limit((a + b) / 2) - 1e-9));
+		const fewest = Math.max(1, Math.ceil((b - a) / limit((a + b) / 2) - 1e-9));
+		const cells = Math.max(fewest, cellCountFor(b - a, total, res[i], res[i + 1]));
 		const gap: number[] = [a];
 		let k = 0;
 		for (let c = 1; c < cells; c++) {
@@ -118,7 +119,26 @@ export function buildAxis(features: AxisFeatures, plan: AxisPlan): number[] {
 	}
 	evenOutShortGaps(gaps);
 	const out = [lines[0], ...gaps.flatMap((g) => g.slice(1))];
-	return repairGrading(out);
+	const requiredIndex = new Set<number>();
+	let index = 0;
+	for (const g of gaps) {
+		requiredIndex.add(index);
+		index += g.length - 1;
+	}
+	requiredIndex.add(index);
+	return relaxFreeLines(out, requiredIndex);
+}
+
+/**
+ * Cells for a gap: ceil of the size field's count, except in a short gap, where rounding down may
+ * match the cells beside it better (a 1.4-cell gap between two thirds-rule cells stays one cell).
+ */
+function cellCountFor(gapMm: number, total: number, resA: number, resB: number): number {
+	const up = Math.max(1, Math.ceil(total - 1e-6));
+	if (total >= 4) return up;
+	const down = Math.max(1, Math.floor(total));
+	const badness = (n: number) => Math.max(Math.abs(Math.log(gapMm / n / resA)), Math.abs(Math.log(gapMm / n / resB)));
+	return badness(down) < badness(up) ? down : up;
 }
 
 /** Gaps of at most this many cells are re-spaced evenly when their grading breaks the ratio. */
@@ -147,29 +167,26 @@ function evenOutShortGaps(gaps: number[][]): void {
 	}
 }
 
+/** Passes of the free-line relaxation. */
+const RELAXATION_PASSES = 30;
+
 /**
- * Splits the larger cell of any neighbouring pair that differs by more than MAX_GRADING_RATIO: the
- * piece beside the small cell is TARGET_GRADING_RATIO times it (or half the large cell), so a repair
- * grades outwards and never makes a cell smaller than ~0.7 of the smallest.
+ * Moves each free (not required) line so that the two cells beside it continue the geometric
+ * run of the cells beyond them: a few passes even out the size jumps that rounding leaves where
+ * two gaps meet, without undoing the grading (each pass only looks one cell further out).
  */
-function repairGrading(lines: number[]): number[] {
+function relaxFreeLines(lines: number[], required: ReadonlySet<number>): number[] {
 	const out = [...lines];
-	for (let guard = 0; guard < 100_000; guard++) {
-		let fixed = false;
-		for (let i = 1; i + 1 < out.length && !fixed; i++) {
-			const a = out[i] - out[i - 1];
-			const b = out[i + 1] - out[i];
-			if (a > MAX_GRADING_RATIO * b) {
-				const piece = Math.min(TARGET_GRADING_RATIO * b, a / 2);
-				out.splice(i, 0, out[i] - piece);
-				fixed = true;
-			} else if (b > MAX_GRADING_RATIO * a) {
-				const piece = Math.min(TARGET_GRADING_RATIO * a, b / 2);
-				out.splice(i + 1, 0, out[i] + piece);
-				fixed = true;
-			}
+	for (let pass = 0; pass < RELAXATION_PASSES; pass++) {
+		for (let i = 2; i + 2 < out.length; i++) {
+			if (required.has(i)) continue;
+			const left = out[i - 1] - out[i - 2];
+			const right = out[i + 2] - out[i + 1];
+			const span = out[i + 1] - out[i - 1];
+			// in a geometric run c1, c2, c3, c4 the middle pair keeps c3/c2 = (c4/c1)^(1/3)
+			const ratio = Math.cbrt(right / left);
+			out[i] = out[i - 1] + span / (1 + ratio);
 		}
-		if (!fixed) return out;
 	}
 	return out;
 }

@@ -86,7 +86,7 @@ function portProperties(model: FieldModel, firstId: number): string[] {
 	const centre = [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
 	return [
 		// Direction 2 = z; Caps=1 joins the resistor to the metal at both ends
-		`    <LumpedElement ${attrs({ ID: firstId, Name: 'port_resist_1', Direction: 2, Caps: 1, R: referenceImpedanceOhm, C: 'nan', L: 'nan' })}>`,
+		`    <LumpedElement ${attrs({ ID: firstId, Name: 'port_resist_1', Direction: 2, Caps: 1, R: referenceImpedanceOhm })}>`,
 		'      <Primitives>',
 		...box(a, b, 5),
 		'      </Primitives>',
