@@ -31,7 +31,8 @@ const PRIORITY_COPPER = 10;
 const PRIORITY_PIN = 20;
 const PRIORITY_PORT = 5;
 
-const unsupported = (message: string) => new InputError([{ path: 'feed', value: undefined, message }]);
+/** A design the model cannot hold: bad input for the Field check (400/422, exit 2), never a crash. */
+const unsupported = (message: string, value: unknown = 'this design') => new InputError([{ path: 'feed', value, message }]);
 
 /** κ = 2π·f·ε0·εr·tanδ: the conductivity whose loss equals tanδ at f (exact at f only). */
 export function conductivityForLossTangent(relativePermittivity: number, lossTangent: number, frequencyHz: number): number {
@@ -128,6 +129,10 @@ function twoCopperStack(artwork: Artwork): TwoCopperStack {
 		throw unsupported('the Field check models a single patch on one dielectric between two coppers; layered feeds, stacks and arrays are not modelled yet');
 	}
 	const dielectric = dielectrics[0];
+	const roles = artwork.layers.flatMap((l) => l.shapes.map((sh) => sh.role));
+	if (roles.filter((r) => r === 'patch').length !== 1 || roles.some((r) => r === 'feed-network' || r === 'parasitic-patch' || r === 'coupling-slot')) {
+		throw unsupported('the Field check models a single patch on one dielectric between two coppers; layered feeds, stacks and arrays are not modelled yet');
+	}
 	return { groundZMm: dielectric.zMm, topZMm: dielectric.zMm + dielectric.thicknessMm, dielectric, topCopper: coppers[0], bottomCopper: coppers[1] };
 }
 

@@ -13,13 +13,22 @@ interface Element {
 	text: string;
 }
 
+/** The sax event handlers this test sets (sax ships no types; tests/unit/formats/svg/sax.d.ts declares the rest). */
+interface EventParser {
+	onopentag: (tag: { name: string; attributes: Record<string, string> }) => void;
+	onclosetag: (name: string) => void;
+	ontext: (text: string) => void;
+	onerror: (e: Error) => void;
+	write(text: string): { close(): unknown };
+}
+
 /** Parses XML strictly with sax (throws on malformed input) into a small element tree. */
 function parseXml(text: string): Element {
-	const parser = sax.parser(true, {});
+	const parser = sax.parser(true) as unknown as EventParser;
 	const root: Element = { name: '#document', attributes: {}, children: [], text: '' };
 	const stack: Element[] = [root];
 	parser.onopentag = (tag) => {
-		const el: Element = { name: tag.name, attributes: tag.attributes as Record<string, string>, children: [], text: '' };
+		const el: Element = { name: tag.name, attributes: tag.attributes, children: [], text: '' };
 		stack[stack.length - 1].children.push(el);
 		stack.push(el);
 	};
