@@ -30,6 +30,8 @@ export interface FieldCheckContext {
 	workDir?: string;
 	/** Engine threads (default FRINGEFIELD_OPENEMS_THREADS, else os.availableParallelism()). */
 	threads?: number;
+	/** Extra mesh refinement over the mode (default 1): a convergence study's knob, not a user option. */
+	refinement?: number;
 }
 
 /** What one engine run gives back before the post-processor. */
@@ -178,7 +180,7 @@ export async function runFieldCheck(input: unknown, options: Partial<FieldCheckO
 	const models =
 		opts.mode === 'accurate'
 			? [buildFieldModel(artwork, zRef, { mode: 'accurate', refinement: 1, nearFarField: false }), buildFieldModel(artwork, zRef, { mode: 'accurate', refinement: ACCURATE_REFINEMENT, nearFarField: false })]
-			: [buildFieldModel(artwork, zRef, { mode: opts.mode, nearFarField: false })];
+			: [buildFieldModel(artwork, zRef, { mode: opts.mode, refinement: context.refinement ?? 1, nearFarField: false })];
 	const engine = await findEngine();
 	if (!engine) throw new EngineMissingError(`the full-wave engine (${engineBinary()}) is not installed; ${ENGINE_INSTALL_HINT}`);
 

@@ -3,6 +3,7 @@ import { size } from '../../lib/rf';
 import type { SizedDesign } from '../../lib/rf/sized-design';
 import type { FieldCheckOptions, FieldCheckResult, HomingIteration, HomingParameter, HomingResult } from '../../lib/schemas/field-check';
 import { InputError, parseDesignInput, type DesignInput, type DimensionOverrides } from '../../lib/schemas';
+import { cosineModelStep, feedPointResistance, secant, type FeedKey } from './homing-steps';
 import { runFieldCheck, type FieldCheckContext } from './run-field-check';
 
 /** Resonance within this fraction of the target ends the first phase. */
@@ -17,12 +18,19 @@ const FEED_RESERVE = 3;
 const MAX_STEP_FRACTION = 0.15;
 
 type ResonantKey = 'lengthMm' | 'radiusMm';
-type FeedKey = 'insetDepthMm' | 'probeOffsetMm';
 
 interface Trial {
 	overrides: DimensionOverrides;
 	result: FieldCheckResult;
 }
+
+/** Largest relative change of the feed dimension in one step (a feed moves further than the patch). */
+const MAX_FEED_STEP_FRACTION = 0.4;
+const clampFeedStep = (from: number, to: number) => {
+	const base = Math.max(from, 0.5);
+	return Math.min(base * (1 + MAX_FEED_STEP_FRACTION), Math.max(base * (1 - MAX_FEED_STEP_FRACTION), to));
+};
+const clampStep = (from: number, to: number) => Math.min(from * (1 + MAX_STEP_FRACTION), Math.max(from * (1 - MAX_STEP_FRACTION), to));
 
 function resonantDimension(sized: SizedDesign): { key: ResonantKey; valueMm: number } {
 	if (sized.patch.kind === 'rectangular') return { key: 'lengthMm', valueMm: sized.patch.lengthMm };
@@ -35,52 +43,6 @@ function feedDimension(sized: SizedDesign): { key: FeedKey; valueMm: number } | 
 	if (sized.feed.kind === 'probe') return { key: 'probeOffsetMm', valueMm: Math.hypot(sized.feed.offsetXMm, sized.feed.offsetYMm) };
 	return null;
 }
-
-/** Zin at the target, interpolated between the two samples around it. */
-function impedanceAtTarget(result: FieldCheckResult): { r: number; x: number } {
-	const s = result.samples;
-	const f = result.targetFrequencyHz;
-	let i = 0;
-	while (i + 2 < s.length && s[i + 1].frequencyHz < f) i++;
-	const t = (f - s[i].frequencyHz) / (s[i + 1].frequencyHz - s[i].frequencyHz);
-	return { r: s[i].resistanceOhm + t * (s[i + 1].resistanceOhm - s[i].resistanceOhm), x: s[i].reactanceOhm + t * (s[i + 1].reactanceOhm - s[i].reactanceOhm) };
-}
-
-/**
- * The resistance the feed point presents at the target: for an inset feed the port's Zin is moved
- * back along the lossless feed line (Z_L = Z0·(Zin − jZ0·tanβl)/(Z0 − jZin·tanβl), Pozar, Microwave
- * Engineering 4th ed., eq. 2.44 solved for the load; from memory); a probe's port is at the feed point.
- */
-function feedPointResistance(sized: SizedDesign, result: FieldCheckResult): number {
-	const { r, x } = impedanceAtTarget(result);
-	if (sized.feed.kind !== 'inset') return r;
-	const line = sized.feed.line;
-	const z0 = result.referenceImpedanceOhm;
-	const beta = (2 * Math.PI * result.targetFrequencyHz * Math.sqrt(line.effectivePermittivity)) / 299_792_458_000;
-	const t = Math.tan(beta * line.lengthMm);
-	// (r + jx − jZ0·t) / (Z0 − j(r + jx)·t) = (r + j(x − Z0 t)) / ((Z0 + x t) − j r t)
-	const nr = r;
-	const ni = x - z0 * t;
-	const dr = z0 + x * t;
-	const di = -r * t;
-	const den = dr * dr + di * di;
-	return (z0 * (nr * dr + ni * di)) / den;
-}
-
-/** Next value by the secant through the last two points, or `fallback` when they cannot give one. */
-function secant(x0: number, y0: number, x1: number, y1: number, fallback: number): number {
-	const slope = (y1 - y0) / (x1 - x0);
-	if (!Number.isFinite(slope) || slope === 0) return fallback;
-	return x1 - y1 / slope;
-}
-
-/** Largest relative change of the feed dimension in one step (a feed moves further than the patch). */
-const MAX_FEED_STEP_FRACTION = 0.4;
-const clampFeedStep = (from: number, to: number) => {
-	const base = Math.max(from, 0.5);
-	return Math.min(base * (1 + MAX_FEED_STEP_FRACTION), Math.max(base * (1 - MAX_FEED_STEP_FRACTION), to));
-};
-const clampStep = (from: number, to: number) => Math.min(from * (1 + MAX_STEP_FRACTION), Math.max(from * (1 - MAX_STEP_FRACTION), to));
 
 /**
  * Moves the resonant dimension (length or radius) until the simulated resonance is within 0.3 % of
@@ -172,24 +134,6 @@ export async function runHoming(input: unknown, options: Partial<FieldCheckOptio
 	function finish(converged: boolean, stoppedBecause: string, chosen: Trial): HomingResult {
 		return { converged, stoppedBecause, iterations, tunedInput: { ...document, overrides: chosen.overrides }, final: chosen.result };
 	}
-}
-
-/**
- * The first feed step from the cavity model's standing wave: an inset at depth y sees
- * R(y) = R_edge·cos²(πy/L), a probe at offset p from the centre R(p) = R_edge·sin²(πp/L)
- * (Balanis, Antenna Theory 4th ed., eq. 14-20a; from memory). Solved for the depth that turns the
- * simulated R into the reference.
- */
-function cosineModelStep(sized: SizedDesign, key: FeedKey, valueMm: number, resistanceOhm: number, wantOhm: number): number {
-	const lengthMm = sized.patch.kind === 'rectangular' ? sized.patch.lengthMm : sized.patch.kind === 'circular' ? 2 * sized.patch.radiusMm : valueMm * 3;
-	const r = Math.max(resistanceOhm, 1e-3);
-	const ratio = Math.sqrt(wantOhm / r);
-	if (key === 'insetDepthMm') {
-		const c = Math.min(1, ratio * Math.cos((Math.PI * valueMm) / lengthMm));
-		return (lengthMm / Math.PI) * Math.acos(c);
-	}
-	const s = Math.min(1, ratio * Math.sin((Math.PI * valueMm) / lengthMm));
-	return (lengthMm / Math.PI) * Math.asin(s);
 }
 
 function bestBy(trials: readonly Trial[], score: (t: Trial) => number): Trial {

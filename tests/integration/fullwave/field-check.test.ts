@@ -34,6 +34,15 @@ describe('runFieldCheck on openEMS', () => {
 		expect(progress.every((p, i) => i === 0 || p.fraction >= progress[i - 1].fraction)).toBe(true);
 	});
 
+	it('converges: a probe-fed patch’s resonance moves < 1 % when the quick mesh is refined 1.5×', { timeout: 400_000 }, async () => {
+		// mesh convergence (common practice for FDTD studies, no source); the < 0.5 % standard-mode figures are in README (npm run bench -- --fullwave)
+		const coarse = await runFieldCheck(fixture('rectangular-probe'), { mode: 'quick', budgetSeconds: 300 }, { threads: THREADS });
+		const fine = await runFieldCheck(fixture('rectangular-probe'), { mode: 'quick', budgetSeconds: 300 }, { threads: THREADS, refinement: 1.5 });
+		expect(fine.mesh.cellCount).toBeGreaterThan(coarse.mesh.cellCount * 2);
+		const shift = (fine.resonance!.frequencyHz - coarse.resonance!.frequencyHz) / coarse.resonance!.frequencyHz;
+		expect(Math.abs(shift)).toBeLessThan(0.01);
+	});
+
 	it('stops the engine when the signal aborts', { timeout: 60_000 }, async () => {
 		const controller = new AbortController();
 		const started = Date.now();
