@@ -7,6 +7,7 @@ import { rootDir, runMain } from './lib/config.ts';
 import { coreRows, type BenchRow } from './bench/core.ts';
 import { httpRows } from './bench/http.ts';
 import { runFuzzBench } from './bench/fuzz.ts';
+import { runFullwaveBench } from './bench/fullwave.ts';
 import { existingReliabilitySection } from './bench/reliability-section.ts';
 import { runSoakBench } from './bench/soak.ts';
 
@@ -52,6 +53,8 @@ runMain(async () => {
 	// --soak / --fuzz run only the reliability checks, which write their own section of BENCHMARKS.md.
 	if (process.argv.includes('--soak')) return runSoakBench();
 	if (process.argv.includes('--fuzz')) return runFuzzBench();
+	// --fullwave runs only the Field check timings on openEMS (minutes per case) and prints them as Markdown
+	if (process.argv.includes('--fullwave')) return runFullwaveBench(process.argv);
 	const started = Date.now();
 	const rows: BenchRow[] = [];
 	console.log('core rows…');

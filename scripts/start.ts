@@ -8,6 +8,7 @@ import { decideAppMode, SettingError } from '../src/lib/server/app-mode.ts';
 import { ConfigError, loadConfig, rootDir, runMain, type LocalConfig } from './lib/config.ts';
 import { provideMail } from './lib/mail.ts';
 import { migrateToLatest } from './lib/migrate.ts';
+import { ensureOpenEms } from './lib/openems.ts';
 import { canBind } from './lib/ports.ts';
 import { APP_DATABASE, provideDatabase } from './lib/postgres.ts';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemo } from './lib/seed.ts';
@@ -56,6 +57,9 @@ runMain(async () => {
 	const config = loadConfig();
 	if (!(await canBind(config.appPort))) throw new ConfigError('PORT', `port ${config.appPort} on 127.0.0.1 is in use; set PORT to a free port`);
 	const plan = config.databaseUrl ? await production(config, config.databaseUrl) : await demo(config);
+
+	// the Field check's engine; the rest of the product runs without it
+	ensureOpenEms();
 
 	if (process.env.FRINGEFIELD_SKIP_BUILD !== '1') {
 		console.log('building…');

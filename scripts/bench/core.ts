@@ -1,7 +1,7 @@
 // Benchmark rows 1–4: the pure core against floors measured in the same run (tinybench: warm-up, medians).
 import { deflateRawSync } from 'node:zlib';
 import { Bench } from 'tinybench';
-import { buildArrayBenchFiles, bundle, gate, holdsFabFiles, prepare, prepareSized, readBack, writeFiles } from '../../src/lib/design';
+import { arrayBenchDocument, buildArrayBenchFiles, bundle, gate, holdsFabFiles, prepare, prepareSized, readBack, writeFiles, type PreparedDesign } from '../../src/lib/design';
 import { buildSweepDocument, createExportMeta, formatIds, serializeSweep, sha256Hex, toSvg } from '../../src/lib/formats';
 import { STANDARD_QUICK_TURN_PROFILE } from '../../src/lib/schemas/fab-profile';
 import { legacyBundleDownload } from './legacy-download';
@@ -108,5 +108,53 @@ export async function coreRows(): Promise<BenchRow[]> {
 	// Arrays (issue 10): Gerber + drill + DXF + SVG of an 8×8 and a 32×32 array; 16× the elements.
 	const arrays = await medianUs({ a8: () => buildArrayBenchFiles(8), a32: () => buildArrayBenchFiles(32) }, 4000);
 	rows.push({ work: '32×32 array files (Gerber, drill, DXF, SVG)', ours: arrays.a32 / 1000, floor: arrays.a8 / 1000, unit: 'ms', floorName: '8×8 array files', ratio: arrays.a32 / arrays.a8, target: '< 1000 ms; ≈ 16× growth', pass: arrays.a32 / 1000 < 1000 && arrays.a32 / arrays.a8 <= 20 });
+	rows.push(...(await arrayDownloadRows()));
+	return rows;
+}
+
+/** A fresh copy of the artwork's layers: the design-rule check keeps its copper grouping per layer object, so a repeat on the same object would be a cache hit. */
+const freshLayers = (prepared: PreparedDesign): PreparedDesign => ({ ...prepared, artwork: { ...prepared.artwork, layers: prepared.artwork.layers.map((l) => ({ ...l })) } });
+
+/** Median of `runs` timings of fn, in ms (for work too slow for tinybench's many samples). */
+async function medianMs(fn: () => unknown | Promise<unknown>, runs: number): Promise<number> {
+	const times: number[] = [];
+	for (let i = 0; i < runs; i++) {
+		const t0 = performance.now();
+		await fn();
+		times.push(performance.now() - t0);
+	}
+	return times.sort((a, b) => a - b)[Math.floor(times.length / 2)];
+}
+
+/**
+ * Issue 13, item 1: the design-rule check of the largest array (64 × 64) and each step of an array's download
+ * at 8 × 8 and 32 × 32 (16× the elements): near-linear steps grow by about 16×, within 20×.
+ */
+export async function arrayDownloadRows(): Promise<BenchRow[]> {
+	const rows: BenchRow[] = [];
+	const P = STANDARD_QUICK_TURN_PROFILE;
+	const meta = createExportMeta({ designName: 'Bench array', revisionLabel: 'A', revisionDate: '2026-12-02' });
+	const prep = (side: number) => prepare(parseDesignInput(arrayBenchDocument(side)));
+	const a8 = prep(8), a32 = prep(32), a64 = prep(64);
+	const check8 = await medianMs(() => gate(freshLayers(a8), P), 5);
+	const check64 = await medianMs(() => gate(freshLayers(a64), P), 3);
+	rows.push({ work: '64×64 array design-rule check (28 732 copper shapes)', ours: check64, floor: check8, unit: 'ms', floorName: '8×8 array check', ratio: check64 / check8, target: '< 1000 ms', pass: check64 < 1000 });
+	type Step = { name: string; run: (side: number) => unknown | Promise<unknown> };
+	const prepared = { 8: a8, 32: a32 } as const;
+	const of = (side: number) => prepared[side as 8 | 32];
+	const files = { 8: await writeFiles(a8, formatIds, meta), 32: await writeFiles(a32, formatIds, meta) } as const;
+	const steps: Step[] = [
+		{ name: 'artwork build (prepare)', run: (side) => prepare(of(side).input) },
+		{ name: 'design-rule check', run: (side) => gate(freshLayers(of(side)), P) },
+		{ name: 'all files written and hashed', run: (side) => writeFiles(of(side), formatIds, meta) },
+		{ name: 'read-back self-check (@tracespace/parser)', run: (side) => readBack(files[side as 8 | 32], of(side), meta) },
+		{ name: 'zip', run: (side) => bundle(files[side as 8 | 32], meta) }
+	];
+	for (const step of steps) {
+		const small = await medianMs(() => step.run(8), 3);
+		const large = await medianMs(() => step.run(32), 1);
+		const growth = large / small;
+		rows.push({ work: `array download step: ${step.name}, 8×8 → 32×32`, ours: large, floor: small, unit: 'ms', floorName: '8×8, same step', ratio: growth, target: '≤ 20× for 16× the elements', pass: growth <= 20 });
+	}
 	return rows;
 }

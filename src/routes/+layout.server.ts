@@ -7,6 +7,6 @@ import type { LayoutServerLoad } from './$types';
 export const load: LayoutServerLoad = async ({ locals, cookies }) => {
 	const demo = appMode().demoBanner;
 	if (!locals.user) return { user: null, team: null, teams: [], demo };
-	const { current, teams } = await currentTeam(locals.user.id, cookies);
+	const { current, teams } = await currentTeam(locals.identity, cookies);
 	return { user: locals.user, team: current, teams, demo };
 };

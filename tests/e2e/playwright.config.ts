@@ -12,7 +12,8 @@ export default defineConfig({
 	fullyParallel: false,
 	workers: 1,
 	retries: 0,
-	timeout: 60_000,
+	// Every journey that signs up now confirms the address through the caught mail before signing in.
+	timeout: 120_000,
 	reporter: [['list'], ['json']],
 	use: {
 		baseURL,

@@ -1,5 +1,7 @@
-// Journey: sign up → make a team → sign out → a wrong password gets the generic refusal → sign in; forgot the
-// password → the e-mailed link sets a new one once; a personal API token is shown once and can be revoked.
+// Journey: sign up → confirm the address from the caught mail → sign in → make a team → sign out → a wrong password
+// gets the generic refusal → sign in; a taken address gets the same answer (and its owner a note); a common
+// password is refused with the reason; forgot the password → the e-mailed link sets a new one once and revokes
+// API tokens; a personal API token is shown once and can be revoked.
 import { expect, test } from '@playwright/test';
 import { createTeam, latestMailTo, linkIn, newPerson, signIn, signOut, signUp } from './helpers/accounts';
 
@@ -33,6 +35,25 @@ test('sign up, make a team, sign out and back in; a wrong password gets the gene
 	await expect(page.getByTestId('current-role')).toHaveText('owner');
 });
 
+test('sign-up answers a taken address exactly as a new one, and refuses a common password with the reason', async ({ page }) => {
+	const me = newPerson('twice');
+	await signUp(page, me);
+	await signOut(page);
+	await page.goto('/signup');
+	await page.getByLabel('Your name').fill('Someone else');
+	await page.getByLabel('E-mail').fill(me.email);
+	await page.getByLabel('Password').fill('1234567890');
+	await page.getByRole('button', { name: 'Create account' }).click();
+	await expect(page.getByText('password is one of the most common passwords')).toBeVisible();
+	await page.getByLabel('Password').fill('a different long passphrase');
+	await page.getByRole('button', { name: 'Create account' }).click();
+	await expect(page.getByTestId('signup-sent')).toContainText(`Check your inbox at ${me.email}`);
+	const note = await latestMailTo(page.request, me.email, 10_000, 'Someone tried to make a Fringefield account with your e-mail');
+	expect(note.text).toContain('No new account was made');
+	expect(note.links.some((l) => l.includes('/confirm/'))).toBe(false);
+	await signIn(page, me.email, me.password);
+});
+
 test('a forgotten password is replaced through the single-use link in the caught e-mail', async ({ page, browser }) => {
 	const me = newPerson('forgetful');
 	await signUp(page, me);
@@ -47,7 +68,7 @@ test('a forgotten password is replaced through the single-use link in the caught
 	await page.getByLabel('E-mail').fill(me.email);
 	await page.getByRole('button', { name: 'Send the link' }).click();
 	await expect(page.getByRole('status')).toContainText(`If ${me.email} has an account`);
-	const mail = await latestMailTo(page.request, me.email);
+	const mail = await latestMailTo(page.request, me.email, 10_000, 'Set a new Fringefield password');
 	expect(mail.subject).toBe('Set a new Fringefield password');
 	const link = linkIn(mail, '/reset/');
 
@@ -55,6 +76,9 @@ test('a forgotten password is replaced through the single-use link in the caught
 	await page.getByLabel('New password').fill('a fresh and long passphrase');
 	await page.getByRole('button', { name: 'Set password' }).click();
 	await expect(page).toHaveURL(/\/signin\?notice=password-set/);
+	await expect(page.getByRole('status')).toContainText('your API tokens are revoked');
+	const changed = await latestMailTo(page.request, me.email, 10_000, 'Your Fringefield password was changed');
+	expect(changed.text).toContain('(this account had no live API tokens)');
 	await signIn(page, me.email, 'a fresh and long passphrase');
 
 	await otherPage.goto('/teams');

@@ -16,6 +16,8 @@ async function downloadBundle(page: Page): Promise<Download> {
 }
 
 test('an invited viewer is refused editing, downloads revision A, and its hash matches the earlier export', async ({ browser }) => {
+	// The invitation journey now confirms the invitee's address through the caught mail before signing in.
+	test.setTimeout(120_000);
 	const ownerContext = await browser.newContext();
 	const viewerContext = await browser.newContext();
 	const ownerPage = await ownerContext.newPage();

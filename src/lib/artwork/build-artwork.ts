@@ -16,6 +16,17 @@ import type { Artwork, ArtworkDrill, ArtworkLayer, ArtworkShape } from './types'
  * centred on it and the feed runs down (−y) to the board edge at y = 0.
  */
 export function buildArtwork(sized: SizedDesign): Artwork {
+	artworkBuilds += 1;
+	return drawArtwork(sized);
+}
+
+/** Artworks built so far by this module instance (one per thread): lets a worker task report what it drew. */
+let artworkBuilds = 0;
+export function artworkBuildCount(): number {
+	return artworkBuilds;
+}
+
+function drawArtwork(sized: SizedDesign): Artwork {
 	if (needsExtendedArtwork(sized)) return buildExtendedArtwork(sized);
 	const { widthMm: boardW, lengthMm: boardL } = sized.ground;
 	if (!(boardW > 0 && boardL > 0)) throw new GeometryError('degenerate-shape', `ground.widthMm and ground.lengthMm must be positive (got ${boardW}, ${boardL})`);

@@ -1,6 +1,6 @@
 // Public face of the artwork room.
 export * from './types';
-export { buildArtwork } from './build-artwork';
+export { artworkBuildCount, buildArtwork } from './build-artwork';
 export { profileLayer, PROFILE_STROKE_WIDTH_MM } from './profile-layer';
 export { patchPolygon } from './patch-polygon';
 export { needsExtendedArtwork } from './build-artwork';

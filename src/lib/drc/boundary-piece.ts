@@ -31,14 +31,19 @@ function contourPieces(contour: Contour, isOuter: boolean, contourIndex: number)
 	const fillSide: 1 | -1 = isOuter === area > 0 ? 1 : -1;
 	const pieces: BoundaryPiece[] = [];
 	let from = contour.start;
+	const contourLength = contour.segments.length;
 	contour.segments.forEach((seg, index) => {
-		const base = { from, to: seg.to, fillSide, contourIndex, index, contourLength: contour.segments.length };
 		if (seg.kind === 'line') {
-			pieces.push({ ...base, kind: 'line' });
+			pieces.push({ kind: 'line', from, to: seg.to, fillSide, contourIndex, index, contourLength });
 		} else {
 			const [cx, cy] = seg.center;
 			pieces.push({
-				...base,
+				from,
+				to: seg.to,
+				fillSide,
+				contourIndex,
+				index,
+				contourLength,
 				kind: 'arc',
 				center: seg.center,
 				radiusMm: Math.hypot(from[0] - cx, from[1] - cy),

@@ -2,20 +2,23 @@
 import { LENGTH_EPSILON_MM } from '../geometry';
 import type { Artwork } from '../artwork';
 import type { FabProfile } from '../schemas/fab-profile';
-import { copperFeatures, isCopperLayer } from './copper-features';
+import { isCopperLayer, layerCopper } from './copper-features';
 import { boundaryDistance } from './shape-distance';
 import { locationOf, midpointOf, roundMm, type Violation } from './violation';
 
 /**
  * Gaps inside one feature (an inset notch) are the slot-width rule's: the profile guarantees
  * minSlotWidthMm ≥ minSpacingMm, so one rule per gap is enough.
+ * Two shapes closer than the minimum have boxes closer than the minimum: only those pairs are measured,
+ * in the same order (i, then j ascending) as comparing every pair would report them.
  */
 export function checkCopperSpacing(artwork: Artwork, profile: FabProfile): Violation[] {
 	const out: Violation[] = [];
 	for (const layer of artwork.layers.filter(isCopperLayer)) {
-		const copper = copperFeatures(layer);
+		const { shapes: copper, index } = layerCopper(layer);
 		for (let i = 0; i < copper.length; i++) {
-			for (let j = i + 1; j < copper.length; j++) {
+			for (const j of index.neighboursOf(i, profile.minSpacingMm)) {
+				if (j <= i) continue;
 				const a = copper[i];
 				const b = copper[j];
 				if (a.feature === b.feature) continue;

@@ -3,7 +3,8 @@ import { LENGTH_EPSILON_MM, distanceMm } from '../geometry';
 import type { Artwork, ShapeRole } from '../artwork';
 import type { FabProfile } from '../schemas/fab-profile';
 import { pieceMidpoint, type BoundaryPiece } from './boundary-piece';
-import { copperFeatures, isCopperLayer, type CopperShape } from './copper-features';
+import { isCopperLayer, layerCopper, type CopperShape } from './copper-features';
+import type { ShapeIndex } from './copper-index';
 import { closestOnPiece } from './piece-distance';
 import { isPointInShape } from './point-in-shape';
 import { narrowestWidth } from './shape-width';
@@ -11,25 +12,29 @@ import { locationOf, midpointOf, roundMm, type Violation } from './violation';
 
 const TRACE_ROLES: readonly ShapeRole[] = ['feed-line', 'transformer'];
 
-/** A piece is a joint, not an etched edge, when its midpoint lies on or in other copper. */
-function isJoint(piece: BoundaryPiece, others: readonly CopperShape[]): boolean {
+/**
+ * A piece is a joint, not an etched edge, when its midpoint lies on or in other copper. Only shapes
+ * whose box holds the midpoint (within the tolerance) can: the index finds those.
+ */
+function isJoint(piece: BoundaryPiece, self: number, copper: readonly CopperShape[], index: ShapeIndex): boolean {
 	const m = pieceMidpoint(piece);
-	return others.some((o) => isPointInShape(m, o.pieces) || o.pieces.some((p) => distanceMm(m, closestOnPiece(m, p)) <= LENGTH_EPSILON_MM));
+	return index
+		.near(m, LENGTH_EPSILON_MM)
+		.some((k) => k !== self && (isPointInShape(m, copper[k].pieces) || copper[k].pieces.some((p) => distanceMm(m, closestOnPiece(m, p)) <= LENGTH_EPSILON_MM)));
 }
 
 export function checkTraceWidth(artwork: Artwork, profile: FabProfile): Violation[] {
 	const out: Violation[] = [];
 	for (const layer of artwork.layers.filter(isCopperLayer)) {
-		const copper = copperFeatures(layer);
-		for (const c of copper) {
-			if (!TRACE_ROLES.includes(c.shape.role)) continue;
+		const { shapes: copper, index } = layerCopper(layer);
+		copper.forEach((c, self) => {
+			if (!TRACE_ROLES.includes(c.shape.role)) return;
 			const g = c.shape.geometry;
-			const others = copper.filter((o) => o !== c);
 			const width =
 				g.kind === 'circle'
 					? { widthMm: g.diameterMm, from: g.center, to: g.center }
-					: (narrowestWidth(c.pieces, (p) => !isJoint(p, others)) ?? narrowestWidth(c.pieces));
-			if (!width || !(width.widthMm < profile.minTraceWidthMm - LENGTH_EPSILON_MM)) continue;
+					: (narrowestWidth(c.pieces, (p) => !isJoint(p, self, copper, index)) ?? narrowestWidth(c.pieces));
+			if (!width || !(width.widthMm < profile.minTraceWidthMm - LENGTH_EPSILON_MM)) return;
 			out.push({
 				ruleId: 'trace-width',
 				layerId: layer.id,
@@ -39,7 +44,7 @@ export function checkTraceWidth(artwork: Artwork, profile: FabProfile): Violatio
 				requiredMm: profile.minTraceWidthMm,
 				message: `${c.shape.id} is ${roundMm(width.widthMm)} mm wide; ${profile.name} needs traces of at least ${profile.minTraceWidthMm} mm`
 			});
-		}
+		});
 	}
 	return out;
 }

@@ -1,14 +1,11 @@
 // Account and team forms: sign-up, sign-in, password reset, team name, invites, roles, API token names.
 import { z } from 'zod';
 import { plainText } from './plain-text';
+import { DISPLAY_NAME_MAX_LENGTH, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, TEAM_NAME_MAX_LENGTH, teamRoles, TOKEN_NAME_MAX_LENGTH } from './account-limits';
+import { commonPasswordReason } from './common-password';
 
-export const PASSWORD_MIN_LENGTH = 10;
-export const PASSWORD_MAX_LENGTH = 200;
-export const TEAM_NAME_MAX_LENGTH = 80;
-export const DISPLAY_NAME_MAX_LENGTH = 80;
-export const TOKEN_NAME_MAX_LENGTH = 60;
+export * from './account-limits';
 
-export const teamRoles = ['owner', 'editor', 'viewer'] as const;
 export const teamRoleSchema = z.enum(teamRoles, { message: 'role must be one of owner, editor, viewer' });
 
 /** E-mail addresses are compared in lower case (the app_user table insists on it). */
@@ -19,10 +16,16 @@ export const emailSchema = z
 	.max(254, { message: 'e-mail must be at most 254 characters' })
 	.pipe(z.email({ message: 'e-mail must look like name@example.org' }));
 
+/** A new password (sign-up, reset): long enough, and neither a common password nor an easily guessed pattern. */
 export const passwordSchema = z
 	.string({ message: 'password is required' })
 	.min(PASSWORD_MIN_LENGTH, { message: `password must be at least ${PASSWORD_MIN_LENGTH} characters` })
-	.max(PASSWORD_MAX_LENGTH, { message: `password must be at most ${PASSWORD_MAX_LENGTH} characters` });
+	.max(PASSWORD_MAX_LENGTH, { message: `password must be at most ${PASSWORD_MAX_LENGTH} characters` })
+	.superRefine((password, ctx) => {
+		if (password.length < PASSWORD_MIN_LENGTH || password.length > PASSWORD_MAX_LENGTH) return;
+		const reason = commonPasswordReason(password);
+		if (reason) ctx.addIssue({ code: 'custom', message: reason });
+	});
 
 export const displayNameSchema = z
 	.string({ message: 'name is required' })

@@ -3,7 +3,7 @@ export * from './design-input';
 export * from './input-error';
 export * from './fab-profile';
 export * from './laminate';
-export * from './account';
+export * from './account-limits';
 export * from './plain-text';
 export * from './revision-note';
 export * from './waiver-reason';

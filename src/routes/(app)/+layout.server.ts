@@ -5,6 +5,6 @@ import type { LayoutServerLoad } from './$types';
 
 export const load: LayoutServerLoad = async ({ locals, cookies, url }) => {
 	if (!locals.user) redirect(303, `/signin?next=${encodeURIComponent(url.pathname + url.search)}`);
-	const { current, teams } = await currentTeam(locals.user.id, cookies);
+	const { current, teams } = await currentTeam(locals.identity, cookies);
 	return { user: locals.user, team: current, teams };
 };

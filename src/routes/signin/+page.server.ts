@@ -1,15 +1,14 @@
-// Sign-in: one generic refusal, slowed down after repeated failures; a fresh session id on success (the old one, if any, ends).
+// Sign-in: one generic refusal, slowed down after repeated attempts (counted before the password is checked);
+// a fresh session id on success (the old one, if any, ends).
 import { fail, redirect } from '@sveltejs/kit';
 import {
-	AccountError,
 	checkCredentials,
-	clearSignInFailures,
 	formFailure,
 	formFields,
-	recordSignInFailure,
 	safeNextPath,
-	signInThrottle,
+	settleSuccessfulSignIn,
 	startSession,
+	takeSignInAttempt,
 	withoutSecrets,
 	type FormProblem
 } from '$lib/server/accounts';
@@ -26,7 +25,7 @@ export const actions: Actions = {
 		const values = await formFields(request);
 		const email = values.email ?? '';
 		const address = getClientAddress();
-		const { retryAfterSeconds } = await signInThrottle(email, address);
+		const { retryAfterSeconds } = await takeSignInAttempt(email, address);
 		if (retryAfterSeconds > 0) {
 			const message = `Too many failed attempts. Try again in ${Math.ceil(retryAfterSeconds / 60)} minute(s), or set a new password.`;
 			return fail(429, { form: 'signin', message, issues: {}, values: withoutSecrets(values) } as FormProblem);
@@ -35,10 +34,9 @@ export const actions: Actions = {
 		try {
 			userId = (await checkCredentials({ email, password: values.password })).id;
 		} catch (err) {
-			if (err instanceof AccountError) await recordSignInFailure(email, address);
 			return formFailure(err, 'signin', withoutSecrets(values));
 		}
-		await clearSignInFailures(email);
+		await settleSuccessfulSignIn(email, address);
 		const { cookie } = await startSession(userId, locals.sessionId);
 		cookies.set(cookie.name, cookie.value, { ...cookie.attributes, path: '/' });
 		redirect(303, safeNextPath(values.next));

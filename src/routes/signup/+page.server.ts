@@ -1,7 +1,7 @@
-// Sign-up: make an account and sign in; arriving from an invitation link, also join that team.
+// Sign-up: the same answer whether or not the e-mail has an account ("check your inbox"); the mail then
+// carries a confirmation link, or says that someone tried to sign up with a taken address.
 import { redirect } from '@sveltejs/kit';
-import { acceptInvite, AccountError, describeInvite, formFailure, formFields, signUp, startSession, withoutSecrets } from '$lib/server/accounts';
-import { chooseTeam } from '$lib/server/teams/current-team';
+import { describeInvite, formFailure, formFields, registerAccount, withoutSecrets } from '$lib/server/accounts';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ locals, url }) => {
@@ -15,24 +15,15 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 };
 
 export const actions: Actions = {
-	default: async ({ request, cookies, locals }) => {
+	default: async ({ request }) => {
 		const values = await formFields(request);
-		let userId: string;
 		try {
-			userId = (await signUp({ displayName: values.displayName, email: values.email, password: values.password })).id;
+			const next = values.invite ? `/invites/${encodeURIComponent(values.invite)}` : null;
+			// delivery is not awaited: waiting for the mail server would tell an observer which mail went out.
+			const { email } = await registerAccount({ displayName: values.displayName, email: values.email, password: values.password }, { next });
+			return { form: 'signup', registered: true, email, next };
 		} catch (err) {
 			return formFailure(err, 'signup', withoutSecrets(values));
-		}
-		const { cookie } = await startSession(userId, locals.sessionId);
-		cookies.set(cookie.name, cookie.value, { ...cookie.attributes, path: '/' });
-		if (!values.invite) redirect(303, '/teams?welcome=1');
-		try {
-			const { teamId } = await acceptInvite(values.invite, userId);
-			chooseTeam(cookies, teamId);
-			redirect(303, `/teams?joined=${encodeURIComponent(teamId)}`);
-		} catch (err) {
-			if (!(err instanceof AccountError)) throw err;
-			redirect(303, `/invites/${encodeURIComponent(values.invite)}`);
 		}
 	}
 };

@@ -16,15 +16,33 @@ export function newPerson(label: string): E2ePerson {
 	return { name: `${label[0].toUpperCase()}${label.slice(1)} ${tag}`, email: `${label}-${tag}@e2e.test`, password: E2E_PASSWORD };
 }
 
-/** Fills the sign-up form at `path` (/signup, or /signup?invite=… from an invitation) and submits it. */
+/**
+ * Fills the sign-up form at `path` (/signup, or /signup?invite=… from an invitation), submits it, follows the
+ * confirmation link from the caught mail, confirms, and signs in. Ends signed in: on /teams, or on the
+ * invitation page when the sign-up came from one.
+ */
 export async function signUp(page: Page, who: E2ePerson, path = '/signup'): Promise<void> {
 	if (path) await page.goto(path);
+	await expect(page.getByLabel('Your name')).toBeVisible();
+	const fromInvite = new URL(page.url()).searchParams.has('invite');
 	await page.getByLabel('Your name').fill(who.name);
 	await page.getByLabel('E-mail').fill(who.email);
 	await page.getByLabel('Password').fill(who.password);
 	await page.getByRole('button', { name: /Create account/ }).click();
-	await expect(page).toHaveURL(/\/teams/);
+	await expect(page.getByTestId('signup-sent')).toContainText(`Check your inbox at ${who.email}`);
+	const mail = await latestMailTo(page.request, who.email, 10_000, CONFIRM_SUBJECT);
+	await page.goto(linkIn(mail, '/confirm/'));
+	await page.getByRole('button', { name: 'Confirm my address' }).click();
+	await expect(page).toHaveURL(/\/signin\?notice=email-confirmed/);
+	await expect(page.getByRole('status')).toContainText('Your e-mail address is confirmed');
+	await page.getByLabel('E-mail').fill(who.email);
+	await page.getByLabel('Password').fill(who.password);
+	await page.getByRole('button', { name: 'Sign in' }).click();
+	await expect(page.getByTestId('signed-in-as')).toBeVisible();
+	await expect(page).toHaveURL(fromInvite ? /\/invites\// : /\/teams/);
 }
+
+export const CONFIRM_SUBJECT = 'Confirm your e-mail for Fringefield';
 
 export async function signIn(page: Page, email: string, password: string, next?: string): Promise<void> {
 	await page.goto(next ? `/signin?next=${encodeURIComponent(next)}` : '/signin');
@@ -67,21 +85,22 @@ export interface CaughtMail {
 	links: string[];
 }
 
-/** The newest caught message to `email`, read from the dev mailbox JSON (polls until it arrives). */
-export async function latestMailTo(request: APIRequestContext, email: string, timeoutMs = 10_000): Promise<CaughtMail> {
+/** The newest caught message to `email` (with `subject`, when given), read from the dev mailbox JSON (polls until it arrives). */
+export async function latestMailTo(request: APIRequestContext, email: string, timeoutMs = 10_000, subject?: string): Promise<CaughtMail> {
 	const deadline = Date.now() + timeoutMs;
 	for (;;) {
 		const res = await request.get(`/dev/mailbox.json?to=${encodeURIComponent(email)}`);
 		expect(res.status()).toBe(200);
 		const { messages } = (await res.json()) as { messages: CaughtMail[] };
-		if (messages.length > 0) return messages[0];
+		const wanted = subject === undefined ? messages : messages.filter((m) => m.subject === subject);
+		if (wanted.length > 0) return wanted[0];
 		if (Date.now() > deadline) throw new Error(`no mail to ${email} within ${timeoutMs} ms`);
 		await new Promise((r) => setTimeout(r, 200));
 	}
 }
 
 /** The one link in a message whose path starts with `prefix`, as a path on the app (the e2e origin). */
-export function linkIn(mail: CaughtMail, prefix: '/invites/' | '/reset/'): string {
+export function linkIn(mail: CaughtMail, prefix: '/invites/' | '/reset/' | '/confirm/'): string {
 	const link = mail.links.find((l) => new URL(l).pathname.startsWith(prefix));
 	if (!link) throw new Error(`no ${prefix} link in "${mail.subject}"`);
 	const url = new URL(link);
@@ -90,7 +109,8 @@ export function linkIn(mail: CaughtMail, prefix: '/invites/' | '/reset/'): strin
 
 /**
  * Journey (4) up to joining: an owner makes a team and invites a new person as viewer; the invitee
- * follows the link from the caught mail, signs up from it and lands in the team as viewer.
+ * follows the link from the caught mail, signs up from it, confirms the address, signs in, accepts and
+ * lands in the team as viewer.
  * Returns both people and the team, with `invitee` signed in on `inviteePage`.
  */
 export async function inviteViewerJourney(ownerPage: Page, inviteePage: Page, teamName: string) {
@@ -103,5 +123,7 @@ export async function inviteViewerJourney(ownerPage: Page, inviteePage: Page, te
 	await inviteePage.goto(linkIn(mail, '/invites/'));
 	await inviteePage.getByRole('link', { name: 'Create an account and join' }).click();
 	await signUp(inviteePage, invitee, '');
+	await inviteePage.getByRole('button', { name: 'Accept and join as viewer' }).click();
+	await expect(inviteePage).toHaveURL(/\/teams\?joined=/);
 	return { owner, invitee, teamId, mail };
 }

@@ -1,17 +1,14 @@
 // Journey steps shared by the download and API e2e files: a fresh person, a team, a design, a token.
 import { expect, type Page } from '@playwright/test';
+import { signUp as signUpConfirmed } from './accounts';
 
 export function uniqueSuffix(): string {
 	return `${Date.now().toString(36)}${Math.floor(Math.random() * 1e6).toString(36)}`;
 }
 
+/** Sign-up as people do it (form, confirmation link from the caught mail, sign-in): the accounts journey's own step. */
 export async function signUp(page: Page, who: { name: string; email: string; password: string }): Promise<void> {
-	await page.goto('/signup');
-	await page.getByLabel('Your name').fill(who.name);
-	await page.getByLabel('E-mail').fill(who.email);
-	await page.getByLabel('Password').fill(who.password);
-	await page.getByRole('button', { name: 'Create account' }).click();
-	await page.waitForURL(/\/teams/);
+	await signUpConfirmed(page, who);
 }
 
 export async function makeTeam(page: Page, name: string): Promise<string> {

@@ -32,8 +32,10 @@ describe('inviting', () => {
 		const email = emailFor('newcomer', suffix);
 		const token = await invite(email, 'viewer');
 		const mail = await smtp.waitFor(email);
-		expect(mail.subject).toBe(`owner ${suffix} invited you to Accounts team ${suffix} on Fringefield`);
+		expect(mail.subject).toBe('An invitation to a team on Fringefield');
 		expect(mail.text).toContain('as a viewer');
+		expect(mail.text).toContain(`owner ${suffix} <${team.owner.email}> invited you`);
+		expect(mail.text).toContain(`"Accounts team ${suffix}"`);
 		const rows = await getDb().selectFrom('team_invite').selectAll().where('email', '=', email).execute();
 		expect(rows).toHaveLength(1);
 		expect(rows[0].token_hash).toMatch(/^[0-9a-f]{64}$/);

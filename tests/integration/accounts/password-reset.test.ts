@@ -57,7 +57,7 @@ describe('using a reset link', () => {
 		const user = await person('once', suffix);
 		const token = await linkFor(user.email);
 		expect(await findPasswordResetLink(token)).toEqual({ email: user.email });
-		await completePasswordReset(token, { password: 'a brand new passphrase' });
+		await (await completePasswordReset(token, { password: 'a brand new passphrase' })).delivery;
 		await expect(checkCredentials({ email: user.email, password: 'a brand new passphrase' })).resolves.toMatchObject({ id: user.id });
 		await expect(checkCredentials({ email: user.email, password: TEST_PASSWORD })).rejects.toBeInstanceOf(AccountError);
 		expect(await findPasswordResetLink(token)).toBeNull();
@@ -85,7 +85,8 @@ describe('using a reset link', () => {
 		const sessions = await Promise.all([sessionFor(user.id), sessionFor(user.id), sessionFor(user.id)]);
 		const other = await sessionFor(bystander.id);
 		const token = await linkFor(user.email);
-		const { endedSessions } = await completePasswordReset(token, { password: 'signed out everywhere' });
+		const { endedSessions, delivery } = await completePasswordReset(token, { password: 'signed out everywhere' });
+		await delivery;
 		expect(endedSessions).toBe(3);
 		for (const id of sessions) expect((await getLucia().validateSession(id)).session).toBeNull();
 		expect((await getLucia().validateSession(other)).session?.userId).toBe(bystander.id);
@@ -95,7 +96,7 @@ describe('using a reset link', () => {
 		const user = await person('twolinks', suffix);
 		const first = await linkFor(user.email);
 		const second = await linkFor(user.email);
-		await completePasswordReset(second, { password: 'second link wins' });
+		await (await completePasswordReset(second, { password: 'second link wins' })).delivery;
 		expect(await findPasswordResetLink(first)).toBeNull();
 	});
 

@@ -14,7 +14,7 @@ import * as teamPage from '../../../src/routes/(app)/teams/[teamId]/+page.server
 import * as tokensPage from '../../../src/routes/(app)/settings/tokens/+page.server';
 import * as invitePage from '../../../src/routes/invites/[token]/+page.server';
 import * as signoutPage from '../../../src/routes/signout/+page.server';
-import { addMember, emailFor, person, teamWithRoles, uniqueSuffix, type TeamFixture } from './helpers/people';
+import { addMember, emailFor, forgetInviteAllowance, person, teamWithRoles, uniqueSuffix, type TeamFixture } from './helpers/people';
 import { call, cookieJar, identityFor, sessionFor, type CallOptions, type Outcome } from './helpers/route-event';
 import { startSmtpCatcher, tokenFromLink, type SmtpCatcher } from './helpers/smtp-catcher';
 
@@ -51,7 +51,7 @@ function userIdOf(who: Caller): string | null {
 async function withParent(opts: CallOptions): Promise<CallOptions> {
 	const user = opts.identity.user;
 	const jar = opts.cookies ?? cookieJar();
-	const layout = user ? await currentTeam(user.id, jar) : { current: null, teams: [] };
+	const layout = user ? await currentTeam(opts.identity, jar) : { current: null, teams: [] };
 	return { ...opts, cookies: jar, parent: async () => ({ user, team: layout.current, teams: layout.teams }) };
 }
 
@@ -62,6 +62,7 @@ async function outcome(fn: Parameters<typeof call>[0], opts: CallOptions): Promi
 const teamPath = () => `/teams/${team.teamId}`;
 
 async function freshInviteToken(email: string): Promise<string> {
+	await forgetInviteAllowance(team.teamId, team.owner.id);
 	await inviteToTeam(team.teamId, team.owner.id, { email, role: 'viewer' });
 	return tokenFromLink((await smtp.waitFor(email)).links[0], '/invites/');
 }
@@ -94,14 +95,17 @@ const cases: RouteCase[] = [
 	{
 		name: 'action /teams/[teamId] ?/invite',
 		expected: ownersOnly,
-		run: (c) =>
-			outcome(teamPage.actions.invite as never, { identity: c.identity, path: `${teamPath()}?/invite`, params: { teamId: team.teamId }, form: { email: emailFor(`invited-by-${c.who}`, suffix), role: 'viewer' } })
+		run: async (c) => {
+			await forgetInviteAllowance(team.teamId, team.owner.id);
+			return outcome(teamPage.actions.invite as never, { identity: c.identity, path: `${teamPath()}?/invite`, params: { teamId: team.teamId }, form: { email: emailFor(`invited-by-${c.who}`, suffix), role: 'viewer' } });
+		}
 	},
 	{
 		name: 'action /teams/[teamId] ?/withdraw',
 		expected: ownersOnly,
 		run: async (c) => {
 			const email = emailFor(`withdraw-${c.who}`, suffix);
+			await forgetInviteAllowance(team.teamId, team.owner.id);
 			await inviteToTeam(team.teamId, team.owner.id, { email, role: 'viewer' });
 			const inviteId = (await listPendingInvites(team.teamId)).find((i) => i.email === email)!.id;
 			return outcome(teamPage.actions.withdraw as never, { identity: c.identity, path: `${teamPath()}?/withdraw`, params: { teamId: team.teamId }, form: { inviteId } });

@@ -137,7 +137,7 @@ describe('exporting a sweep plan', () => {
 	});
 
 	it('from the page: the same bytes, recorded via ui', async () => {
-		const session = { user: { id: team.users.editor.id, email: team.users.editor.email, displayName: team.users.editor.displayName }, sessionId: 's', apiToken: null };
+		const session = { user: { id: team.users.editor.id, email: team.users.editor.email, displayName: team.users.editor.displayName, emailVerified: true }, sessionId: 's', apiToken: null };
 		const res = await call(pageRoute.GET as never, session, { designId, label: 'A', planId });
 		expect(res.status).toBe(200);
 		expect(res.headers.get('content-disposition')).toMatch(/^attachment; filename=".+\.sweep\.json"$/);

@@ -20,14 +20,29 @@ function toRegion(item: ImageItem): Region | null {
 	return { outer: createPolygonContour(outer), holes: holes.map((h) => createPolygonContour(h)) };
 }
 
-/** Applies the items in order: dark adds, clear removes what is there (Gerber's LPD/LPC), via polygon-clipping. */
+/**
+ * Applies the items in order: dark adds, clear removes what is there (Gerber's LPD/LPC), via polygon-clipping.
+ * A run of items of one polarity is applied in one operation ((image ∪ d1 ∪ … ∪ dk) − (c1 ∪ … ∪ cm) is the
+ * same image as one item at a time), so an array's thousands of shapes cost one sweep, not one per shape.
+ */
 export function composeImage(items: readonly ImageItem[]): LayerImage {
 	let image: Region[] = [];
+	let run: Region[] = [];
+	let runPolarity: ImageItem['polarity'] = 'dark';
+	const flush = () => {
+		if (run.length === 0) return;
+		if (runPolarity === 'dark') image = unionRegions(image, ...run.map((r) => [r]));
+		else if (image.length) image = differenceRegions(image, ...run.map((r) => [r]));
+		run = [];
+	};
 	for (const item of items) {
 		const r = toRegion(item);
 		if (!r) continue;
-		image = item.polarity === 'dark' ? unionRegions(image, [r]) : image.length ? differenceRegions(image, [r]) : image;
+		if (item.polarity !== runPolarity) flush();
+		runPolarity = item.polarity;
+		run.push(r);
 	}
+	flush();
 	return { regions: image, areaMm2: imageArea(image), bounds: imageBounds(image) };
 }
 

@@ -31,3 +31,32 @@ const grants: Record<TeamRole, ReadonlySet<Action>> = {
 export function can(role: TeamRole | null | undefined, action: Action): boolean {
 	return role ? grants[role].has(action) : false;
 }
+
+/**
+ * Steps that need a confirmed e-mail address on top of any role: an address nobody has shown to be theirs
+ * must not hold a team's keys, mint API tokens or send mail in our name.
+ */
+export const confirmedEmailSteps = [
+	'token.create', // make a personal API token
+	'invite.send', // send an invitation (the mail shows the sender's address)
+	'invite.accept-owner', // accept an invitation as owner
+	'invite.receive-owner' // be invited as owner (when the address already has an account)
+] as const;
+export type ConfirmedEmailStep = (typeof confirmedEmailSteps)[number];
+
+export interface AccountState {
+	emailVerified: boolean;
+}
+
+/** Whether the account itself (not its role) may take `step`. */
+export function canAsAccount(account: AccountState | null | undefined, step: ConfirmedEmailStep): boolean {
+	return !!account?.emailVerified && (confirmedEmailSteps as readonly string[]).includes(step);
+}
+
+/** The sentence shown when an unconfirmed account is refused, next to a "send the link again" button. */
+export const CONFIRM_EMAIL_FIRST: Record<ConfirmedEmailStep, string> = {
+	'token.create': 'Confirm your e-mail address before making API tokens: follow the link we mailed you when you signed up.',
+	'invite.send': 'Confirm your e-mail address before inviting people: the invitation shows it to them. Follow the link we mailed you when you signed up.',
+	'invite.accept-owner': 'Confirm your e-mail address before joining a team as owner: follow the link we mailed you when you signed up.',
+	'invite.receive-owner': 'That person has not confirmed their e-mail address yet, so they cannot be made an owner by invitation. Invite them as editor or viewer, or ask them to confirm first.'
+};

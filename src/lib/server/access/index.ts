@@ -3,7 +3,7 @@ import { error } from '@sveltejs/kit';
 import type { TeamRole } from '../db/team.table';
 import { can, type Action } from './can';
 
-export { can, actions, type Action } from './can';
+export { can, actions, canAsAccount, confirmedEmailSteps, CONFIRM_EMAIL_FIRST, type Action, type AccountState, type ConfirmedEmailStep } from './can';
 
 /**
  * Throws unless `role` may do `action`. A non-member gets 404 (no existence leak);

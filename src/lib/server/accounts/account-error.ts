@@ -6,7 +6,10 @@ export type AccountErrorCode =
 	| 'last-owner' // the change would leave the team without an owner
 	| 'not-member' // the person named is not a member of this team
 	| 'not-found' // the invitation or token named does not exist (for this team or person)
-	| 'limit-reached'; // a per-person limit (teams, live API tokens) is used up
+	| 'limit-reached' // a per-person limit (teams, live API tokens) is used up
+	| 'too-many' // an hourly allowance (invitations, confirmation mails) is used up: try again later
+	| 'email-unconfirmed' // the caller's own address is not confirmed yet (the page offers to send the link again)
+	| 'invitee-unconfirmed'; // the person invited as owner has an account whose address is not confirmed
 
 export class AccountError extends Error {
 	readonly name = 'AccountError';

@@ -11,26 +11,31 @@ const statusOf: Record<AccountErrorCode, number> = {
 	'last-owner': 409,
 	'not-member': 404,
 	'not-found': 404,
-	'limit-reached': 409
+	'limit-reached': 409,
+	'too-many': 429,
+	'email-unconfirmed': 403,
+	'invitee-unconfirmed': 409
 };
 
 export interface FormProblem {
 	/** Which form on the page failed (several share one page). */
 	form: string;
 	message: string;
+	/** The refusal's code, when it was an expected one (pages offer a way out for some). */
+	code?: AccountErrorCode;
 	issues: Record<string, string>;
 	values: Record<string, string>;
 }
 
 /** Turns an expected error into `fail(...)`; anything else is rethrown (→ handleError). */
 export function formFailure(err: unknown, form: string, values: Record<string, string> = {}) {
-	const problem = (status: number, message: string, issues: Record<string, string> = {}) => fail(status, { form, message, issues, values } as FormProblem);
+	const problem = (status: number, message: string, issues: Record<string, string> = {}, code?: AccountErrorCode) => fail(status, { form, message, issues, values, code } as FormProblem);
 	if (err instanceof InputError) {
 		const issues: Record<string, string> = {};
 		for (const i of err.issues) issues[i.path || 'form'] ??= i.message;
 		return problem(400, 'Please correct the marked fields.', issues);
 	}
-	if (err instanceof AccountError) return problem(statusOf[err.code], err.message);
+	if (err instanceof AccountError) return problem(statusOf[err.code], err.message, {}, err.code);
 	if (err instanceof MailDeliveryError) {
 		console.error(err.message);
 		return problem(503, 'The e-mail could not be sent just now; please try again in a minute.');

@@ -1,4 +1,6 @@
 // Invitations by e-mail: a single-use link valid for seven days; accepting makes you a member in the invited role.
+// Only a confirmed address may invite (the mail shows it), within an hourly allowance per person and per team; the
+// subject is fixed (no team name, no link). Sending, withdrawing and accepting are written to the team's security log.
 import { randomUUID } from 'node:crypto';
 import type { TeamRole } from '../db/team.table';
 import { getDb } from '../db';
@@ -6,6 +8,10 @@ import * as inviteQueries from '../db/invite.queries';
 import * as memberQueries from '../db/member.queries';
 import * as userQueries from '../db/user.queries';
 import { appOrigin, sendMail } from '../mail';
+import * as verificationQueries from '../db/verification.queries';
+import { recordAuditEvent } from '../audit/record-audit-event';
+import { canAsAccount, CONFIRM_EMAIL_FIRST } from '../access/can';
+import { takeInviteAllowance } from './attempt-throttle';
 import { parseWith } from '$lib/schemas/input-error';
 import { inviteSchema } from '$lib/schemas/account';
 import { AccountError } from './account-error';
@@ -27,6 +33,13 @@ export async function inviteToTeam(teamId: string, invitedBy: string, raw: { ema
 	const db = getDb();
 	const [team, inviter] = await Promise.all([memberQueries.findTeamById(db, teamId), userQueries.findUserById(db, invitedBy)]);
 	if (!team || !inviter) throw new AccountError('not-found', 'Team not found');
+	if (!canAsAccount({ emailVerified: inviter.email_verified_at !== null }, 'invite.send')) throw new AccountError('email-unconfirmed', CONFIRM_EMAIL_FIRST['invite.send']);
+	if (role === 'owner') {
+		const invitee = await verificationQueries.findEmailVerifiedAtByEmail(db, email);
+		if (invitee && !canAsAccount({ emailVerified: invitee.emailVerifiedAt !== null }, 'invite.receive-owner')) throw new AccountError('invitee-unconfirmed', CONFIRM_EMAIL_FIRST['invite.receive-owner']);
+	}
+	const { retryAfterSeconds } = await takeInviteAllowance(teamId, invitedBy);
+	if (retryAfterSeconds > 0) throw new AccountError('too-many', `Many invitations were sent from this team or by you in the last hour; try again in ${Math.ceil(retryAfterSeconds / 60)} minute(s).`);
 	const { token, tokenHash } = createLinkToken();
 	const inviteId = randomUUID();
 	const expiresAt = new Date(now.getTime() + INVITE_LIFETIME_MS);
@@ -34,6 +47,7 @@ export async function inviteToTeam(teamId: string, invitedBy: string, raw: { ema
 	try {
 		await sendMail(email, 'invite', {
 			inviterName: inviter.display_name,
+			inviterEmail: inviter.email,
 			teamName: team.name,
 			role,
 			roleArticle: role === 'viewer' ? 'a' : 'an',
@@ -44,6 +58,7 @@ export async function inviteToTeam(teamId: string, invitedBy: string, raw: { ema
 		await inviteQueries.deletePendingInviteByTeamAndId(db, teamId, inviteId);
 		throw err;
 	}
+	await recordAuditEvent({ kind: 'invite.sent', teamId, actorUserId: invitedBy, details: { inviteId, email, role } });
 	return { inviteId };
 }
 
@@ -52,8 +67,15 @@ export async function listPendingInvites(teamId: string, now = new Date()): Prom
 	return rows.map((r) => ({ id: r.id, email: r.email, role: r.role, expiresAt: r.expires_at, createdAt: r.created_at }));
 }
 
-export async function withdrawInvite(teamId: string, inviteId: string): Promise<void> {
-	if (!(await inviteQueries.deletePendingInviteByTeamAndId(getDb(), teamId, inviteId))) throw new AccountError('not-found', 'That invitation is not pending any more.');
+/** `actorId`: who withdrew it, for the team's security log. */
+export async function withdrawInvite(teamId: string, inviteId: string, actorId: string | null = null): Promise<void> {
+	await getDb()
+		.transaction()
+		.execute(async (trx) => {
+			const withdrawn = await inviteQueries.deletePendingInviteByTeamAndIdReturning(trx, teamId, inviteId);
+			if (!withdrawn) throw new AccountError('not-found', 'That invitation is not pending any more.');
+			await recordAuditEvent({ kind: 'invite.revoked', teamId, actorUserId: actorId, details: { inviteId, email: withdrawn.email, role: withdrawn.role, reason: 'withdrawn' } }, trx);
+		});
 }
 
 export type InviteState = 'live' | 'used' | 'expired';
@@ -86,7 +108,13 @@ export async function acceptInvite(token: string, userId: string, now = new Date
 		.execute(async (trx) => {
 			const invite = await inviteQueries.consumeInviteByHash(trx, hashLinkToken(token), now);
 			if (!invite) throw new AccountError('link-invalid', 'This invitation is not valid any more (used, expired or withdrawn). Ask the team owner for a new one.');
+			if (invite.role === 'owner') {
+				const verifiedAt = await verificationQueries.findEmailVerifiedAtById(trx, userId);
+				// Thrown inside the transaction: the invitation stays unused for when the address is confirmed.
+				if (!canAsAccount({ emailVerified: verifiedAt !== null }, 'invite.accept-owner')) throw new AccountError('email-unconfirmed', CONFIRM_EMAIL_FIRST['invite.accept-owner']);
+			}
 			const joined = await memberQueries.insertMember(trx, invite.team_id, userId, invite.role);
+			await recordAuditEvent({ kind: 'invite.accepted', teamId: invite.team_id, actorUserId: userId, details: { inviteId: invite.id, role: invite.role, joined } }, trx);
 			return { teamId: invite.team_id, role: invite.role, joined };
 		});
 }

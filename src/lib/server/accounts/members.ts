@@ -4,6 +4,7 @@ import type { TeamRole } from '../db/team.table';
 import { getDb } from '../db';
 import * as memberQueries from '../db/member.queries';
 import * as tokenQueries from '../db/token.queries';
+import * as inviteQueries from '../db/invite.queries';
 import { recordAuditEvent } from '../audit/record-audit-event';
 import { parseWith } from '$lib/schemas/input-error';
 import { changeRoleSchema, memberRefSchema } from '$lib/schemas/account';
@@ -41,7 +42,10 @@ export async function changeMemberRole(teamId: string, raw: { userId: unknown; r
 		});
 }
 
-/** Removes a member (and revokes the API tokens they made for this team). */
+/**
+ * Removes a member, revokes the API tokens they made for this team, and withdraws the team's pending
+ * invitations they sent or that name their address (so nobody comes back through an earlier invitation).
+ */
 export async function removeMember(teamId: string, raw: { userId: unknown }, now = new Date(), actorId: string | null = null): Promise<void> {
 	const { userId } = parseWith(memberRefSchema, raw);
 	await getDb()
@@ -53,6 +57,11 @@ export async function removeMember(teamId: string, raw: { userId: unknown }, now
 			if (current.role === 'owner' && (await memberQueries.countOwnersByTeam(trx, teamId)) <= 1) throw new AccountError('last-owner', LAST_OWNER);
 			await memberQueries.deleteMember(trx, teamId, userId);
 			await tokenQueries.revokeTokensByTeamAndUser(trx, teamId, userId, now);
+			const invites = await inviteQueries.deletePendingInvitesByTeamAndPerson(trx, teamId, userId, current.email);
+			for (const i of invites) {
+				const reason = i.invited_by === userId ? 'sender removed from the team' : 'invited person removed from the team';
+				await recordAuditEvent({ kind: 'invite.revoked', teamId, actorUserId: actorId, details: { inviteId: i.id, email: i.email, role: i.role, reason } }, trx);
+			}
 			await recordAuditEvent({ kind: 'member.removed', teamId, actorUserId: actorId, details: { memberId: userId, memberEmail: current.email, role: current.role } }, trx);
 		});
 }

@@ -11,7 +11,7 @@ function createLucia() {
 	return new Lucia(adapter, {
 		sessionExpiresIn: new TimeSpan(30, 'd'),
 		sessionCookie: { name: 'ff_session', attributes: { secure, sameSite: 'lax' } },
-		getUserAttributes: (row) => ({ email: row.email, displayName: row.display_name })
+		getUserAttributes: (row) => ({ email: row.email, displayName: row.display_name, emailVerified: row.email_verified_at !== null })
 	});
 }
 
@@ -23,6 +23,6 @@ export function getLucia() {
 declare module 'lucia' {
 	interface Register {
 		Lucia: ReturnType<typeof createLucia>;
-		DatabaseUserAttributes: { email: string; display_name: string };
+		DatabaseUserAttributes: { email: string; display_name: string; email_verified_at: Date | null };
 	}
 }

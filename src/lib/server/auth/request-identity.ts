@@ -9,6 +9,8 @@ export interface RequestUser {
 	id: string;
 	email: string;
 	displayName: string;
+	/** The person followed the confirmation link mailed at sign-up (or completed a password reset). */
+	emailVerified: boolean;
 }
 
 export interface RequestIdentity {
@@ -29,7 +31,7 @@ export async function identify(request: Request, cookies: Cookies): Promise<Requ
 		if (!token) return anonymous;
 		if (tokenQueries.isTouchDue(token.last_used_at)) await tokenQueries.touchTokenById(getDb(), token.id);
 		return {
-			user: { id: token.user_id, email: token.email, displayName: token.display_name },
+			user: { id: token.user_id, email: token.email, displayName: token.display_name, emailVerified: token.email_verified_at !== null },
 			sessionId: null,
 			apiToken: { id: token.id, teamId: token.team_id }
 		};
@@ -48,5 +50,5 @@ export async function identify(request: Request, cookies: Cookies): Promise<Requ
 		cookies.set(blank.name, blank.value, { path: '.', ...blank.attributes });
 		return anonymous;
 	}
-	return { user: { id: user.id, email: user.email, displayName: user.displayName }, sessionId: session.id, apiToken: null };
+	return { user: { id: user.id, email: user.email, displayName: user.displayName, emailVerified: user.emailVerified }, sessionId: session.id, apiToken: null };
 }

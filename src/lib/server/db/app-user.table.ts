@@ -6,6 +6,8 @@ export interface AppUserTable {
 	email: string;
 	display_name: string;
 	password_hash: string;
+	/** NULL until the person follows the confirmation link mailed at sign-up (or completes a password reset). */
+	email_verified_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
 	created_at: ColumnType<Date, Date | string | undefined, never>;
 }
 export type AppUserRow = Selectable<AppUserTable>;

@@ -2,11 +2,13 @@
 import type { ApiTokenTable } from './api-token.table';
 import type { AppUserTable } from './app-user.table';
 import type { DesignTable, RevisionTable } from './design.table';
+import type { EmailVerificationTable } from './email-verification.table';
 import type { ExportRecordTable } from './export-record.table';
 import type { FabProfileTable } from './fab-profile.table';
 import type { LaminateTable } from './laminate.table';
 import type { MeasurementTable } from './measurement.table';
 import type { PasswordResetTable } from './password-reset.table';
+import type { RateLimitTable } from './rate-limit.table';
 import type { SweepPlanTable } from './sweep-plan.table';
 import type { TeamInviteTable } from './team-invite.table';
 import type { TeamMemberTable, TeamTable } from './team.table';
@@ -19,6 +21,7 @@ export interface Database {
 	team_member: TeamMemberTable;
 	team_invite: TeamInviteTable;
 	password_reset: PasswordResetTable;
+	email_verification: EmailVerificationTable;
 	laminate: LaminateTable;
 	design: DesignTable;
 	revision: RevisionTable;
@@ -27,4 +30,5 @@ export interface Database {
 	sweep_plan: SweepPlanTable;
 	measurement: MeasurementTable;
 	fab_profile: FabProfileTable;
+	rate_limit: RateLimitTable;
 }

@@ -55,3 +55,19 @@ export async function deletePendingInviteByTeamAndId(db: Kysely<Database>, teamI
 	const result = await db.deleteFrom('team_invite').where('team_id', '=', teamId).where('id', '=', id).where('accepted_at', 'is', null).executeTakeFirst();
 	return Number(result.numDeletedRows) > 0;
 }
+
+/** Withdraws a pending invitation of a team; returns what was withdrawn, or undefined. */
+export async function deletePendingInviteByTeamAndIdReturning(db: Kysely<Database>, teamId: string, id: string) {
+	return db.deleteFrom('team_invite').where('team_id', '=', teamId).where('id', '=', id).where('accepted_at', 'is', null).returning(['id', 'email', 'role']).executeTakeFirst();
+}
+
+/** Withdraws a team's pending invitations sent by a person or naming their address; returns them. */
+export async function deletePendingInvitesByTeamAndPerson(db: Kysely<Database>, teamId: string, userId: string, email: string) {
+	return db
+		.deleteFrom('team_invite')
+		.where('team_id', '=', teamId)
+		.where('accepted_at', 'is', null)
+		.where((eb) => eb.or([eb('invited_by', '=', userId), eb('email', '=', email)]))
+		.returning(['id', 'email', 'role', 'invited_by'])
+		.execute();
+}

@@ -38,6 +38,18 @@ export async function revokeTokensByTeamAndUser(db: Kysely<Database>, teamId: st
 	await db.updateTable('api_token').set({ revoked_at: now }).where('team_id', '=', teamId).where('user_id', '=', userId).where('revoked_at', 'is', null).execute();
 }
 
+/** Revokes every live token of a person (a completed password reset); returns what was revoked, oldest first. */
+export async function revokeLiveTokensByUser(db: Kysely<Database>, userId: string, now: Date) {
+	const rows = await db
+		.updateTable('api_token')
+		.set({ revoked_at: now })
+		.where('user_id', '=', userId)
+		.where('revoked_at', 'is', null)
+		.returning(['id', 'name', 'team_id', 'created_at'])
+		.execute();
+	return rows.sort((a, b) => a.created_at.getTime() - b.created_at.getTime() || a.id.localeCompare(b.id));
+}
+
 /** The stored row of a token (tests check that only the hash is kept). */
 export async function findTokenRowById(db: Kysely<Database>, id: string) {
 	return db.selectFrom('api_token').selectAll().where('id', '=', id).executeTakeFirst();
@@ -47,7 +59,7 @@ export async function findLiveTokenByHash(db: Kysely<Database>, tokenHash: strin
 	return db
 		.selectFrom('api_token')
 		.innerJoin('app_user', 'app_user.id', 'api_token.user_id')
-		.select(['api_token.id', 'api_token.team_id', 'api_token.user_id', 'api_token.last_used_at', 'app_user.email', 'app_user.display_name'])
+		.select(['api_token.id', 'api_token.team_id', 'api_token.user_id', 'api_token.last_used_at', 'app_user.email', 'app_user.display_name', 'app_user.email_verified_at'])
 		.where('api_token.token_hash', '=', tokenHash)
 		.where('api_token.revoked_at', 'is', null)
 		.executeTakeFirst();

@@ -4,11 +4,11 @@ import type { Database } from './database';
 import type { InsertableAppUserRow } from './app-user.table';
 
 export async function findUserByEmail(db: Kysely<Database>, email: string) {
-	return db.selectFrom('app_user').select(['id', 'email', 'display_name', 'password_hash']).where('email', '=', email).executeTakeFirst();
+	return db.selectFrom('app_user').select(['id', 'email', 'display_name', 'password_hash', 'email_verified_at']).where('email', '=', email).executeTakeFirst();
 }
 
 export async function findUserById(db: Kysely<Database>, id: string) {
-	return db.selectFrom('app_user').select(['id', 'email', 'display_name']).where('id', '=', id).executeTakeFirst();
+	return db.selectFrom('app_user').select(['id', 'email', 'display_name', 'email_verified_at']).where('id', '=', id).executeTakeFirst();
 }
 
 /** Inserts a person; returns undefined when the e-mail is taken. */

@@ -1,18 +1,20 @@
-// One download: the design-rule gate, then build the revision's bytes (read back before they are offered),
-// hash every file and the delivery, write exactly one export record (with the waiver, if one was needed).
+// One download: one worker task runs the design-rule gate, builds the revision's bytes (read back before they are
+// offered) and hashes every file and the delivery; then exactly one export record (with the waiver, if one was needed).
 import type { Violation } from '$lib/drc';
 import type { ExportKind } from '$lib/schemas/api';
 import type { FabProfile } from '$lib/schemas/fab-profile';
+import { getDb } from '../db';
 import type { ExportedFile, ExportVia } from '../db/export-record.table';
-import { buildExport, type BuiltExport } from './build-export';
+import { revisionFabProfile } from '../fab-profiles';
+import { buildExport, exportMetaOf } from './build-export';
 import { createImmutableCache } from './immutable-cache';
 import type { ExportOptions } from './export-dependencies';
-import { checkExportTarget } from './export-gate';
 import { ExportRefusedError } from './export-refusal';
 import type { ExportTarget } from './export-target';
+import type { ExportBuildReport } from './export-work';
 import { recordExport } from './record-export';
-import { sha256Hex } from '$lib/formats/manifest';
-import type { PreparedDesign } from '$lib/design';
+import { refuseReadBack } from './refuse-read-back';
+import { error } from '@sveltejs/kit';
 
 export interface DeliveredExport {
 	exportId: string;
@@ -29,30 +31,17 @@ export interface DeliveredExport {
 	waivedViolations: Violation[];
 }
 
-interface HashedExport {
-	built: BuiltExport;
-	files: ExportedFile[];
-	sha256: string;
-}
-
 /**
  * A revision never changes, and neither do the profile it recorded or the bytes its files make: a download's
- * build and hashes are kept (at most 64 deliveries or 64 MB) and shared by every later download of the same
- * revision, kind and waiver. Each download still passes the gate and writes its own export record.
+ * outcome (bytes and hashes, or the gate's refusal) is kept (at most 64 deliveries or 64 MB) and shared by every
+ * later download of the same revision, kind and waiver; concurrent downloads of one key share one task. Each
+ * delivered download still writes its own export record.
  */
-const builtExports = createImmutableCache<HashedExport>({
+const builtExports = createImmutableCache<ExportBuildReport>({
 	maxEntries: 64,
 	maxBytes: 64 * 1024 * 1024,
-	sizeOf: (h) => h.built.body.byteLength + h.built.files.reduce((n, f) => n + f.bytes.byteLength, 0)
+	sizeOf: (r) => (r.outcome.outcome === 'built' ? r.outcome.body.byteLength : 0)
 });
-
-async function buildHashed(target: ExportTarget, prepared: PreparedDesign, kind: ExportKind, opts: Parameters<typeof buildExport>[3]): Promise<HashedExport> {
-	const built = await buildExport(target, prepared, kind, opts);
-	// every file was hashed once when it was written; a one-file delivery is that file, so its hash is known too
-	const files = built.files.map((f) => ({ name: f.name, sizeBytes: f.bytes.byteLength, sha256: f.sha256 }));
-	const sha256 = built.files.length === 1 && built.body === built.files[0].bytes ? built.files[0].sha256 : await sha256Hex(built.body);
-	return { built, files, sha256 };
-}
 
 /**
  * Refuses (ExportRefusedError, nothing recorded) a revision that breaks its fab profile unless
@@ -60,15 +49,21 @@ async function buildHashed(target: ExportTarget, prepared: PreparedDesign, kind:
  * clean revision waives nothing and is not recorded.
  */
 export async function exportRevision(target: ExportTarget, kind: ExportKind, by: { userId: string; via: ExportVia }, opts: ExportOptions = {}): Promise<DeliveredExport> {
-	const gate = await checkExportTarget(target);
-	if (gate.violations.length > 0 && !opts.waiver) throw new ExportRefusedError(gate.violations, gate.profile);
-	const waiver = gate.violations.length > 0 && opts.waiver ? opts.waiver : null;
-	const notesWaiver = waiver ? { reason: waiver, profileName: gate.profile.name, violations: gate.violations.map((v) => v.message) } : undefined;
-	const buildOpts = { waiver: notesWaiver, deps: opts.deps };
+	const { profile } = await revisionFabProfile(getDb(), target.revision.id);
+	const buildOpts = { ...(opts.waiver ? { waiverReason: opts.waiver } : {}), deps: opts.deps };
 	// Test hooks change the bytes on purpose: such builds are never shared.
-	const { built, files, sha256 } = opts.deps
-		? await buildHashed(target, gate.prepared, kind, buildOpts)
-		: await builtExports.get(`${target.revision.id}\u0000${kind}\u0000${JSON.stringify(notesWaiver ?? null)}`, () => buildHashed(target, gate.prepared, kind, buildOpts));
+	const { outcome } = opts.deps
+		? await buildExport(target, profile, kind, buildOpts)
+		: await builtExports.get(`${target.revision.id}\u0000${kind}\u0000${JSON.stringify(opts.waiver ?? null)}`, () => buildExport(target, profile, kind, buildOpts));
+	switch (outcome.outcome) {
+		case 'refused':
+			throw new ExportRefusedError(outcome.violations, profile);
+		case 'read-back-failed':
+			return refuseReadBack(outcome.mismatches, { designId: target.design.id, revisionId: target.revision.id, revision: target.revision.label, kind }, opts.deps?.logError);
+		case 'empty':
+			error(404, `Revision ${exportMetaOf(target).revisionLabel} has no ${kind} files (the design has nothing of that kind)`);
+	}
+	const { files, sha256, waiver } = outcome;
 	const record = await recordExport({ target, userId: by.userId, via: by.via, kind, files, sha256, waiver });
-	return { exportId: record.id, kind, fileName: built.fileName, contentType: built.contentType, body: built.body, sha256, files, waiver, profile: gate.profile, waivedViolations: waiver ? gate.violations : [] };
+	return { exportId: record.id, kind, fileName: outcome.fileName, contentType: outcome.contentType, body: outcome.body, sha256, files, waiver, profile, waivedViolations: waiver ? outcome.violations : [] };
 }

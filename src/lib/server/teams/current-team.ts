@@ -1,8 +1,10 @@
 // The team a signed-in person is working in: the `ff_team` cookie when they are still a member, else their first team.
+// A request made with an API token sees only the token's own team: the cookie never widens what a token reaches.
 import type { Cookies } from '@sveltejs/kit';
 import { getDb } from '../db';
 import * as teamQueries from '../db/team.queries';
 import type { TeamRole } from '../db/team.table';
+import type { RequestIdentity } from '../auth/request-identity';
 
 export const CURRENT_TEAM_COOKIE = 'ff_team';
 
@@ -17,8 +19,16 @@ export interface CurrentTeam {
 	teams: TeamChoice[];
 }
 
-export async function currentTeam(userId: string, cookies: Cookies): Promise<CurrentTeam> {
-	const teams = await teamQueries.listTeamsByUser(getDb(), userId);
+/** The teams this request may work in: every membership for a session, only the token's team for an API token. */
+export async function reachableTeams(identity: Pick<RequestIdentity, 'user' | 'apiToken'>): Promise<TeamChoice[]> {
+	if (!identity.user) return [];
+	const teams = await teamQueries.listTeamsByUser(getDb(), identity.user.id);
+	const tokenTeam = identity.apiToken?.teamId;
+	return identity.apiToken ? teams.filter((t) => t.id === tokenTeam) : teams;
+}
+
+export async function currentTeam(identity: Pick<RequestIdentity, 'user' | 'apiToken'>, cookies: Cookies): Promise<CurrentTeam> {
+	const teams = await reachableTeams(identity);
 	const wanted = cookies.get(CURRENT_TEAM_COOKIE);
 	const current = teams.find((t) => t.id === wanted) ?? teams[0] ?? null;
 	return { current, teams };

@@ -9,8 +9,8 @@ import { InputError } from '$lib/schemas';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	const user = requireUser(event);
-	const { current } = await currentTeam(user.id, event.cookies);
+	requireUser(event);
+	const { current } = await currentTeam(event.locals.identity, event.cookies);
 	if (!current) return { team: null, designs: [], laminates: [], canCreate: false };
 	authorize(current.role, 'team.read');
 	const [designs, laminates] = await Promise.all([listDesigns(getDb(), current.id), listLaminates(getDb(), current.id)]);

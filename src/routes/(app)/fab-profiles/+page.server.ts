@@ -11,8 +11,8 @@ import type { Actions, PageServerLoad } from './$types';
 const lengthKeys = ['minTraceWidthMm', 'minSpacingMm', 'minDrillMm', 'minAnnularRingMm', 'copperToEdgeMm', 'minSlotWidthMm', 'etchToleranceMm', 'platedDrillToleranceMm', 'nonPlatedDrillToleranceMm'] as const;
 
 export const load: PageServerLoad = async (event) => {
-	const user = requireUser(event);
-	const { current } = await currentTeam(user.id, event.cookies);
+	requireUser(event);
+	const { current } = await currentTeam(event.locals.identity, event.cookies);
 	if (!current) return { team: null, profiles: [], canAdd: false };
 	authorize(current.role, 'team.read');
 	// Adding to the team's fab list is library work like adding a laminate: the same right.

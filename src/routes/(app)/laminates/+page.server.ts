@@ -11,8 +11,8 @@ import type { Actions, PageServerLoad } from './$types';
 const propertyKeys = ['relativePermittivity', 'lossTangent', 'heightMm', 'copperThicknessUm', 'relativePermittivityTolerance', 'heightToleranceMm'] as const;
 
 export const load: PageServerLoad = async (event) => {
-	const user = requireUser(event);
-	const { current } = await currentTeam(user.id, event.cookies);
+	requireUser(event);
+	const { current } = await currentTeam(event.locals.identity, event.cookies);
 	if (!current) return { team: null, laminates: [], canAdd: false };
 	authorize(current.role, 'team.read');
 	return { team: current, laminates: await listLaminates(getDb(), current.id), canAdd: can(current.role, 'laminate.write') };

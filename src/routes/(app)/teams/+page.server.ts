@@ -31,6 +31,6 @@ export const actions: Actions = {
 		const values = await formFields(request);
 		authorize(await roleInTeam(locals.identity, values.teamId ?? ''), 'team.read', 'Team not found');
 		chooseTeam(cookies, values.teamId);
-		redirect(303, safeNextPath(values.redirectTo, '/teams'));
+		redirect(303, safeNextPath(values.redirectTo));
 	}
 };

@@ -3,6 +3,8 @@ import { randomBytes } from 'node:crypto';
 import { signUp, createTeam, type AccountUser } from '../../../../src/lib/server/accounts';
 import { getDb } from '../../../../src/lib/server/db';
 import * as memberQueries from '../../../../src/lib/server/db/member.queries';
+import { throttleKey } from '../../../../src/lib/server/accounts/attempt-throttle';
+import * as verificationQueries from '../../../../src/lib/server/db/verification.queries';
 import type { TeamRole } from '../../../../src/lib/server/db/team.table';
 
 export const TEST_PASSWORD = 'correct horse battery';
@@ -15,8 +17,11 @@ export function emailFor(label: string, suffix: string): string {
 	return `${label}-${suffix}@accounts.test`;
 }
 
-export async function person(label: string, suffix: string): Promise<AccountUser> {
-	return signUp({ displayName: `${label} ${suffix}`, email: emailFor(label, suffix), password: TEST_PASSWORD });
+/** A person whose e-mail is confirmed (`confirmed: false` leaves it as sign-up does). */
+export async function person(label: string, suffix: string, opts: { confirmed?: boolean } = {}): Promise<AccountUser> {
+	const user = await signUp({ displayName: `${label} ${suffix}`, email: emailFor(label, suffix), password: TEST_PASSWORD });
+	if (opts.confirmed !== false) await verificationQueries.markEmailVerifiedById(getDb(), user.id, new Date());
+	return user;
 }
 
 export interface TeamFixture {
@@ -40,4 +45,12 @@ export async function teamWithRoles(suffix: string): Promise<TeamFixture> {
 
 export async function addMember(teamId: string, userId: string, role: TeamRole): Promise<void> {
 	await memberQueries.insertMember(getDb(), teamId, userId, role);
+}
+
+/** Gives a team and its inviter a fresh hourly invitation allowance (for tests that send many invitations). */
+export async function forgetInviteAllowance(teamId: string, userId: string): Promise<void> {
+	await getDb()
+		.deleteFrom('rate_limit')
+		.where('key', 'in', [throttleKey('invitesPerPerson', userId), throttleKey('invitesPerTeam', teamId)])
+		.execute();
 }

@@ -42,6 +42,8 @@ export interface CallOptions {
 	form?: Record<string, string>;
 	cookies?: CookieJar;
 	parent?: () => Promise<Record<string, unknown>>;
+	/** What getClientAddress() answers (127.0.0.1 unless given: tests of the address limiter use their own). */
+	clientAddress?: string;
 }
 
 export function eventFor(opts: CallOptions): RequestEvent {
@@ -59,7 +61,7 @@ export function eventFor(opts: CallOptions): RequestEvent {
 		parent: opts.parent ?? (async () => ({})),
 		route: { id: null },
 		setHeaders: () => undefined,
-		getClientAddress: () => '127.0.0.1',
+		getClientAddress: () => opts.clientAddress ?? '127.0.0.1',
 		isDataRequest: false,
 		isSubRequest: false,
 		platform: undefined,

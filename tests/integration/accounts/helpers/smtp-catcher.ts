@@ -55,7 +55,7 @@ export async function startSmtpCatcher(): Promise<SmtpCatcher> {
 }
 
 /** The token at the end of a link such as http://…/invites/<token>. */
-export function tokenFromLink(link: string, prefix: '/invites/' | '/reset/'): string {
+export function tokenFromLink(link: string, prefix: '/invites/' | '/reset/' | '/confirm/'): string {
 	const url = new URL(link);
 	if (!url.pathname.startsWith(prefix)) throw new Error(`${link} is not a ${prefix} link`);
 	return url.pathname.slice(prefix.length);

@@ -63,8 +63,14 @@ export interface ActionAnswer extends Answer {
 }
 
 /** POSTs a form the way use:enhance does: same-origin, x-sveltekit-action, JSON answer. */
-export async function action(origin: string, path: string, caller: Caller, form: FormData | Record<string, string> | string, opts: { contentType?: string; origin?: string } = {}): Promise<ActionAnswer> {
-	const headers: Record<string, string> = { accept: 'application/json', 'x-sveltekit-action': 'true', origin: opts.origin ?? origin, ...authHeaders(caller) };
+export async function action(
+	origin: string,
+	path: string,
+	caller: Caller,
+	form: FormData | Record<string, string> | string,
+	opts: { contentType?: string; origin?: string; headers?: Record<string, string> } = {}
+): Promise<ActionAnswer> {
+	const headers: Record<string, string> = { accept: 'application/json', 'x-sveltekit-action': 'true', origin: opts.origin ?? origin, ...authHeaders(caller), ...opts.headers };
 	let body: BodyInit;
 	if (typeof form === 'string') {
 		body = form;

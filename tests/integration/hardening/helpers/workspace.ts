@@ -15,6 +15,7 @@ import * as inviteQueries from '../../../../src/lib/server/db/invite.queries';
 import { getLucia } from '../../../../src/lib/server/auth/lucia';
 import { getDb } from '../../../../src/lib/server/db';
 import * as memberQueries from '../../../../src/lib/server/db/member.queries';
+import * as verificationQueries from '../../../../src/lib/server/db/verification.queries';
 import { createDesign, findRevision } from '../../../../src/lib/server/designs';
 import { uploadMeasurement } from '../../../../src/lib/server/measurements';
 import { saveSweepPlan } from '../../../../src/lib/server/sweeps';
@@ -64,6 +65,7 @@ export const touchstoneFixture = () => new Uint8Array(readFileSync(join(rootDir,
 
 async function member(label: string, suffix: string, domain: string, teamId: string | null): Promise<Omit<Member, 'token' | 'tokenId'> & { teamId: string | null }> {
 	const user = await signUp({ displayName: `${label} ${suffix}`, email: `${label}-${suffix}@${domain}`, password: PASSWORD });
+	await verificationQueries.markEmailVerifiedById(getDb(), user.id, new Date());
 	const session = await getLucia().createSession(user.id, {});
 	return { id: user.id, email: user.email, sessionId: session.id, teamId };
 }

@@ -47,7 +47,7 @@ describe('fab notes with hostile user text', () => {
 			waiver: { reason, profileName, violations: ['a waived rule'] }
 		});
 
-	it('a waiver reason with "\nLAYER COUNT: 6" yields no such line: the reason is one quoted line', () => {
+	it('a waiver reason with "\\nLAYER COUNT: 6" yields no such line: the reason is one quoted line', () => {
 		const notes = waived('Board house confirmed by phone\nLAYER COUNT: 6', 'standard quick-turn two-layer');
 		expect(forged(notes)).toEqual([]);
 		expect(notes).toContain('Reason: "Board house confirmed by phone LAYER COUNT: 6"');

@@ -34,3 +34,16 @@ describe('can(role, action)', () => {
 		});
 	}
 });
+
+describe('canAsAccount(account, step)', () => {
+	// Abuse review item 13: an address nobody has confirmed may not mint tokens, invite, or hold the owner role by invitation.
+	it('refuses every step to an unconfirmed account and allows it to a confirmed one', async () => {
+		const { canAsAccount, confirmedEmailSteps } = await import('../../../../src/lib/server/access/can');
+		expect([...confirmedEmailSteps].sort()).toEqual(['invite.accept-owner', 'invite.receive-owner', 'invite.send', 'token.create']);
+		for (const step of confirmedEmailSteps) {
+			expect(canAsAccount({ emailVerified: false }, step)).toBe(false);
+			expect(canAsAccount(null, step)).toBe(false);
+			expect(canAsAccount({ emailVerified: true }, step)).toBe(true);
+		}
+	});
+});

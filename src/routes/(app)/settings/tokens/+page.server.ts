@@ -1,6 +1,6 @@
 // Personal API tokens: made for the current team, shown once, listed by name and team, revoked by their owner.
 import { error, fail } from '@sveltejs/kit';
-import { authorize, can } from '$lib/server/access';
+import { authorize, can, canAsAccount, CONFIRM_EMAIL_FIRST } from '$lib/server/access';
 import { roleInTeam } from '$lib/server/access/team-role';
 import { createApiToken, findOwnApiTokenTeam, formFailure, formFields, listApiTokens, requireSessionUser, revokeApiToken, type FormProblem } from '$lib/server/accounts';
 import { currentTeam } from '$lib/server/teams/current-team';
@@ -9,14 +9,16 @@ import type { Actions, PageServerLoad } from './$types';
 export const load: PageServerLoad = async ({ locals, url, parent }) => {
 	const user = requireSessionUser(locals, url);
 	const { team } = await parent();
-	return { tokens: await listApiTokens(user.id), canCreate: can(team?.role, 'token.manage-own') };
+	const confirmed = canAsAccount(user, 'token.create');
+	return { tokens: await listApiTokens(user.id), canCreate: confirmed && can(team?.role, 'token.manage-own'), confirmNotice: confirmed ? null : CONFIRM_EMAIL_FIRST['token.create'] };
 };
 
 export const actions: Actions = {
 	create: async ({ request, locals, url, cookies }) => {
 		const user = requireSessionUser(locals, url);
 		const values = await formFields(request);
-		const { current } = await currentTeam(user.id, cookies);
+		if (!canAsAccount(user, 'token.create')) return fail(403, { form: 'create', message: CONFIRM_EMAIL_FIRST['token.create'], code: 'email-unconfirmed', issues: {}, values } as FormProblem);
+		const { current } = await currentTeam(locals.identity, cookies);
 		if (!current) return fail(400, { form: 'create', message: 'Make or join a team first: a token reaches exactly one team.', issues: {}, values } as FormProblem);
 		authorize(await roleInTeam(locals.identity, current.id), 'token.manage-own', 'Team not found');
 		try {

@@ -1,6 +1,6 @@
 // One team: its members for every member to see; for owners also roles, removal, invitations and the name.
 import { error, redirect } from '@sveltejs/kit';
-import { authorize, can } from '$lib/server/access';
+import { authorize, can, CONFIRM_EMAIL_FIRST } from '$lib/server/access';
 import { roleInTeam } from '$lib/server/access/team-role';
 import * as accounts from '$lib/server/accounts';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
@@ -16,6 +16,7 @@ export const load: PageServerLoad = async ({ params, locals, url }) => {
 		team: { id: team.id, name: team.name },
 		myRole: role,
 		myId: user.id,
+		confirmNotice: user.emailVerified ? null : CONFIRM_EMAIL_FIRST['invite.send'],
 		canManage,
 		members: await accounts.listTeamMembers(team.id),
 		invites: canManage ? await accounts.listPendingInvites(team.id) : []
@@ -49,9 +50,9 @@ export const actions: Actions = {
 		return { form: 'invite', done: `Invitation sent to ${values.email.trim().toLowerCase()}.` };
 	},
 	withdraw: async (event) => {
-		const { teamId, values } = await asOwner(event);
+		const { user, teamId, values } = await asOwner(event);
 		try {
-			await accounts.withdrawInvite(teamId, values.inviteId ?? '');
+			await accounts.withdrawInvite(teamId, values.inviteId ?? '', user.id);
 		} catch (err) {
 			return accounts.formFailure(err, 'withdraw', values);
 		}

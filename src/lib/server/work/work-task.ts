@@ -1,0 +1,27 @@
+// What a worker thread can be asked to do, and the answers: plain data both ways (structured clone).
+import type { Violation } from '$lib/drc';
+import type { SizedDesign } from '$lib/rf';
+import type { FabProfile } from '$lib/schemas/fab-profile';
+import { buildExportBytes, checkRevisionArtwork, type ExportBuildInput, type ExportBuildReport } from '../exports/export-work';
+import { writeSweepFile, type SweepBuildInput, type SweepFileFacts } from '../sweeps/sweep-work';
+
+export type WorkTask =
+	/** The design-rule check of a revision's artwork (the refusal page). */
+	| { type: 'gate'; sized: SizedDesign; profile: FabProfile }
+	/** One download, gate included. */
+	| { type: 'export'; input: ExportBuildInput }
+	/** A sweep plan's file, written to the cache. */
+	| { type: 'sweep'; job: SweepBuildInput };
+
+export type WorkResult = { type: 'gate'; violations: Violation[] } | { type: 'export'; report: ExportBuildReport } | { type: 'sweep'; facts: SweepFileFacts };
+
+export async function runTask(task: WorkTask): Promise<WorkResult> {
+	switch (task.type) {
+		case 'gate':
+			return { type: 'gate', violations: checkRevisionArtwork(task.sized, task.profile) };
+		case 'export':
+			return { type: 'export', report: await buildExportBytes(task.input) };
+		case 'sweep':
+			return { type: 'sweep', facts: await writeSweepFile(task.job) };
+	}
+}
