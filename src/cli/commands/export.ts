@@ -7,7 +7,7 @@ import { join } from 'node:path';
 import { createSVGWindow } from 'svgdom';
 import { buildArtwork } from '../../lib/artwork';
 import { checkArtwork } from '../../lib/drc';
-import { buildBundle, buildFiles, exportFormats, parseExportFormats } from '../../lib/formats/bundle';
+import { allExportFormats, buildBundle, buildFiles, exportFormats, parseExportFormats } from '../../lib/formats/bundle';
 import { createExportMeta } from '../../lib/formats/export-meta';
 import type { ExportFile } from '../../lib/formats/manifest';
 import { checkReadBack, isFabFileName } from '../../lib/formats/readback';
@@ -33,7 +33,7 @@ are acceptable; the reason and every waived violation are then printed in the fa
 Gerber and drill file is also read back (@tracespace/parser) and compared with the artwork.
 
   --out PATH        a folder (created if missing) or a .zip file
-  --formats LIST    comma-separated, from: ${exportFormats.join(', ')} (default: all)
+  --formats LIST    comma-separated, from: ${allExportFormats.join(', ')} (default: ${exportFormats.join(',')}; step only when named)
   --revision LABEL  revision label used in file names and headers (default A)
   --date DATE       revision date written into the files (default 2000-01-01; no clock is read)
   --profile FILE    a fab profile JSON (see \`check --help\`); default: the built-in

@@ -8,7 +8,7 @@ import { waiverReasonSchema } from './waiver-reason';
 export const designInputDocumentSchema = designInputSchema.meta({ id: 'DesignInput', description: 'The design-input document (see src/lib/schemas/design-input.ts)' });
 
 /** What a download can deliver: the whole zip bundle or one format's files. */
-export const exportKinds = ['bundle', 'gerber', 'drill', 'dxf', 'svg', 'sweep', 'notes'] as const;
+export const exportKinds = ['bundle', 'gerber', 'drill', 'dxf', 'svg', 'sweep', 'notes', 'step'] as const;
 export type ExportKind = (typeof exportKinds)[number];
 
 export function isExportKind(value: string): value is ExportKind {

@@ -8,6 +8,7 @@ import type { ExportMeta } from '../export-meta';
 import { buildFabNotes, type FabNotesWaiver } from '../fab-notes';
 import { toGerber } from '../gerber';
 import { buildManifest, serializeManifest, type ExportFile } from '../manifest';
+import { toStep } from '../step';
 import { toSvg, type SvgWindow } from '../svg';
 import { buildSweepDocument, serializeSweep } from '../sweep';
 import { buildArrayPatternDocument, serializeArrayPattern } from '../array-pattern';
@@ -45,6 +46,10 @@ export function buildFiles(sized: SizedDesign, meta: ExportMeta, formats: readon
 		// arrays only: the array-factor estimate with its plot-ready cuts
 		const pattern = buildArrayPatternDocument(sized, meta);
 		if (pattern) files.push(text(exportFileName(meta, 'array-pattern', 'json'), serializeArrayPattern(pattern)));
+	}
+	if (want('step')) {
+		const name = exportFileName(meta, 'board', 'step');
+		files.push(text(name, toStep(artwork, meta, name)));
 	}
 	const manifestName = exportFileName(meta, 'manifest', 'json');
 	if (want('notes')) {

@@ -9,7 +9,9 @@ const contentTypes: Record<string, string> = {
 	dxf: 'image/vnd.dxf',
 	svg: 'image/svg+xml',
 	json: 'application/json',
-	txt: 'text/plain; charset=utf-8'
+	txt: 'text/plain; charset=utf-8',
+	// ISO 10303-21 clear text: model/step is the IANA-registered type (from memory: registered for ISO/TC 184/SC 4, 2021; not re-checked)
+	step: 'model/step'
 };
 
 export function contentTypeOf(fileName: string): string {
