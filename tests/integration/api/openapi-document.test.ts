@@ -71,6 +71,6 @@ describe('openApiDocument', () => {
 		expect(names).toEqual(expect.arrayContaining(['path:teamId', 'query:sort', 'query:order', 'query:page', 'query:pageSize', 'query:q', 'query:designId']));
 		const download = (doc.paths as Record<string, any>)['/designs/{designId}/revisions/{label}/export/{format}'].get;
 		const format = download.parameters.find((p: { name: string }) => p.name === 'format');
-		expect(format.schema.enum).toEqual(['bundle', 'gerber', 'drill', 'dxf', 'svg', 'sweep', 'notes']);
+		expect(format.schema.enum).toEqual(['bundle', 'gerber', 'drill', 'dxf', 'svg', 'sweep', 'notes', 'step']);
 	});
 });
