@@ -4,6 +4,7 @@ import type { AppUserTable } from './app-user.table';
 import type { DesignTable, RevisionTable } from './design.table';
 import type { ExportRecordTable } from './export-record.table';
 import type { FabProfileTable } from './fab-profile.table';
+import type { FieldCheckTable } from './field-check.table';
 import type { LaminateTable } from './laminate.table';
 import type { MeasurementTable } from './measurement.table';
 import type { PasswordResetTable } from './password-reset.table';
@@ -27,4 +28,5 @@ export interface Database {
 	sweep_plan: SweepPlanTable;
 	measurement: MeasurementTable;
 	fab_profile: FabProfileTable;
+	field_check: FieldCheckTable;
 }
