@@ -53,8 +53,13 @@ export async function startFieldCheckWorker(options: WorkerOptions): Promise<Run
 
 	const sleep = (ms: number) =>
 		new Promise<void>((done) => {
-			const t = setTimeout(done, ms);
-			shutdown.signal.addEventListener('abort', () => (clearTimeout(t), done()), { once: true });
+			const wake = () => {
+				clearTimeout(t);
+				shutdown.signal.removeEventListener('abort', wake);
+				done();
+			};
+			const t = setTimeout(wake, ms);
+			shutdown.signal.addEventListener('abort', wake, { once: true });
 		});
 
 	/** One job from the queues, taken in turn so neither kind starves the other. */
