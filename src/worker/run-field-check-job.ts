@@ -27,6 +27,9 @@ export interface QueuedJob {
 	data: unknown;
 }
 
+/** Seconds past the job budget before the worker stops an engine that did not stop itself. */
+const BUDGET_GRACE_SECONDS = 15;
+
 type StopReason = 'cancel' | 'budget' | 'taken-over' | 'shutdown';
 
 export type JobOutcome = 'succeeded' | 'failed' | 'cancelled' | 'skipped' | 'taken-over' | 'handed-back';
@@ -80,7 +83,8 @@ export async function runFieldCheckJob(ctx: JobContext, job: QueuedJob): Promise
 	};
 	beat();
 	const heartbeat = setInterval(beat, ctx.heartbeatMs);
-	const budget = setTimeout(() => stop('budget'), budgetSeconds * 1000);
+	// The engine stops itself at its budget and says so; this is the backstop a few seconds later.
+	const budget = setTimeout(() => stop('budget'), (budgetSeconds + BUDGET_GRACE_SECONDS) * 1000);
 	const onShutdown = () => stop('shutdown');
 	ctx.shutdown.addEventListener('abort', onShutdown);
 	if (ctx.shutdown.aborted) stop('shutdown');
