@@ -1,5 +1,5 @@
 // field_check: a full-wave check or a Homing study of one revision, carried by a pg-boss job; and the revision column
-// naming the Homing study a revision was made from (migration 2026-12-02T0600, typed here by interface merging).
+// naming the Homing study a revision was made from (migration 2026-12-02T0700, typed here by interface merging).
 import type { ColumnType, Insertable, Selectable, Updateable } from 'kysely';
 import type { fieldCheckStates } from '../../schemas/api';
 import type { FieldCheckMode } from '../../schemas/field-check';
