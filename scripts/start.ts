@@ -1,4 +1,4 @@
-// `npm start`: PostgreSQL, migrations, demo data, the mail fake, a production build, then the server.
+// `npm start`: PostgreSQL, migrations, demo data, the mail fake, a production build, then the server and one job worker.
 import { spawn, spawnSync } from 'node:child_process';
 import { ConfigError, loadConfig, rootDir, runMain } from './lib/config.ts';
 import { provideMail } from './lib/mail.ts';
@@ -29,9 +29,26 @@ runMain(async () => {
 		env: { ...process.env, ...mail, DATABASE_URL: databaseUrl, HOST: '127.0.0.1', PORT: String(config.appPort), ORIGIN: origin, BODY_SIZE_LIMIT: process.env.BODY_SIZE_LIMIT || '6M', FRINGEFIELD_DEV_MAILBOX: '1' }
 	});
 	recordPid(config, 'app', server.pid!);
+	// One job worker beside the app (field checks and Homing); more on other machines scale out (README "Scaling out").
+	const worker = spawn(process.execPath, ['--import', 'tsx', 'src/worker/main.ts'], {
+		cwd: rootDir,
+		stdio: 'inherit',
+		detached: true,
+		env: { ...process.env, DATABASE_URL: databaseUrl }
+	});
+	recordPid(config, 'worker', worker.pid!);
 	const people = DEMO_PEOPLE.map((p) => `    ${p.email.padEnd(32)} ${p.role}`).join('\n');
 	console.log(`\nFringefield is running at ${origin}\n  demo sign-in (password ${DEMO_PASSWORD}):\n${people}\n  caught e-mail: ${origin}/dev/mailbox\n  stop with Ctrl-C or \`npm run stop\`\n`);
-	for (const sig of ['SIGINT', 'SIGTERM'] as const) process.on(sig, () => server.kill('SIGTERM'));
+	for (const sig of ['SIGINT', 'SIGTERM'] as const)
+		process.on(sig, () => {
+			server.kill('SIGTERM');
+			worker.kill('SIGTERM');
+		});
 	await new Promise<void>((done) => server.on('exit', () => done()));
 	forgetPid(config, 'app');
+	if (worker.exitCode === null && worker.signalCode === null) {
+		worker.kill('SIGTERM');
+		await new Promise<void>((done) => worker.on('exit', () => done()));
+	}
+	forgetPid(config, 'worker');
 });

@@ -107,3 +107,17 @@ export function describeResonance(result: Pick<FieldCheckResult, 'resonance' | '
 	}
 	return { text: `resonates ${pct} % ${result.deviationFraction < 0 ? 'low' : 'high'}; run Homing?`, suggestHoming: true };
 }
+
+/** How each trace is drawn, the same in every plot and legend. */
+export const traceStyle: Record<TraceId, { strokeClass: string; swatchClass: string; dash: string; width: number }> = {
+	model: { strokeClass: 'stroke-copper-600', swatchClass: 'border-copper-600 border-dashed', dash: '6 4', width: 1.5 },
+	fullwave: { strokeClass: 'stroke-ground-900', swatchClass: 'border-ground-900', dash: '', width: 2 },
+	measured: { strokeClass: 'stroke-drill-600', swatchClass: 'border-drill-600', dash: '', width: 1.5 }
+};
+
+/** The point of the trace nearest `frequencyHz` (a marker at the target), or undefined for an empty trace. */
+export function pointNearest(points: readonly TracePoint[], frequencyHz: number): TracePoint | undefined {
+	let best: TracePoint | undefined;
+	for (const p of points) if (!best || Math.abs(p.frequencyHz - frequencyHz) < Math.abs(best.frequencyHz - frequencyHz)) best = p;
+	return best;
+}

@@ -1,41 +1,14 @@
 // /api/v1 field checks: start one on a revision, list a revision's, read one (status, progress, result), cancel one.
 import { json } from '@sveltejs/kit';
-import type { z } from 'zod';
-import type { fieldCheckStatusSchema, fieldCheckSummarySchema, StartFieldCheckBody } from '$lib/schemas/api';
+import type { StartFieldCheckBody } from '$lib/schemas/api';
 import type { RequestIdentity, RequestUser } from '../auth/request-identity';
 import { getDb } from '../db';
-import { cancelFieldCheck, listFieldChecks, requireFieldCheck, startFieldCheck, type FieldCheck, type FieldCheckWithResult } from '../field-checks';
+import { cancelFieldCheck, listFieldChecks, requireFieldCheck, startFieldCheck } from '../field-checks';
+import { fieldCheckStatusUrl, toApiFieldCheckStatus, toApiFieldCheckSummary, type ApiFieldCheckStatus, type ApiFieldCheckSummary } from '../field-checks/field-check-view';
 import { requireRevision } from '../measurements/revision-access';
 import { problem } from './api-handler';
 
-export type ApiFieldCheckSummary = z.input<typeof fieldCheckSummarySchema>;
-export type ApiFieldCheckStatus = z.input<typeof fieldCheckStatusSchema>;
-
-export const fieldCheckStatusUrl = (id: string) => `/api/v1/simulations/${id}`;
-
-export function toApiFieldCheckSummary(c: FieldCheck): ApiFieldCheckSummary {
-	return {
-		id: c.id,
-		designId: c.designId,
-		revisionLabel: c.revisionLabel,
-		kind: c.kind,
-		mode: c.options.mode,
-		state: c.state,
-		progress: c.progress,
-		error: c.error,
-		requestedBy: c.requestedByName,
-		createdAt: c.createdAt.toISOString(),
-		startedAt: c.startedAt?.toISOString() ?? null,
-		finishedAt: c.finishedAt?.toISOString() ?? null,
-		cancelRequested: c.cancelRequestedAt !== null,
-		attempt: c.attempt,
-		statusUrl: fieldCheckStatusUrl(c.id)
-	};
-}
-
-export function toApiFieldCheckStatus(c: FieldCheckWithResult): ApiFieldCheckStatus {
-	return { ...toApiFieldCheckSummary(c), result: c.result, homing: c.homing };
-}
+export { fieldCheckStatusUrl, toApiFieldCheckStatus, toApiFieldCheckSummary, type ApiFieldCheckStatus, type ApiFieldCheckSummary } from '../field-checks/field-check-view';
 
 /** 202 with the new check and where to follow it. */
 export async function startRevisionFieldCheck(identity: RequestIdentity & { user: RequestUser }, designId: string, label: string, body: StartFieldCheckBody): Promise<Response> {

@@ -170,3 +170,19 @@ export async function lockStaleFieldCheckById(db: Kysely<Database>, id: string, 
 		.forUpdate()
 		.executeTakeFirst();
 }
+
+/** Revisions made from a Homing study's tuned input, oldest first. */
+export async function listRevisionsByHomedFromFieldCheck(db: Kysely<Database>, fieldCheckId: string) {
+	return db.selectFrom('revision').select(['revision.id', 'revision.label']).where('revision.homed_from_field_check_id', '=', fieldCheckId).orderBy('revision.seq').execute();
+}
+
+/** The Homing study a revision was made from (with the label of the revision it studied), if any. */
+export async function findHomingSourceByRevision(db: Kysely<Database>, revisionId: string) {
+	return db
+		.selectFrom('revision')
+		.innerJoin('field_check', 'field_check.id', 'revision.homed_from_field_check_id')
+		.innerJoin('revision as studied', 'studied.id', 'field_check.revision_id')
+		.select(['field_check.id as field_check_id', 'studied.label as studied_label'])
+		.where('revision.id', '=', revisionId)
+		.executeTakeFirst();
+}

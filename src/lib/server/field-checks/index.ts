@@ -5,3 +5,5 @@ export { findFieldCheck, listFieldChecks } from './find-field-checks';
 export { reviseFromHoming } from './revise-from-homing';
 export { requireFieldCheck, type FieldCheckAccess } from './field-check-access';
 export { toFieldCheck, toFieldCheckWithResult, isFinal, type FieldCheck, type FieldCheckWithResult } from './field-check-model';
+export { loadFieldCheckPanel, thinSamples, MAX_PAGE_SAMPLES } from './revision-panel';
+export { toApiFieldCheckStatus, toApiFieldCheckSummary, fieldCheckStatusUrl, type ApiFieldCheckStatus, type ApiFieldCheckSummary } from './field-check-view';
