@@ -52,7 +52,7 @@ export async function runFieldCheckJob(ctx: JobContext, job: QueuedJob): Promise
 	if (!work) return 'skipped';
 	const options = fieldCheckOptionsSchema.parse(work.options);
 	const input = designInputSchema.parse(work.input);
-	const budgetSeconds = jobBudgetSeconds(work.kind, options.budgetSeconds);
+	const budgetSeconds = jobBudgetSeconds(work.kind, options);
 	ctx.log(`field check ${id} (${work.kind}, ${options.mode}, attempt ${claimed.attempt}) started`);
 
 	const abort = new AbortController();

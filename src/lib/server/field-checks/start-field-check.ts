@@ -50,7 +50,7 @@ export async function startFieldCheck(db: Kysely<Database>, opts: StartFieldChec
 			requested_by: opts.userId,
 			job_id: jobId
 		});
-		await boss.send(jobNames[opts.kind], { fieldCheckId: id }, { id: jobId, db: toBossDb(trx), expireInSeconds: jobExpireSeconds(opts.kind, options.budgetSeconds), retryLimit: JOB_RETRY_LIMIT });
+		await boss.send(jobNames[opts.kind], { fieldCheckId: id }, { id: jobId, db: toBossDb(trx), expireInSeconds: jobExpireSeconds(opts.kind, options), retryLimit: JOB_RETRY_LIMIT });
 	});
 	return { id };
 }

@@ -1,6 +1,7 @@
 // The pg-boss queues Fringefield uses, what a job carries, and how long each may run before pg-boss gives it up.
 import { z } from 'zod';
 import type { FieldCheckKind } from '../db/field-check.table';
+import type { FieldCheckOptions } from '../../schemas/field-check';
 
 /** One queue per kind of work, so an operator can see (and a worker can take) each on its own. */
 export const jobNames = { check: 'field-check', homing: 'field-homing' } as const satisfies Record<FieldCheckKind, string>;
@@ -17,17 +18,21 @@ export type FieldCheckJobData = z.infer<typeof fieldCheckJobDataSchema>;
  */
 export const HOMING_MAX_SIMULATIONS = 8;
 
-/** Seconds a job may take in all: one engine budget for a check, HOMING_MAX_SIMULATIONS of them for Homing. */
-export function jobBudgetSeconds(kind: FieldCheckKind, engineBudgetSeconds: number): number {
-	return kind === 'homing' ? engineBudgetSeconds * HOMING_MAX_SIMULATIONS : engineBudgetSeconds;
+/**
+ * Seconds a job may take in all. The engine's budget holds for each of its runs: a check is one run (two in accurate
+ * mode: the standard mesh, then the refined one), a Homing study at most HOMING_MAX_SIMULATIONS checks.
+ */
+export function jobBudgetSeconds(kind: FieldCheckKind, options: FieldCheckOptions): number {
+	const perCheck = options.budgetSeconds * (options.mode === 'accurate' ? 2 : 1);
+	return kind === 'homing' ? perCheck * HOMING_MAX_SIMULATIONS : perCheck;
 }
 
 /**
  * pg-boss fails (and retries) an active job older than this: the job budget plus a minute for the worker to store the
  * result. The worker stops the engine at the budget itself, so only a lost worker ever reaches it.
  */
-export function jobExpireSeconds(kind: FieldCheckKind, engineBudgetSeconds: number): number {
-	return jobBudgetSeconds(kind, engineBudgetSeconds) + 60;
+export function jobExpireSeconds(kind: FieldCheckKind, options: FieldCheckOptions): number {
+	return jobBudgetSeconds(kind, options) + 60;
 }
 
 /** How many times pg-boss hands a job to another worker after its worker was lost. */
