@@ -186,3 +186,16 @@ export async function findHomingSourceByRevision(db: Kysely<Database>, revisionI
 		.where('revision.id', '=', revisionId)
 		.executeTakeFirst();
 }
+
+/** The id of a revision's newest succeeded check (or study), if any. */
+export async function findLatestSucceededFieldCheckIdByRevision(db: Kysely<Database>, revisionId: string) {
+	return db
+		.selectFrom('field_check')
+		.select('id')
+		.where('revision_id', '=', revisionId)
+		.where('state', '=', 'succeeded')
+		.orderBy('finished_at', 'desc')
+		.orderBy('id')
+		.limit(1)
+		.executeTakeFirst();
+}

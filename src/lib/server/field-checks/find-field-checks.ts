@@ -15,3 +15,9 @@ export async function findFieldCheck(db: Kysely<Database>, id: string): Promise<
 export async function listFieldChecks(db: Kysely<Database>, revisionId: string): Promise<FieldCheck[]> {
 	return (await fieldCheckQueries.listFieldChecksByRevision(db, revisionId)).map(toFieldCheck);
 }
+
+/** A revision's newest succeeded check or study, with its result (the full-wave curve a measurement is drawn against). */
+export async function findLatestFieldCheckResult(db: Kysely<Database>, revisionId: string): Promise<FieldCheckWithResult | null> {
+	const latest = await fieldCheckQueries.findLatestSucceededFieldCheckIdByRevision(db, revisionId);
+	return latest ? findFieldCheck(db, latest.id) : null;
+}

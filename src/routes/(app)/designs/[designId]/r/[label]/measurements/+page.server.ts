@@ -1,8 +1,10 @@
-// A revision's measured S11 files: upload (multipart, ≤ 5 MB, strict), the plot of one, its retune proposal, and confirming it.
+// A revision's measured S11 files: upload (multipart, ≤ 5 MB, strict), the plot of one (and against the revision's newest
+// full-wave check), its retune proposal, and confirming it.
 import { error, fail, redirect } from '@sveltejs/kit';
 import { can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
 import * as measurements from '$lib/server/measurements';
+import { findLatestFieldCheckResult, thinSamples } from '$lib/server/field-checks';
 import { analyzeMeasuredResponse } from '$lib/rf/measured-response';
 import { InputError } from '$lib/schemas';
 import { TouchstoneError } from '$lib/formats/touchstone';
@@ -29,6 +31,7 @@ export const load: PageServerLoad = async ({ locals, params, url }) => {
 		void _samples;
 		selected = {
 			...facts,
+			samples: thinSamples(chosen.samples),
 			points: response.points.map((p) => [p.frequencyHz, p.s11Db] as const),
 			proposal,
 			proposalError,
@@ -43,6 +46,7 @@ export const load: PageServerLoad = async ({ locals, params, url }) => {
 		list,
 		selected,
 		retunedFrom: await measurements.findRetuneSource(db, revision.id),
+		fullWave: chosen ? ((await findLatestFieldCheckResult(db, revision.id))?.result ?? null) : null,
 		canUpload: can(role, 'measurement.upload'),
 		canRetune: can(role, 'revision.create'),
 		maxBytes: measurements.MAX_TOUCHSTONE_BYTES
