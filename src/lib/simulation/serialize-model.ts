@@ -31,7 +31,7 @@ function primitive(p: ModelPrimitive, indent: string): string[] {
 		case 'polygon': {
 			// NormDir 2 = z; vertices are (X1, X2) = (x, y) in the plane at Elevation
 			const tag = p.thicknessMm > 0 ? 'LinPoly' : 'Polygon';
-			const extra = p.thicknessMm > 0 ? { Length: p.thicknessMm } : {};
+			const extra: Record<string, number> = p.thicknessMm > 0 ? { Length: p.thicknessMm } : {};
 			return [
 				`${indent}<${tag} ${attrs({ Priority: p.priority, Elevation: p.zMm, NormDir: 2, QtyVertices: p.pointsMm.length, ...extra })}>`,
 				...p.pointsMm.map((v) => `${indent}  <Vertex ${attrs({ X1: v[0], X2: v[1] })}/>`),
