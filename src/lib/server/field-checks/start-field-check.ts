@@ -13,6 +13,12 @@ import { getQueue, jobExpireSeconds, jobNames, JOB_RETRY_LIMIT, toBossDb } from 
 /** Queued or running checks a team may have at once (a full-wave run takes minutes of a worker's time). */
 export const MAX_ACTIVE_FIELD_CHECKS_PER_TEAM = 10;
 
+/** The limit in force: FRINGEFIELD_MAX_ACTIVE_FIELD_CHECKS when set (the job benchmark queues more), else the default. */
+function activeLimit(): number {
+	const set = Number(process.env.FRINGEFIELD_MAX_ACTIVE_FIELD_CHECKS);
+	return Number.isInteger(set) && set > 0 ? set : MAX_ACTIVE_FIELD_CHECKS_PER_TEAM;
+}
+
 export interface StartFieldCheckOptions {
 	design: Design;
 	revision: Revision;
@@ -36,8 +42,9 @@ export async function startFieldCheck(db: Kysely<Database>, opts: StartFieldChec
 			.where('team_id', '=', opts.design.teamId)
 			.where('state', 'in', ['queued', 'running'])
 			.executeTakeFirstOrThrow();
-		if (Number(active.n) >= MAX_ACTIVE_FIELD_CHECKS_PER_TEAM) {
-			error(429, `Your team already has ${active.n} field checks waiting or running (at most ${MAX_ACTIVE_FIELD_CHECKS_PER_TEAM}); wait for one to finish or cancel one`);
+		const limit = activeLimit();
+		if (Number(active.n) >= limit) {
+			error(429, `Your team already has ${active.n} field checks waiting or running (at most ${limit}); wait for one to finish or cancel one`);
 		}
 		await fieldCheckQueries.insertFieldCheck(trx, {
 			id,
