@@ -6,7 +6,9 @@ import type { Database } from '../lib/server/db/database';
 import * as fieldCheckQueries from '../lib/server/db/field-check.queries';
 import { fieldCheckJobDataSchema, jobBudgetSeconds, toBossDb, type Boss, type JobName } from '../lib/server/jobs';
 import { designInputSchema } from '../lib/schemas/design-input';
-import { fieldCheckOptionsSchema, fieldCheckResultSchema, homingResultSchema, type FieldCheckProgress } from '../lib/schemas/field-check';
+import { fieldCheckOptionsSchema, fieldCheckResultSchema, homingResultSchema, type FieldCheckOptions, type FieldCheckProgress } from '../lib/schemas/field-check';
+import type { DesignInput } from '../lib/schemas/design-input';
+import type { FieldCheckKind } from '../lib/server/db/field-check.table';
 import type { FieldCheckEngine } from './engine';
 
 export interface JobContext {
@@ -50,10 +52,23 @@ export async function runFieldCheckJob(ctx: JobContext, job: QueuedJob): Promise
 	}
 	const work = await fieldCheckQueries.findFieldCheckWorkById(db, id);
 	if (!work) return 'skipped';
-	const options = fieldCheckOptionsSchema.parse(work.options);
-	const input = designInputSchema.parse(work.input);
-	const budgetSeconds = jobBudgetSeconds(work.kind, options);
-	ctx.log(`field check ${id} (${work.kind}, ${options.mode}, attempt ${claimed.attempt}) started`);
+	const options = fieldCheckOptionsSchema.safeParse(work.options);
+	const input = designInputSchema.safeParse(work.input);
+	if (!options.success || !input.success) {
+		// A stored revision this engine cannot read: say so once instead of retrying.
+		const error = `the stored ${options.success ? 'design input' : 'options'} could not be read: ${(options.error ?? input.error)!.issues[0]?.message ?? 'invalid'}`;
+		await db.transaction().execute(async (trx) => {
+			if (await fieldCheckQueries.finishFieldCheckById(trx, id, ctx.workerId, { state: 'failed', error })) await boss.complete(job.name, job.id, { state: 'failed' }, { db: toBossDb(trx) });
+		});
+		return 'failed';
+	}
+	return runClaimed(ctx, job, id, claimed.attempt, work.kind, options.data, input.data);
+}
+
+async function runClaimed(ctx: JobContext, job: QueuedJob, id: string, attempt: number, kind: FieldCheckKind, options: FieldCheckOptions, input: DesignInput): Promise<JobOutcome> {
+	const { db, boss } = ctx;
+	const budgetSeconds = jobBudgetSeconds(kind, options);
+	ctx.log(`field check ${id} (${kind}, ${options.mode}, attempt ${attempt}) started`);
 
 	const abort = new AbortController();
 	let stopReason: StopReason | null = null;
@@ -100,7 +115,7 @@ export async function runFieldCheckJob(ctx: JobContext, job: QueuedJob): Promise
 	let outcome: { state: 'succeeded'; resultJson: string } | { state: 'failed' | 'cancelled'; error: string } | null = null;
 	try {
 		const result =
-			work.kind === 'homing' ? homingResultSchema.parse(await ctx.engine.runHoming(input, options, control)) : fieldCheckResultSchema.parse(await ctx.engine.runFieldCheck(input, options, control));
+			kind === 'homing' ? homingResultSchema.parse(await ctx.engine.runHoming(input, options, control)) : fieldCheckResultSchema.parse(await ctx.engine.runFieldCheck(input, options, control));
 		outcome = stopReason ? null : { state: 'succeeded', resultJson: JSON.stringify(result) };
 	} catch (err) {
 		if (!stopReason) outcome = { state: 'failed', error: `the engine stopped: ${(err as Error).message}`.slice(0, 2000) };

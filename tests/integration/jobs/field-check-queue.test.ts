@@ -166,3 +166,33 @@ describe('a worker lost mid-job', () => {
 		}
 	});
 });
+
+describe('a worker that shuts down mid-job', () => {
+	it('hands the job back: queued again, retried by the next worker, finished there', async () => {
+		const { id } = await start();
+		const slow = createScriptedEngine({ steps: 200, stepMs: 200 });
+		const leaving = await startFieldCheckWorker({ engine: slow.engine, databaseUrl, heartbeatMs: 500, pollMs: 200, staleSeconds: 5, log: () => undefined });
+		await waitFor('running with progress', async () => {
+			const r = await row(id);
+			return r.state === 'running' && r.progress !== null && r.worker_id === leaving.workerId;
+		});
+		await leaving.stop();
+		const handedBack = await row(id);
+		expect(handedBack.state).toBe('queued');
+		expect(handedBack.error).toMatch(/shut down/);
+		expect(handedBack.result).toBeNull();
+		expect(slow.state.aborted).toBe(1);
+		expect((await bossJob(handedBack.job_id)).state).toBe('retry');
+
+		const { engine } = createScriptedEngine({ steps: 3, stepMs: 50 });
+		const next = await startFieldCheckWorker({ engine, databaseUrl, heartbeatMs: 500, pollMs: 200, staleSeconds: 5, log: () => undefined });
+		try {
+			const done = await waitFor('the next worker to finish it', async () => ((await row(id)).state === 'succeeded' ? row(id) : undefined), 15_000);
+			expect(done.worker_id).toBe(next.workerId);
+			expect(done.attempt).toBe(2);
+		} finally {
+			await next.stop();
+		}
+	});
+});
+
