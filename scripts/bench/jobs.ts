@@ -101,6 +101,12 @@ export async function runJobsBench(): Promise<void> {
 			const seconds = await runRound({ databaseUrl, designId: design.id, workers, jobs, entry: ['src/worker/main.ts'], env: { FRINGEFIELD_OPENEMS_THREADS: threads } });
 			rows.push({ work: 'field check, openEMS quick mesh', workers, jobs, seconds, perMinute: (jobs * 60) / seconds, note: `${threads} engine thread(s) per worker` });
 		}
+		// One check at a time with 1 and with 2 engine threads: how well one engine uses this machine's cores.
+		for (const threads of ['1', String(cores)]) {
+			console.log(`real engine: 1 quick check, 1 worker, ${threads} engine thread(s)…`);
+			const seconds = await runRound({ databaseUrl, designId: design.id, workers: 1, jobs: 1, entry: ['src/worker/main.ts'], env: { FRINGEFIELD_OPENEMS_THREADS: threads } });
+			rows.push({ work: 'one field check alone, openEMS quick mesh', workers: 1, jobs: 1, seconds, perMinute: 60 / seconds, note: `${threads} engine thread(s)` });
+		}
 		const instant = 40;
 		for (const workers of [1, 2]) {
 			console.log(`queue ceiling: ${instant} jobs with an instant engine, ${workers} worker(s)…`);
@@ -113,12 +119,12 @@ export async function runJobsBench(): Promise<void> {
 	}
 	const table = ['| work | workers | jobs | wall time | jobs per minute | note |', '| --- | ---: | ---: | ---: | ---: | --- |', ...rows.map((r) => `| ${r.work} | ${r.workers} | ${r.jobs} | ${r.seconds.toFixed(1)} s | ${r.perMinute.toFixed(1)} | ${r.note} |`)].join('\n');
 	console.log(`\n${table}\n`);
-	const [one, two] = rows;
+	const [one, two, alone1, aloneN] = rows;
 	writeTopSection(
 		'## Job queue',
 		`Written by \`npm run bench -- --jobs\` on ${new Date().toISOString().slice(0, 10)} (${cores} cores): field checks queued first, then 1 or 2 worker processes (\`node --import tsx src/worker/main.ts\`, as \`npm run worker\`) started on the same PostgreSQL; the clock runs from the workers' start to the last stored result.\n\n${table}\n\n` +
-			`- Two workers on this one machine run ${(two.perMinute / one.perMinute).toFixed(2)}× the checks per minute of one: the engine is CPU-bound, and two workers split the same ${cores} cores (each engine gets ${Math.max(1, Math.floor(cores / 2))} thread). Workers on other machines add their cores instead (README "Scaling out").\n` +
-			'- The instant-engine rows are the queue\'s own cost per job (claim, heartbeats, one transaction to store and complete); it is small beside a full-wave run of tens of seconds.\n'
+			`- Two workers on this one machine ran ${(two.perMinute / one.perMinute).toFixed(2)}× the checks per minute of one. They share the same ${cores} cores, so the gain is not more hardware: one check alone took ${alone1.seconds.toFixed(1)} s with 1 engine thread and ${aloneN.seconds.toFixed(1)} s with ${cores}, i.e. on this (shared) machine one engine does not turn a second thread into speed, while a second worker keeps the second core busy. Set \`FRINGEFIELD_OPENEMS_THREADS\` and the number of workers per machine from such a measurement on your own hardware; workers on other machines add their cores (README "Scaling out").\n` +
+			'- The instant-engine rows are the queue\'s own cost per job (taking it, heartbeats, one transaction to store and complete), with the workers\' start-up (a few seconds of tsx) inside the wall time; well under a second per job, small beside a full-wave run of tens of seconds. A second worker does not speed them up: the cost is PostgreSQL round trips and polling, not CPU.\n'
 	);
 	console.log('written to BENCHMARKS.md');
 }
