@@ -7,6 +7,7 @@ import { rootDir, runMain } from './lib/config.ts';
 import { coreRows, type BenchRow } from './bench/core.ts';
 import { httpRows } from './bench/http.ts';
 import { runFuzzBench } from './bench/fuzz.ts';
+import { runFullwaveBench } from './bench/fullwave.ts';
 import { existingReliabilitySection, existingTopSection } from './bench/reliability-section.ts';
 import { runJobsBench } from './bench/jobs.ts';
 import { runSoakBench } from './bench/soak.ts';
@@ -55,6 +56,8 @@ runMain(async () => {
 	if (process.argv.includes('--fuzz')) return runFuzzBench();
 	// --jobs: field checks per minute through the queue with 1 and 2 workers (its own section).
 	if (process.argv.includes('--jobs')) return runJobsBench();
+	// --fullwave runs only the Field check timings on openEMS (minutes per case) and prints them as Markdown
+	if (process.argv.includes('--fullwave')) return runFullwaveBench(process.argv);
 	const started = Date.now();
 	const rows: BenchRow[] = [];
 	console.log('core rows…');

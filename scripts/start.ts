@@ -3,6 +3,7 @@ import { spawn, spawnSync } from 'node:child_process';
 import { ConfigError, loadConfig, rootDir, runMain } from './lib/config.ts';
 import { provideMail } from './lib/mail.ts';
 import { migrateToLatest } from './lib/migrate.ts';
+import { ensureOpenEms } from './lib/openems.ts';
 import { canBind } from './lib/ports.ts';
 import { APP_DATABASE, provideDatabase } from './lib/postgres.ts';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemo } from './lib/seed.ts';
@@ -15,6 +16,8 @@ runMain(async () => {
 	await migrateToLatest(databaseUrl);
 	await seedDemo(databaseUrl);
 	const mail = await provideMail(config);
+	// the Field check's engine; the rest of the product runs without it
+	ensureOpenEms();
 
 	if (process.env.FRINGEFIELD_SKIP_BUILD !== '1') {
 		console.log('building…');

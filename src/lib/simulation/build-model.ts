@@ -1,6 +1,6 @@
 // Artwork + stack → the full-wave model: materials, copper sheets, probe, lumped port, boundaries, mesh.
 import type { Artwork, ArtworkShape, StackLayer } from '../artwork';
-import { createCircleContour, createPolygonContour, flattenContour, isPointInRing, unionRegions, type Contour, type Point, type Region } from '../geometry';
+import { contourBounds, createCircleContour, createPolygonContour, flattenContour, isPointInRing, unionRegions, type Contour, type Point, type Region } from '../geometry';
 import { InputError } from '../schemas/input-error';
 import type { FieldCheckMode } from '../schemas/field-check';
 import { SPEED_OF_LIGHT_M_PER_S, VACUUM_PERMITTIVITY_F_PER_M, freeSpaceWavelengthMm, mmFromUm } from '../units';
@@ -31,7 +31,8 @@ const PRIORITY_COPPER = 10;
 const PRIORITY_PIN = 20;
 const PRIORITY_PORT = 5;
 
-const unsupported = (message: string) => new InputError([{ path: 'feed', value: undefined, message }]);
+/** A design the model cannot hold: bad input for the Field check (400/422, exit 2), never a crash. */
+const unsupported = (message: string, value: unknown = 'this design') => new InputError([{ path: 'feed', value, message }]);
 
 /** κ = 2π·f·ε0·εr·tanδ: the conductivity whose loss equals tanδ at f (exact at f only). */
 export function conductivityForLossTangent(relativePermittivity: number, lossTangent: number, frequencyHz: number): number {
@@ -42,7 +43,7 @@ export function conductivityForLossTangent(relativePermittivity: number, lossTan
  * The dark copper of one layer as outlines: the shapes are united first (a feed line that only
  * touches the patch along an edge would otherwise meet it between mesh lines and may not connect).
  */
-function copperOutlines(shapes: readonly ArtworkShape[]): Point[][] {
+function copperOutlines(shapes: readonly ArtworkShape[]): CopperLayerOutlines {
 	const regions: Region[] = shapes
 		.filter((s) => s.polarity === 'dark')
 		.map((s) => {
@@ -53,10 +54,26 @@ function copperOutlines(shapes: readonly ArtworkShape[]): Point[][] {
 			if (g.kind === 'circle') return { outer: straight(createCircleContour(g.center, g.diameterMm / 2)), holes: [] };
 			throw unsupported(`the Field check cannot model outline shape "${s.id}" as copper`);
 		});
-	return unionRegions(regions).map((r) => {
+	const rings = unionRegions(regions).map((r) => {
 		if (r.holes.length > 0) throw unsupported('the Field check cannot model copper with holes');
 		return flattenContour(r.outer, ROUND_CHORD_TOLERANCE_MM);
 	});
+	// exact extremes of the shapes as drawn (a chorded circle may miss its top and bottom points)
+	const extremes: [number[], number[]] = [[], []];
+	for (const s of shapes.filter((sh) => sh.polarity === 'dark')) {
+		const g = s.geometry;
+		const b = g.kind === 'circle' ? { minXMm: g.center[0] - g.diameterMm / 2, maxXMm: g.center[0] + g.diameterMm / 2, minYMm: g.center[1] - g.diameterMm / 2, maxYMm: g.center[1] + g.diameterMm / 2 } : g.kind === 'region' ? contourBounds(g.region.outer) : null;
+		if (!b) continue;
+		extremes[0].push(b.minXMm, b.maxXMm);
+		extremes[1].push(b.minYMm, b.maxYMm);
+	}
+	return { rings, extremes };
+}
+
+/** One copper layer for the model: its united outlines and the exact extremes of its shapes per axis. */
+interface CopperLayerOutlines {
+	rings: Point[][];
+	extremes: [x: number[], y: number[]];
 }
 
 function shapeOutline(shape: ArtworkShape): Point[] {
@@ -70,9 +87,10 @@ function shapeOutline(shape: ArtworkShape): Point[] {
 }
 
 /** Metal edges of the copper outlines along one axis: axis-aligned extremes with copper on one side only. */
-function metalEdges(outlines: readonly Point[][], axis: 0 | 1): MetalEdge[] {
-	const eps = 1e-4;
+function metalEdges(layer: CopperLayerOutlines, axis: 0 | 1): MetalEdge[] {
+	const outlines = layer.rings;
 	const isMetal = (p: Point) => outlines.some((ring) => isPointInRing(p, ring));
+	const snap = (v: number) => layer.extremes[axis].find((e) => Math.abs(e - v) <= 2 * ROUND_CHORD_TOLERANCE_MM) ?? v;
 	const edges: MetalEdge[] = [];
 	for (const ring of outlines) {
 		for (let i = 0; i < ring.length; i++) {
@@ -84,11 +102,13 @@ function metalEdges(outlines: readonly Point[][], axis: 0 | 1): MetalEdge[] {
 			const straight = Math.abs(a[axis] - b[axis]) < 1e-9 && Math.abs(a[along] - b[along]) > 1e-6;
 			if (!straight && !isExtreme) continue;
 			const mid: Point = straight ? [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2] : a;
+			// a chorded extreme is tested a little further out and in, past the chords’ sagitta; edges snap to the exact extremes
+			const eps = straight ? 1e-4 : 5 * ROUND_CHORD_TOLERANCE_MM;
 			const plus: Point = axis === 0 ? [mid[0] + eps, mid[1]] : [mid[0], mid[1] + eps];
 			const minus: Point = axis === 0 ? [mid[0] - eps, mid[1]] : [mid[0], mid[1] - eps];
 			const up = isMetal(plus);
 			const down = isMetal(minus);
-			if (up !== down) edges.push({ positionMm: mid[axis], metalSide: up ? 1 : -1 });
+			if (up !== down) edges.push({ positionMm: snap(mid[axis]), metalSide: up ? 1 : -1 });
 		}
 	}
 	return edges;
@@ -109,6 +129,10 @@ function twoCopperStack(artwork: Artwork): TwoCopperStack {
 		throw unsupported('the Field check models a single patch on one dielectric between two coppers; layered feeds, stacks and arrays are not modelled yet');
 	}
 	const dielectric = dielectrics[0];
+	const roles = artwork.layers.flatMap((l) => l.shapes.map((sh) => sh.role));
+	if (roles.filter((r) => r === 'patch').length !== 1 || roles.some((r) => r === 'feed-network' || r === 'parasitic-patch' || r === 'coupling-slot')) {
+		throw unsupported('the Field check models a single patch on one dielectric between two coppers; layered feeds, stacks and arrays are not modelled yet');
+	}
 	return { groundZMm: dielectric.zMm, topZMm: dielectric.zMm + dielectric.thicknessMm, dielectric, topCopper: coppers[0], bottomCopper: coppers[1] };
 }
 
@@ -141,8 +165,10 @@ export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number,
 	const topLayer = artwork.layers.find((l) => l.id === topCopper.layerId);
 	const groundLayer = artwork.layers.find((l) => l.id === bottomCopper.layerId);
 	if (!topLayer || !groundLayer) throw unsupported('the artwork lacks its copper layers');
-	const topOutlines = copperOutlines(topLayer.shapes);
-	const groundOutlines = copperOutlines(groundLayer.shapes);
+	const topCopperOutlines = copperOutlines(topLayer.shapes);
+	const groundCopperOutlines = copperOutlines(groundLayer.shapes);
+	const topOutlines = topCopperOutlines.rings;
+	const groundOutlines = groundCopperOutlines.rings;
 
 	const sheet = (name: string, layer: typeof topCopper, outlines: Point[][], zMm: number): ModelProperty => ({
 		kind: 'sheet',
@@ -196,7 +222,7 @@ export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number,
 	// edges lying on or beside a fixed line are resolved by it (the port plane near the board edge)
 	const awayFrom = (fixed: number[]) => (e: MetalEdge) => fixed.every((f) => Math.abs(f - e.positionMm) > edgeCellMm * 1.01);
 	// each copper layer's edges on its own: the ground under the patch does not hide the patch's edges
-	const edgesOf = (axis: 0 | 1) => [...metalEdges(topOutlines, axis), ...metalEdges(groundOutlines, axis)];
+	const edgesOf = (axis: 0 | 1) => [...metalEdges(topCopperOutlines, axis), ...metalEdges(groundCopperOutlines, axis)];
 	const planXY: AxisPlan = { maxFineCellMm, maxAirCellMm, edgeCellMm };
 	const planZ: AxisPlan = { maxFineCellMm: layerCellMm, maxAirCellMm, edgeCellMm: layerCellMm };
 	const x: AxisFeatures = { fromMm: -boundaryMm, toMm: boardW + boundaryMm, edges: edgesOf(0).filter(awayFrom(fixedX)), fixedMm: fixedX, fineFromMm: 0, fineToMm: boardW };
@@ -204,7 +230,7 @@ export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number,
 	const z: AxisFeatures = { fromMm: groundZMm - boundaryMm, toMm: topZMm + boundaryMm, edges: [], fixedMm: fixedZ, fineFromMm: groundZMm, fineToMm: topZMm };
 	const mesh = buildMesh({ x, y, z }, { x: planXY, y: planXY, z: planZ });
 
-	const nearFarField = options.nearFarField ?? options.mode !== 'quick';
+	const nearFarField = options.nearFarField ?? false;
 	return {
 		mode: options.mode,
 		refinement,

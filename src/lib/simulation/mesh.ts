@@ -3,7 +3,7 @@ import type { MeshStatistics } from '../schemas/field-check';
 import type { FieldMesh } from './types';
 
 /** Largest ratio of neighbouring cells the grader aims at; the rule it must keep is MAX_GRADING_RATIO. */
-const TARGET_GRADING_RATIO = 1.3;
+const TARGET_GRADING_RATIO = 1.25;
 /** Neighbouring cells may differ by at most this factor (common practice for FDTD meshes, no source). */
 export const MAX_GRADING_RATIO = 1.4;
 /** Samples per gap when the grader integrates the local cell size. */
@@ -126,7 +126,7 @@ export function buildAxis(features: AxisFeatures, plan: AxisPlan): number[] {
 		index += g.length - 1;
 	}
 	requiredIndex.add(index);
-	return relaxFreeLines(out, requiredIndex);
+	return relaxFreeLines(out, requiredIndex, limit);
 }
 
 /**
@@ -175,7 +175,7 @@ const RELAXATION_PASSES = 30;
  * run of the cells beyond them: a few passes even out the size jumps that rounding leaves where
  * two gaps meet, without undoing the grading (each pass only looks one cell further out).
  */
-function relaxFreeLines(lines: number[], required: ReadonlySet<number>): number[] {
+function relaxFreeLines(lines: number[], required: ReadonlySet<number>, limit: (xMm: number) => number): number[] {
 	const out = [...lines];
 	for (let pass = 0; pass < RELAXATION_PASSES; pass++) {
 		for (let i = 2; i + 2 < out.length; i++) {
@@ -185,7 +185,11 @@ function relaxFreeLines(lines: number[], required: ReadonlySet<number>): number[
 			const span = out[i + 1] - out[i - 1];
 			// in a geometric run c1, c2, c3, c4 the middle pair keeps c3/c2 = (c4/c1)^(1/3)
 			const ratio = Math.cbrt(right / left);
-			out[i] = out[i - 1] + span / (1 + ratio);
+			const want = out[i - 1] + span / (1 + ratio);
+			// never grow either cell past its local limit
+			const lo = out[i + 1] - limit((out[i] + out[i + 1]) / 2);
+			const hi = out[i - 1] + limit((out[i - 1] + out[i]) / 2);
+			if (lo <= hi) out[i] = Math.min(hi, Math.max(lo, want));
 		}
 	}
 	return out;

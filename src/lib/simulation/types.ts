@@ -108,7 +108,7 @@ export interface FieldModelOptions {
 	mode: FieldCheckMode;
 	/** Extra mesh refinement factor (default 1). */
 	refinement?: number;
-	/** Record near-field dumps for the far-field transform (default: not in quick mode). */
+	/** Record time-domain near-field dumps for a far-field transform (default false: the runner does not transform them yet). */
 	nearFarField?: boolean;
 }
 

@@ -74,6 +74,12 @@ function secant(x0: number, y0: number, x1: number, y1: number, fallback: number
 	return x1 - y1 / slope;
 }
 
+/** Largest relative change of the feed dimension in one step (a feed moves further than the patch). */
+const MAX_FEED_STEP_FRACTION = 0.4;
+const clampFeedStep = (from: number, to: number) => {
+	const base = Math.max(from, 0.5);
+	return Math.min(base * (1 + MAX_FEED_STEP_FRACTION), Math.max(base * (1 - MAX_FEED_STEP_FRACTION), to));
+};
 const clampStep = (from: number, to: number) => Math.min(from * (1 + MAX_STEP_FRACTION), Math.max(from * (1 - MAX_STEP_FRACTION), to));
 
 /**
@@ -100,7 +106,7 @@ export async function runHoming(input: unknown, options: Partial<FieldCheckOptio
 		});
 		const trial = { overrides: doc.overrides, result };
 		trials.push(trial);
-		iterations.push({ step: n, parameter, value, resonanceHz: result.resonance?.frequencyHz ?? null, s11AtTargetDb: result.s11AtTargetDb, simulations: n });
+		iterations.push({ step: iterations.length + 1, parameter, value, resonanceHz: result.resonance?.frequencyHz ?? null, s11AtTargetDb: result.s11AtTargetDb, simulations: n });
 		return trial;
 	};
 
@@ -131,30 +137,35 @@ export async function runHoming(input: unknown, options: Partial<FieldCheckOptio
 		return finish(resonanceOk, resonanceOk ? `resonance within ${(Math.abs(errorOf(tuned)!) * 100).toFixed(2)} % of the target; a ${document.feed} feed is not moved by Homing` : `resonance still ${(errorOf(tuned)! * 100).toFixed(2)} % from the target after ${trials.length} simulations`, tuned);
 	}
 
-	// phase 2: the feed, from the best resonant trial
+	// phase 2: the feed, from the best resonant trial; each step also corrects the resonant
+	// dimension by the scaling rule, since moving the feed pulls the resonance a little
 	const zRef = tuned.result.referenceImpedanceOhm;
 	const sizedAt = (t: Trial) => size({ ...document, overrides: t.overrides });
 	const mismatch = (t: Trial) => feedPointResistance(sizedAt(t), t.result) - zRef;
+	const done = (t: Trial) => t.result.s11AtTargetDb <= MATCH_GOAL_DB && errorOf(t) !== null && Math.abs(errorOf(t)!) <= RESONANCE_TOLERANCE_FRACTION;
 	let feedPrev: Trial | null = null;
 	let feedCur = tuned;
-	while (feedCur.result.s11AtTargetDb > MATCH_GOAL_DB && trials.length < MAX_HOMING_SIMULATIONS) {
+	while (!done(feedCur) && trials.length < MAX_HOMING_SIMULATIONS) {
 		const y1 = feedCur.overrides[feed.key]!;
 		const m1 = mismatch(feedCur);
-		const sizedCur = sizedAt(feedCur);
-		const modelStep = cosineModelStep(sizedCur, feed.key, y1, m1 + zRef, zRef);
+		const modelStep = cosineModelStep(sizedAt(feedCur), feed.key, y1, m1 + zRef, zRef);
 		const next = feedPrev ? secant(feedPrev.overrides[feed.key]!, mismatch(feedPrev), y1, m1, modelStep) : modelStep;
 		feedPrev = feedCur;
-		const value = Math.max(0, clampStep(Math.max(y1, 0.5), next));
-		feedCur = await simulate({ ...feedCur.overrides, [feed.key]: value }, feed.key, value);
+		const value = Math.max(0, clampFeedStep(y1, next));
+		const x1 = feedCur.overrides[resonant.key]!;
+		const e1 = errorOf(feedCur);
+		const resonantValue = e1 !== null && Math.abs(e1) > RESONANCE_TOLERANCE_FRACTION ? clampStep(x1, x1 * (1 + e1)) : x1;
+		const n = trials.length + 1;
+		if (resonantValue !== x1) iterations.push({ step: iterations.length + 1, parameter: resonant.key, value: resonantValue, resonanceHz: null, s11AtTargetDb: feedCur.result.s11AtTargetDb, simulations: n });
+		feedCur = await simulate({ ...feedCur.overrides, [feed.key]: value, [resonant.key]: resonantValue }, feed.key, value);
 	}
-	const feedTrials = trials.filter((t) => t === tuned || trials.indexOf(t) >= trials.indexOf(tuned));
+	const feedTrials = trials.slice(trials.indexOf(tuned));
 	const best = bestBy(feedTrials, (t) => t.result.s11AtTargetDb);
-	const matched = best.result.s11AtTargetDb <= MATCH_GOAL_DB;
 	const bestError = errorOf(best);
 	const resonanceText = bestError === null ? 'no resonance in the band' : `resonance ${(bestError * 100).toFixed(2)} % from the target`;
 	return finish(
-		matched && bestError !== null && Math.abs(bestError) <= RESONANCE_TOLERANCE_FRACTION,
-		`${resonanceText} and S11 ${best.result.s11AtTargetDb.toFixed(1)} dB at the target${matched ? '' : ` (goal ${MATCH_GOAL_DB} dB)`} after ${trials.length} simulations`,
+		done(best),
+		`${resonanceText} and S11 ${best.result.s11AtTargetDb.toFixed(1)} dB at the target${best.result.s11AtTargetDb <= MATCH_GOAL_DB ? '' : ` (goal ${MATCH_GOAL_DB} dB)`} after ${trials.length} simulations`,
 		best
 	);
 
