@@ -6,7 +6,7 @@ import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb, getDb } from '../../../src/lib/server/db';
 import { findRevision, findDesign } from '../../../src/lib/server/designs';
-import { cancelFieldCheck, findFieldCheck, startFieldCheck } from '../../../src/lib/server/field-checks';
+import { cancelFieldCheck, findFieldCheck, reviseFromHoming, startFieldCheck } from '../../../src/lib/server/field-checks';
 import { stopQueue } from '../../../src/lib/server/jobs';
 import { startFieldCheckWorker, type RunningWorker } from '../../../src/worker/field-check-worker';
 import { createWorkspace, type Workspace } from '../exports/workspace-fixture';
@@ -86,6 +86,18 @@ describe('a field check through the queue', () => {
 		expect(study.state).toBe('succeeded');
 		expect(study.homing?.iterations[0].parameter).toBe('lengthMm');
 		expect(study.result).toEqual(study.homing?.final);
+
+		// "Make a revision from the tuned input": a child of the studied revision that records the study at insert.
+		const design = (await findDesign(getDb(), ws.designId))!;
+		const { label } = await reviseFromHoming(getDb(), { design, study, userId: ws.people.editor.id });
+		const made = await getDb().selectFrom('revision').selectAll().where('design_id', '=', ws.designId).where('label', '=', label).executeTakeFirstOrThrow();
+		expect(made.homed_from_field_check_id).toBe(id);
+		expect(made.note).toMatch(new RegExp(`Homing study ${id.slice(0, 8)} of rev A`));
+		expect((made.input as { name: string }).name).toBe((study.homing!.tunedInput as { name: string }).name);
+		// A check that is not a finished Homing study cannot be revised from.
+		const { id: plain } = await start();
+		await expect(reviseFromHoming(getDb(), { design, study: (await findFieldCheck(getDb(), plain))!, userId: ws.people.editor.id })).rejects.toThrow(/Homing study that has finished/);
+		await cancelFieldCheck(getDb(), plain, 'Editor');
 	});
 });
 
