@@ -75,3 +75,13 @@ describe('inset depth against published relations', () => {
 		expect(s11).toBeLessThan(-3.5);
 	});
 });
+
+describe("the README's Accuracy table", () => {
+	it('is the table the models give today', async () => {
+		const { readFileSync } = await import('node:fs');
+		const { accuracyTableLines } = await import('../../fixtures/rf/accuracy-table');
+		const readme = readFileSync(new URL('../../../README.md', import.meta.url), 'utf8');
+		const inside = readme.split('<!-- accuracy-table:start -->\n')[1]?.split('\n<!-- accuracy-table:end -->')[0];
+		expect(inside).toBe(accuracyTableLines().join('\n'));
+	});
+});
