@@ -11,7 +11,8 @@ import { microstripSection, quarterWaveTransformer } from './quarter-wave-transf
 import { rectangularPatch, type RectangularPatchSize } from './rectangular-patch';
 import { groundSize } from './ground-size';
 import { needsExtendedSizing, sizeExtended } from './size-extended';
-import type { SizedDesign, SizedEstimates, SizedFeed, SizedLine, SizedPatch } from './sized-design';
+import type { FormulaValues, SizedDesign, SizedEstimates, SizedFeed, SizedLine, SizedPatch } from './sized-design';
+import { circularRadiationConductanceS, effectiveRadiusMm } from './circular-patch';
 import { sizingWarnings, type WarningFacts } from './sizing-warnings';
 import { slotConductance, type SlotConductances } from './slot-conductance';
 import { squarePatch, lineModelOf } from './square-patch';
@@ -70,11 +71,38 @@ function lineEstimates(d: DesignInput, model: RectangularPatchSize, slots: SlotC
 	});
 }
 
+/** An overridden length keeps the width's εreff and ΔL (they depend on W and h only). */
+function withLengthOverride(model: RectangularPatchSize, lengthMm: number | undefined): RectangularPatchSize {
+	if (lengthMm === undefined) return model;
+	return { ...model, lengthMm, effectiveLengthMm: lengthMm + 2 * model.fringeExtensionMm };
+}
+
+/** The closed-form values of the dimensions the document overrides (undefined without overrides). */
+function formulaValuesOf(d: DesignInput, fed: SizedFeed, core: Core): FormulaValues | undefined {
+	const o = d.overrides;
+	if (!o || Object.values(o).every((v) => v === undefined)) return undefined;
+	const plain = sizeValid({ ...d, overrides: undefined });
+	const out: FormulaValues = {};
+	if (o.lengthMm !== undefined && plain.patch.kind === 'rectangular') out.lengthMm = plain.patch.lengthMm;
+	if (o.widthMm !== undefined && plain.patch.kind === 'rectangular') out.widthMm = plain.patch.widthMm;
+	if (o.radiusMm !== undefined && plain.patch.kind === 'circular') out.radiusMm = plain.patch.radiusMm;
+	// the feed formulas applied to the patch as overridden, so a tuned feed is compared like for like
+	if (o.insetDepthMm !== undefined && fed.kind === 'inset') out.insetDepthMm = insetDepthMm({ edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm, lengthMm: core.resonantLengthMm, law: 'cos4' });
+	if (o.probeOffsetMm !== undefined && fed.kind === 'probe') out.probeOffsetMm = probeFormulaOffset(d, core);
+	return out;
+}
+
+function probeFormulaOffset(d: DesignInput, core: Core): number {
+	const target = { edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm };
+	if (core.patch.kind === 'circular') return circularProbeRadiusMm({ ...target, radiusMm: core.patch.radiusMm, effectiveRadiusMm: core.patch.effectiveRadiusMm });
+	return probeOffsetMm({ ...target, lengthMm: core.resonantLengthMm });
+}
+
 function rectangularFamily(d: DesignInput): Core {
 	const { frequencyHz, substrate: s } = d;
 	const base = { frequencyHz, relativePermittivity: s.relativePermittivity, heightMm: s.heightMm };
 	if (d.shape === 'rectangular') {
-		const model = rectangularPatch({ ...base, widthMm: d.patchWidthMm });
+		const model = withLengthOverride(rectangularPatch({ ...base, widthMm: d.patchWidthMm ?? d.overrides?.widthMm }), d.overrides?.lengthMm);
 		const slots = slotConductance({ widthMm: model.widthMm, lengthMm: model.lengthMm, frequencyHz });
 		const patch: SizedPatch = { kind: 'rectangular', widthMm: model.widthMm, lengthMm: model.lengthMm };
 		const estimates = lineEstimates(d, model, slots);
@@ -108,9 +136,18 @@ function rectangularFamily(d: DesignInput): Core {
 	return { patch, model, slots, ...edgeResistances(slots.edgeResistanceOhm, estimates), estimates, extentXMm: ns.widthMm, extentYMm: ns.lengthMm, resonantLengthMm: ns.lengthMm, feedEdgeMm: ns.widthMm };
 }
 
+/** An overridden radius brings its own effective radius and radiation conductance. */
+function withRadiusOverride(c: ReturnType<typeof circularPatch>, d: DesignInput): ReturnType<typeof circularPatch> {
+	const radiusMm = d.overrides?.radiusMm;
+	if (radiusMm === undefined) return c;
+	const ae = effectiveRadiusMm(radiusMm, d.substrate.heightMm, d.substrate.relativePermittivity);
+	const g = circularRadiationConductanceS(ae, d.frequencyHz);
+	return { radiusMm, effectiveRadiusMm: ae, radiationConductanceS: g, edgeResistanceOhm: 1 / g };
+}
+
 function circularCore(d: DesignInput): Core {
 	const { frequencyHz, substrate: s } = d;
-	const c = circularPatch({ frequencyHz, relativePermittivity: s.relativePermittivity, heightMm: s.heightMm });
+	const c = withRadiusOverride(circularPatch({ frequencyHz, relativePermittivity: s.relativePermittivity, heightMm: s.heightMm }), d);
 	const g = c.radiationConductanceS;
 	const estimates = performanceEstimates({
 		frequencyHz,
@@ -151,7 +188,7 @@ function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
 			return { feed: { kind: 'edge', line: l }, feedRoomMm: 0, facts: { feedWidth: { widthMm: l.widthMm, edgeMm: core.feedEdgeMm, notch: false } } };
 		}
 		case 'inset': {
-			const depth = insetDepthMm({ edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm, lengthMm: core.resonantLengthMm, law: 'cos4' });
+			const depth = d.overrides?.insetDepthMm ?? insetDepthMm({ edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm, lengthMm: core.resonantLengthMm, law: 'cos4' });
 			const l = line(d.feedLineImpedanceOhm, marginMm + depth);
 			const gap = d.inset.notchGapMm ?? NOTCH_GAP_LINE_WIDTHS * l.widthMm;
 			return {
@@ -185,7 +222,7 @@ function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
 			const common = { drillDiameterMm: d.probe.drillDiameterMm, padDiameterMm: pad, clearanceDiameterMm: d.probe.clearanceDiameterMm };
 			const target = { edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm };
 			if (core.patch.kind === 'circular') {
-				const rho = circularProbeRadiusMm({ ...target, radiusMm: core.patch.radiusMm, effectiveRadiusMm: core.patch.effectiveRadiusMm });
+				const rho = d.overrides?.probeOffsetMm ?? circularProbeRadiusMm({ ...target, radiusMm: core.patch.radiusMm, effectiveRadiusMm: core.patch.effectiveRadiusMm });
 				return { feed: { kind: 'probe', offsetXMm: 0, offsetYMm: rho, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: core.patch.radiusMm - rho, padRadiusMm: pad / 2, drillDiameterMm: common.drillDiameterMm } } };
 			}
 			if (core.patch.kind === 'nearly-square') {
@@ -197,7 +234,7 @@ function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
 				const edge = Math.min(core.patch.widthMm / 2 - x, core.patch.lengthMm / 2 - y);
 				return { feed: { kind: 'probe', offsetXMm: x, offsetYMm: y, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: edge, padRadiusMm: pad / 2, drillDiameterMm: common.drillDiameterMm } } };
 			}
-			const offset = probeOffsetMm({ ...target, lengthMm: core.resonantLengthMm });
+			const offset = d.overrides?.probeOffsetMm ?? probeOffsetMm({ ...target, lengthMm: core.resonantLengthMm });
 			const edge = Math.min(core.resonantLengthMm / 2 - offset, core.extentXMm / 2);
 			return { feed: { kind: 'probe', offsetXMm: 0, offsetYMm: offset, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: edge, padRadiusMm: pad / 2, drillDiameterMm: common.drillDiameterMm } } };
 		}
@@ -211,6 +248,7 @@ function sizeValid(d: DesignInput, assumed?: WarningFacts['assumedLossTangent'])
 	const core = d.shape === 'circular' ? circularCore(d) : rectangularFamily(d);
 	const marginMm = d.groundMarginMm ?? 3 * s.heightMm;
 	const fed = attachFeed(d, core, marginMm);
+	const formulaValues = formulaValuesOf(d, fed.feed, core);
 	const ground = groundSize({ patchWidthMm: core.extentXMm, patchLengthMm: core.extentYMm, heightMm: s.heightMm, marginMm, feedRoomMm: fed.feedRoomMm });
 	const resonanceAccuracy = resonanceAccuracyFor(d.shape);
 	const warnings = sizingWarnings({
@@ -253,7 +291,8 @@ function sizeValid(d: DesignInput, assumed?: WarningFacts['assumedLossTangent'])
 		ground,
 		copperThicknessMm: mmFromUm(s.copperThicknessUm),
 		estimates: core.estimates,
-		warnings
+		warnings,
+		...(formulaValues ? { formulaValues } : {})
 	};
 }
 

@@ -269,4 +269,18 @@ export interface SizedDesign {
 	parasitic?: SizedParasitic;
 	/** Present for an array; the element is everything above, and `ground` is one element's ground. */
 	array?: SizedArray;
+	/**
+	 * Present when the document overrides dimensions (`overrides`): the closed-form value of each
+	 * overridden dimension, for showing beside the value used. Everything else describes the overridden patch.
+	 */
+	formulaValues?: FormulaValues;
+}
+
+/** Closed-form values of overridden dimensions (only the overridden keys are present). */
+export interface FormulaValues {
+	lengthMm?: number;
+	widthMm?: number;
+	radiusMm?: number;
+	insetDepthMm?: number;
+	probeOffsetMm?: number;
 }
