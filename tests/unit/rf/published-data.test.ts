@@ -85,3 +85,17 @@ describe("the README's Accuracy table", () => {
 		expect(inside).toBe(accuracyTableLines().join('\n'));
 	});
 });
+
+describe('field-check runs recorded in the README (openEMS 0.0.35 through `simulate`, standard mode)', () => {
+	it('still describe the first pass: the dimensions simulated are the dimensions sized today (re-run them when sizing changes)', async () => {
+		const { fieldCheckRuns } = await import('../../fixtures/rf/field-check-runs');
+		expect(fieldCheckRuns.length).toBeGreaterThanOrEqual(6);
+		for (const r of fieldCheckRuns) {
+			const d = size(r.document);
+			const dim = d.patch.kind === 'circular' ? d.patch.radiusMm : d.patch.kind === 'rectangular' ? d.patch.lengthMm : NaN;
+			const feed = d.feed.kind === 'inset' ? d.feed.insetDepthMm : d.feed.kind === 'probe' ? Math.hypot(d.feed.offsetXMm, d.feed.offsetYMm) : NaN;
+			expect(Math.abs(dim - r.resonantDimensionMm), r.document.name).toBeLessThan(1e-3);
+			expect(Math.abs(feed - r.feedPositionMm), r.document.name).toBeLessThan(1e-3);
+		}
+	});
+});
