@@ -1,7 +1,7 @@
 // One ESLint config. Its main job: keep the pure core pure (ARCHITECTURE.md, house rules).
 import tseslint from 'typescript-eslint';
 
-const pureCore = ['schemas', 'units', 'rf', 'geometry', 'artwork', 'drc', 'formats'].map((room) => `src/lib/${room}/**/*.ts`);
+const pureCore = ['schemas', 'units', 'rf', 'geometry', 'artwork', 'drc', 'formats', 'design', 'simulation'].map((room) => `src/lib/${room}/**/*.ts`);
 
 export default tseslint.config(
 	{ ignores: ['**/*.svelte', '.svelte-kit/**', 'build/**', 'node_modules/**', '.data/**', 'tests/fixtures/**'] },

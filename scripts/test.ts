@@ -7,6 +7,7 @@ import pg from 'pg';
 import { loadConfig, rootDir, runMain } from './lib/config.ts';
 import { provideMail } from './lib/mail.ts';
 import { migrateToLatest } from './lib/migrate.ts';
+import { ensureOpenEms } from './lib/openems.ts';
 import { TEST_DATABASE, connectionUrl, provideDatabase, stopCluster } from './lib/postgres.ts';
 import { stopBackground } from './lib/services.ts';
 
@@ -98,6 +99,8 @@ runMain(async () => {
 
 		if (!only || only.vitest.length > 0) {
 			console.log('\n── vitest: unit + integration ──');
+			// the Field check's integration tests run the real engine
+			ensureOpenEms();
 			const vitestReport = join(reports, 'vitest.json');
 			run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`, ...(only?.vitest ?? [])], env);
 			const v = readJson(vitestReport);
@@ -107,6 +110,8 @@ runMain(async () => {
 		if (!only || only.e2e.length > 0) {
 			console.log('\n── Playwright end-to-end in Chromium ──');
 			const chromium = ensureChromium();
+			// the field-check journey's worker runs the real engine
+			ensureOpenEms();
 			if (built !== 0) {
 				tallies.push({ suite: 'e2e', passed: 0, failed: 1 });
 			} else {

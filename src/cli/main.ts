@@ -28,7 +28,7 @@ async function usage(): Promise<string> {
 	const lines = ['Usage: npm run cli -- <command> [options]', '', 'Commands:'];
 	for (const name of commandNames()) lines.push(`  ${name.padEnd(10)} ${(await load(name)).summary}`);
 	lines.push('', 'Run `npm run cli -- <command> --help` for a command\'s options.');
-	lines.push('Exit codes: 0 ok, 2 bad input, 3 design-rule violations.');
+	lines.push('Exit codes: 0 ok, 2 bad input, 3 design-rule violations, 4 Field check engine (openEMS) missing, 5 engine failed or over budget.');
 	return lines.join('\n');
 }
 

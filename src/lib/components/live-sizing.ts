@@ -29,7 +29,8 @@ export function sizeDocument(raw: unknown): SizingOutcome {
 	if (!parsed.success) return { ok: false, issues: fromZodError(parsed.error, raw).issues };
 	try {
 		const sized = size(parsed.data);
-		return { ok: true, input: parsed.data, sized, artwork: buildArtwork(sized) };
+		// sized.input is the complete document, with an assumed tanδ written in (and named by a warning)
+		return { ok: true, input: sized.input, sized, artwork: buildArtwork(sized) };
 	} catch (err) {
 		if (err instanceof InputError) return { ok: false, issues: err.issues };
 		if (err instanceof GeometryError) {

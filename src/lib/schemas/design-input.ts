@@ -66,8 +66,11 @@ function bounded(min: number, max: number, opts: { exclusiveMin?: boolean; exclu
 export const substrateSchema = z.strictObject({
 	/** Relative permittivity εr of the dielectric. */
 	relativePermittivity: bounded(1, 30, { exclusiveMin: true }),
-	/** Dielectric loss tangent tanδ. */
-	lossTangent: bounded(0, 1, { exclusiveMax: true }).default(0.0009),
+	/**
+	 * Dielectric loss tangent tanδ. No silent default: when it is missing, sizing assumes the typical
+	 * value of the εr's material class (laminateClassFor), writes it into the document and warns.
+	 */
+	lossTangent: bounded(0, 1, { exclusiveMax: true }).optional(),
 	/** Dielectric thickness h between patch copper and ground copper. */
 	heightMm: bounded(0, 100, { exclusiveMin: true }),
 	/** Finished copper thickness (35 µm ≈ 1 oz/ft²). */
@@ -174,6 +177,25 @@ export const arrayOptionsSchema = z.strictObject({
 	scanAngleDeg: bounded(0, 80).default(0)
 });
 
+/**
+ * Explicit dimensions the sizing uses instead of its formulas (what Homing writes after a full-wave
+ * study, or a designer after measuring). Each is honoured as given; the derived values and warnings
+ * then describe the overridden patch, and the formula's own value stays visible beside it.
+ */
+export const dimensionOverridesSchema = z.strictObject({
+	/** Resonant length of a rectangular patch (y, the feed's direction). */
+	lengthMm: bounded(0.1, 2000).optional(),
+	/** Width of a rectangular patch (x). */
+	widthMm: bounded(0.1, 2000).optional(),
+	/** Physical radius of a circular patch. */
+	radiusMm: bounded(0.05, 1000).optional(),
+	/** Inset notch depth y0 from the radiating edge (feed "inset"). */
+	insetDepthMm: bounded(0, 1000).optional(),
+	/** Probe distance from the patch centre along the feed axis (feed "probe"). */
+	probeOffsetMm: bounded(0, 1000).optional()
+});
+export type DimensionOverrides = z.infer<typeof dimensionOverridesSchema>;
+
 const isPowerOfTwo = (n: number) => Number.isInteger(n) && n >= 1 && (n & (n - 1)) === 0;
 
 /** A design's name: shown in every file of its exports (titles, comments, the fab notes). */
@@ -210,7 +232,9 @@ const designInputObject = z.strictObject({
 	/** A parasitic patch on the top copper over the driven patch (needs a three-copper stack). */
 	parasitic: parasiticOptionsSchema.optional(),
 	/** Repeat the element as a 1×N or N×M array with a corporate feed. */
-	array: arrayOptionsSchema.optional()
+	array: arrayOptionsSchema.optional(),
+	/** Explicit dimensions that replace the sizing formulas' values (see dimensionOverridesSchema). */
+	overrides: dimensionOverridesSchema.optional()
 });
 
 export const designInputSchema = designInputObject.superRefine((d, ctx) => {
@@ -236,6 +260,7 @@ export const designInputSchema = designInputObject.superRefine((d, ctx) => {
 		});
 	}
 	layeredRules(d, ctx);
+	overrideRules(d, ctx);
 	if (d.probe.clearanceDiameterMm <= d.probe.drillDiameterMm) {
 		ctx.addIssue({
 			code: 'custom',
@@ -257,6 +282,20 @@ type RefineContext = z.core.$RefinementCtx<ParsedDocument>;
 /** How many copper layers a document's feed and parasitic patch need. */
 export function requiredCopperCount(d: Pick<ParsedDocument, 'feed' | 'parasitic'>): number {
 	return (layeredFeedKinds as readonly string[]).includes(d.feed) || d.parasitic ? 3 : 2;
+}
+
+/** Which overrides apply to which shapes and feeds. */
+function overrideRules(d: ParsedDocument, ctx: RefineContext): void {
+	const o = d.overrides;
+	if (!o) return;
+	const issue = (key: keyof DimensionOverrides, message: string) => ctx.addIssue({ code: 'custom', path: ['overrides', key], input: o[key], message });
+	if (o.lengthMm !== undefined && d.shape !== 'rectangular') issue('lengthMm', 'only a rectangular patch takes a length override');
+	if (o.widthMm !== undefined && d.shape !== 'rectangular') issue('widthMm', 'only a rectangular patch takes a width override');
+	if (o.widthMm !== undefined && d.patchWidthMm !== undefined) issue('widthMm', 'give the width once: patchWidthMm or overrides.widthMm');
+	if (o.radiusMm !== undefined && d.shape !== 'circular') issue('radiusMm', 'only a circular patch takes a radius override');
+	if (o.insetDepthMm !== undefined && d.feed !== 'inset') issue('insetDepthMm', 'only an inset feed takes an inset depth override');
+	if (o.probeOffsetMm !== undefined && d.feed !== 'probe') issue('probeOffsetMm', 'only a probe feed takes a probe offset override');
+	if (o.probeOffsetMm !== undefined && d.shape === 'nearly-square') issue('probeOffsetMm', 'a nearly-square patch is fed on its diagonal; its probe offset cannot be overridden');
 }
 
 /** Rules of the stack, the layered feeds, the parasitic patch and the array. */

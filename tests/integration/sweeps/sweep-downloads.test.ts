@@ -17,11 +17,14 @@ const db = getDb();
 let team: TestTeam;
 let dataDir: string;
 const savedDataDir = process.env.FRINGEFIELD_DATA_DIR;
+const savedBudget = process.env.FRINGEFIELD_WORK_BUDGET_MS;
 let target: { designId: string; revisionId: string; planId: string };
 
 beforeAll(async () => {
 	dataDir = mkdtempSync(join(tmpdir(), 'ff-sweep-cache-'));
 	process.env.FRINGEFIELD_DATA_DIR = dataDir;
+	// these tests are about one build and its file, not the budget (tests/unit/server/work covers that), on however busy a machine
+	process.env.FRINGEFIELD_WORK_BUDGET_MS = '900000';
 	team = await createTestTeam(db, 'bigsweep');
 	const { design } = await createDesign(db, { teamId: team.teamId, userId: team.users.editor.id, raw: sampleInput({ name: `Big sweep ${team.suffix}` }) });
 	const revision = (await findRevision(db, design.id, 'A'))!;
@@ -44,6 +47,8 @@ beforeAll(async () => {
 afterAll(async () => {
 	if (savedDataDir === undefined) delete process.env.FRINGEFIELD_DATA_DIR;
 	else process.env.FRINGEFIELD_DATA_DIR = savedDataDir;
+	if (savedBudget === undefined) delete process.env.FRINGEFIELD_WORK_BUDGET_MS;
+	else process.env.FRINGEFIELD_WORK_BUDGET_MS = savedBudget;
 	rmSync(dataDir, { recursive: true, force: true });
 	await closeDb();
 });
@@ -72,7 +77,7 @@ describe('a 10 000-point sweep plan', () => {
 		expect(bytes.byteLength).toBe(four[0].sizeBytes);
 		expect(four[0].pointCount).toBe(10_000);
 		expect(JSON.parse(new TextDecoder().decode(bytes)).points).toHaveLength(10_000);
-	}, 180_000);
+	}, 600_000);
 
 	it('keeps the file under FRINGEFIELD_DATA_DIR/cache/sweeps and serves later downloads from it without building', async () => {
 		const first = await download();
@@ -86,7 +91,7 @@ describe('a 10 000-point sweep plan', () => {
 		const names = readdirSync(sweepCacheDir());
 		expect(names.filter((n) => n.endsWith('.tmp'))).toEqual([]);
 		expect(names.sort()).toEqual([`${again.path.split('/').pop()!.replace(/\.json$/, '')}.facts.json`, again.path.split('/').pop()!].sort());
-	}, 120_000);
+	}, 600_000);
 
 	it('streams the file with its length, hash and export id', async () => {
 		const d = await download();
@@ -97,7 +102,7 @@ describe('a 10 000-point sweep plan', () => {
 		expect(res.headers.get('x-sweep-point-count')).toBe('10000');
 		const body = new Uint8Array(await res.arrayBuffer());
 		expect(sha256(body)).toBe(d.sha256);
-	}, 120_000);
+	}, 600_000);
 
 	it('builds again when the cached file is gone (a cleared cache is never an error)', async () => {
 		const d = await download();
@@ -107,5 +112,5 @@ describe('a 10 000-point sweep plan', () => {
 		expect(sweepBuildCount()).toBe(buildsBefore + 1);
 		expect(existsSync(again.path)).toBe(true);
 		expect(again.sha256).toBe(d.sha256);
-	}, 120_000);
+	}, 600_000);
 });

@@ -3,19 +3,17 @@
 import type { z } from 'zod';
 import { describe, expect, it } from 'vitest';
 import {
-	createTeamSchema,
-	createTokenSchema,
 	designInputSchema,
 	designNameSchema,
 	fabProfileSchema,
 	findControlCharacter,
 	laminateInputSchema,
 	revisionNoteSchema,
-	signUpSchema,
 	STANDARD_QUICK_TURN_PROFILE,
 	toOneLine,
 	waiverReasonSchema
 } from '../../../src/lib/schemas';
+import { createTeamSchema, createTokenSchema, signUpSchema } from '../../../src/lib/schemas/account';
 import { createDesignBodySchema, createRevisionBodySchema, waiverBodySchema } from '../../../src/lib/schemas/api';
 import { sweepPlanDraftSchema } from '../../../src/lib/schemas/sweep-plan';
 import { startDesignSchema } from '../../../src/lib/server/designs/start-design';

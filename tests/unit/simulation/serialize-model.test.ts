@@ -1,0 +1,120 @@
+// The engine's XML: golden files per case, read back by an independent XML parser (sax).
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import sax from 'sax';
+import { describe, expect, it } from 'vitest';
+import { serializeFieldModel, formatNumber } from '../../../src/lib/simulation';
+import { FIXTURES, fixtureCases, fixtureInput, fixtureModel } from './fixture-cases';
+
+interface Element {
+	name: string;
+	attributes: Record<string, string>;
+	children: Element[];
+	text: string;
+}
+
+/** The sax event handlers this test sets (sax ships no types; tests/unit/formats/svg/sax.d.ts declares the rest). */
+interface EventParser {
+	onopentag: (tag: { name: string; attributes: Record<string, string> }) => void;
+	onclosetag: (name: string) => void;
+	ontext: (text: string) => void;
+	onerror: (e: Error) => void;
+	write(text: string): { close(): unknown };
+}
+
+/** Parses XML strictly with sax (throws on malformed input) into a small element tree. */
+function parseXml(text: string): Element {
+	const parser = sax.parser(true) as unknown as EventParser;
+	const root: Element = { name: '#document', attributes: {}, children: [], text: '' };
+	const stack: Element[] = [root];
+	parser.onopentag = (tag) => {
+		const el: Element = { name: tag.name, attributes: tag.attributes, children: [], text: '' };
+		stack[stack.length - 1].children.push(el);
+		stack.push(el);
+	};
+	parser.onclosetag = () => void stack.pop();
+	parser.ontext = (t) => {
+		stack[stack.length - 1].text += t;
+	};
+	parser.onerror = (e) => {
+		throw e;
+	};
+	parser.write(text).close();
+	return root.children[0];
+}
+
+const all = (el: Element, name: string): Element[] => [...(el.name === name ? [el] : []), ...el.children.flatMap((c) => all(c, name))];
+const one = (el: Element, name: string): Element => {
+	const found = all(el, name);
+	expect(found, name).toHaveLength(1);
+	return found[0];
+};
+
+describe('serializeFieldModel', () => {
+	it.each(fixtureCases())('writes the golden model of %s byte for byte', (name) => {
+		const expected = readFileSync(join(FIXTURES, name, 'expected.xml'), 'utf8');
+		expect(serializeFieldModel(fixtureModel(name))).toBe(expected);
+	});
+
+	it.each(fixtureCases())('writes %s as the XML the engine reads: FDTD settings, one grid, materials, a lumped port', (name) => {
+		const doc = parseXml(serializeFieldModel(fixtureModel(name)));
+		const input = fixtureInput(name) as { frequencyHz: number; substrate: { relativePermittivity: number; lossTangent: number } };
+		expect(doc.name).toBe('openEMS');
+		const fdtd = one(doc, 'FDTD');
+		// −40 dB energy end criterion: 10^(−40/10) (openEMS reads endCriteria as an energy ratio)
+		expect(Number(fdtd.attributes.endCriteria)).toBeCloseTo(1e-4, 12);
+		const exc = one(fdtd, 'Excitation');
+		expect(exc.attributes.Type).toBe('0'); // Gaussian pulse
+		expect(Number(exc.attributes.f0)).toBe(input.frequencyHz);
+		// spans the check band target ± 30 %
+		expect(Number(exc.attributes.fc)).toBeCloseTo(0.3 * input.frequencyHz, 0);
+		const bc = one(fdtd, 'BoundaryCond');
+		for (const face of ['xmin', 'xmax', 'ymin', 'ymax', 'zmin', 'zmax']) expect(bc.attributes[face]).toBe('MUR');
+		const grid = one(doc, 'RectilinearGrid');
+		expect(grid.attributes.DeltaUnit).toBe('0.001'); // millimetres
+		for (const axis of ['XLines', 'YLines', 'ZLines']) {
+			const lines = one(grid, axis).text.split(',').map(Number);
+			expect(lines.every(Number.isFinite)).toBe(true);
+			expect(lines.every((l, i) => i === 0 || l > lines[i - 1])).toBe(true);
+		}
+		const material = one(doc, 'Material');
+		const property = one(material, 'Property');
+		expect(Number(property.attributes.Epsilon.split(',')[0])).toBe(input.substrate.relativePermittivity);
+		// κ = 2π·f·ε0·εr·tanδ at the target (the loss tangent's conductivity equivalent; Pozar, Microwave Engineering 4th ed., eq. 1.62; from memory)
+		const kappa = 2 * Math.PI * input.frequencyHz * 8.8541878128e-12 * input.substrate.relativePermittivity * input.substrate.lossTangent;
+		expect(Number(property.attributes.Kappa.split(',')[0]) / kappa).toBeCloseTo(1, 9);
+		const sheets = all(doc, 'ConductingSheet');
+		expect(sheets.map((s) => s.attributes.Name)).toEqual(['copper-top', 'copper-ground']);
+		for (const s of sheets) expect(Number(s.attributes.Thickness)).toBeCloseTo(35e-6, 12);
+		const resistor = one(doc, 'LumpedElement');
+		expect(resistor.attributes.R).toBe('50');
+		expect(resistor.attributes.Direction).toBe('2');
+		expect(all(doc, 'ProbeBox').map((p) => p.attributes.Name)).toEqual(['port_ut1', 'port_it1']);
+	});
+
+	it('models a probe as a perfectly conducting pin above a one-cell port, and a line feed without one', () => {
+		const probe = parseXml(serializeFieldModel(fixtureModel('rectangular-probe')));
+		const pin = one(one(probe, 'Metal'), 'Cylinder');
+		expect(Number(pin.attributes.Radius)).toBeCloseTo(0.65, 9); // solid pin: the 1.3 mm finished hole
+		const barrel = one(one(parseXml(serializeFieldModel(fixtureModel('circular-probe'))), 'Metal'), 'Cylinder');
+		expect(Number(barrel.attributes.Radius)).toBeCloseTo(0.65 + 0.025, 9); // plated barrel: its outer wall
+		expect(all(parseXml(serializeFieldModel(fixtureModel('rectangular-inset'))), 'Metal')).toHaveLength(0);
+	});
+
+	it('adds near-field dump boxes on six faces only when asked', () => {
+		const base = fixtureModel('rectangular-probe');
+		expect(serializeFieldModel(base)).not.toContain('DumpBox');
+		const box = { fromMm: [-10, -10, -5] as const, toMm: [80, 80, 20] as const };
+		const doc = parseXml(serializeFieldModel({ ...base, nearFieldBox: box }));
+		const dumps = all(doc, 'DumpBox');
+		expect(dumps.map((d) => d.attributes.DumpType)).toEqual(['0', '1']);
+		for (const d of dumps) expect(all(d, 'Box')).toHaveLength(6);
+	});
+
+	it('formats numbers with 12 significant digits and never writes -0 or non-finite values', () => {
+		expect(formatNumber(-0)).toBe('0');
+		expect(formatNumber(1 / 3)).toBe('0.333333333333');
+		expect(formatNumber(2.45e9)).toBe('2450000000');
+		expect(() => formatNumber(Number.NaN)).toThrow(RangeError);
+	});
+});
