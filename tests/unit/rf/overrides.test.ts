@@ -20,7 +20,7 @@ describe('dimension overrides', () => {
 		expect(tuned.formulaValues!.lengthMm).toBe((plain.patch as { lengthMm: number }).lengthMm);
 		expect(tuned.formulaValues!.insetDepthMm).toBeGreaterThan(6);
 		// L + 2ΔL with ΔL unchanged (Hammerstad's ΔL depends on W and h only; Balanis, Antenna Theory 4th ed., eq. 14-2; from memory)
-		expect(tuned.effectiveLengthMm - 28.5).toBeCloseTo(2 * plain.fringeExtensionMm, 9);
+		expect(tuned.effectiveLengthMm! - 28.5).toBeCloseTo(2 * plain.fringeExtensionMm!, 9);
 		// the artwork draws the overridden patch
 		const dims = buildArtwork(tuned).dimensions;
 		expect(dims.find((d) => d.id === 'patch-length')!.valueMm).toBeCloseTo(28.5, 9);
