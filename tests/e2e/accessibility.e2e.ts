@@ -57,12 +57,14 @@ function signedInPaths(): string[] {
 }
 
 test('signed out: the landing, sign-in, sign-up, API reference and an error page have no serious or critical findings', async ({ page }) => {
+	// axe-core reads every node's colours: slow on a busy machine
+	test.setTimeout(180_000);
 	expect(await auditPaths(page, ['/', '/signin', '/signup', '/api/docs', '/no-such-page'])).toEqual([]);
 });
 
 for (const role of ['owner', 'editor', 'viewer'] as const) {
 	test(`as ${role}: every page has no serious or critical findings`, async ({ page }) => {
-		test.setTimeout(180_000);
+		test.setTimeout(300_000);
 		await signIn(page, seeded.people[role].email, seeded.people[role].password);
 		expect(await auditPaths(page, signedInPaths())).toEqual([]);
 	});
