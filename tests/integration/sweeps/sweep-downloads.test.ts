@@ -61,7 +61,7 @@ async function download(via: 'api' | 'ui' = 'api') {
 }
 
 const sha256 = (bytes: Uint8Array) => createHash('sha256').update(bytes).digest('hex');
-const recordsOfPlan = () => db.selectFrom('export_record').selectAll().where('revision_id', '=', target.revisionId).where('kind', '=', 'sweep').execute();
+const recordsOfPlan = () => db.selectFrom('export_record').selectAll().where('revision_id', '=', target.revisionId).where('kind', '=', 'sweep-plan').execute();
 
 describe('a 10 000-point sweep plan', () => {
 	it('is built once for four concurrent downloads, which get identical bytes and one record each', async () => {

@@ -12,6 +12,8 @@ const who: Record<Action, string> = {
 	'sweep.write': 'Only editors and owners can save sweep plans.',
 	'measurement.upload': 'Only editors and owners can upload measurements.',
 	'measurement.delete': 'Only editors and owners can delete measurements.',
+	'field-check.start': 'Only editors and owners can start a field check or a Homing study.',
+	'field-check.cancel': 'Only editors and owners can cancel a field check.',
 	'export.download': 'Only members of this team can download its files.',
 	'export.waive': 'Only editors and owners can record a waiver for design-rule findings.',
 	'token.manage-own': 'Only members of this team can make API tokens for it.'
