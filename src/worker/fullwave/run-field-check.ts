@@ -1,6 +1,5 @@
 // One Field check: design input → model → openEMS subprocess → post-processor → FieldCheckResult.
 import { spawn } from 'node:child_process';
-import { existsSync } from 'node:fs';
 import { mkdtemp, mkdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -22,9 +21,6 @@ import {
 } from '../../lib/simulation';
 import { BudgetExceededError, EngineFailedError, EngineMissingError, FieldCheckAbortedError } from './errors';
 import { ENGINE_INSTALL_HINT, engineBinary, findEngine } from './find-engine';
-
-/** util-linux's setpriv, which starts the engine with a parent-death signal. */
-const SETPRIV = '/usr/bin/setpriv';
 
 export interface FieldCheckContext {
 	/** Stops the run: the engine's process group is killed and FieldCheckAbortedError thrown. */
@@ -82,11 +78,7 @@ async function runEngine(
 	let energyDb = 0;
 	let timesteps = 0;
 	let best = 0;
-	// Under util-linux's setpriv (Linux) the engine gets SIGKILL when its worker dies, even by SIGKILL, so no
-	// orphaned engine keeps a core busy after a lost worker; its own process group still lets a cancel stop it.
-	const engineArgs = ['model.xml', `--numThreads=${threadCount(context)}`];
-	const [command, args] = existsSync(SETPRIV) ? [SETPRIV, ['--pdeathsig', 'KILL', '--', engineBinary(), ...engineArgs]] : [engineBinary(), engineArgs];
-	const child = spawn(command, args, { cwd: dir, detached: true, stdio: ['ignore', 'pipe', 'pipe'] });
+	const child = spawn(engineBinary(), ['model.xml', `--numThreads=${threadCount(context)}`], { cwd: dir, detached: true, stdio: ['ignore', 'pipe', 'pipe'] });
 	const killGroup = () => {
 		try {
 			if (child.pid) process.kill(-child.pid, 'SIGKILL');
