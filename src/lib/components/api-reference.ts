@@ -195,7 +195,7 @@ function rowsOf(schema: Json, prefix: string, depth: number, maxDepth: number): 
 			meaning: prop.description ?? GLOSSARY[name] ?? humanise(name),
 			shape
 		});
-		if (inner?.properties && !shape && depth < maxDepth) rows.push(...rowsOf(inner, `${field}${prop.type === 'array' ? '[]' : ''}.`, depth + 1, maxDepth));
+		if (inner?.properties && !shape && depth < maxDepth) for (const row of rowsOf(inner, `${field}${prop.type === 'array' ? '[]' : ''}.`, depth + 1, maxDepth)) rows.push(row);
 	}
 	return rows;
 }
