@@ -4,6 +4,7 @@ import type { RequestEvent } from '@sveltejs/kit';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb, getDb } from '../../../src/lib/server/db';
 import { findDesign, findRevision } from '../../../src/lib/server/designs';
+import { cancelOpenFieldChecks } from '../jobs/helpers/open-checks';
 import { startFieldCheck } from '../../../src/lib/server/field-checks';
 import { stopQueue } from '../../../src/lib/server/jobs';
 import { fieldCheckStatusSchema } from '../../../src/lib/schemas/api';
@@ -28,6 +29,7 @@ beforeAll(async () => {
 	readableId = await queueCheck();
 });
 afterAll(async () => {
+	await cancelOpenFieldChecks(getDb(), ws.teamId);
 	await stopQueue();
 	await closeDb();
 });

@@ -10,6 +10,7 @@ import { cancelFieldCheck, findFieldCheck, reviseFromHoming, startFieldCheck } f
 import { stopQueue } from '../../../src/lib/server/jobs';
 import { startFieldCheckWorker, type RunningWorker } from '../../../src/worker/field-check-worker';
 import { createWorkspace, type Workspace } from '../exports/workspace-fixture';
+import { cancelOpenFieldChecks } from './helpers/open-checks';
 import { createScriptedEngine } from './helpers/scripted-engine';
 import { waitFor } from './helpers/wait-for';
 
@@ -32,9 +33,11 @@ async function bossJob(jobId: string) {
 }
 
 beforeAll(async () => {
+	await cancelOpenFieldChecks(getDb());
 	ws = await createWorkspace('queue');
 });
 afterAll(async () => {
+	await cancelOpenFieldChecks(getDb(), ws.teamId);
 	await stopQueue();
 	await closeDb();
 });

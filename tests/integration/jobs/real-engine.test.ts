@@ -12,6 +12,7 @@ import { startFieldCheckWorker, type RunningWorker } from '../../../src/worker/f
 import { runFieldCheck, runHoming } from '../../../src/worker/fullwave';
 import { createWorkspace, type Workspace } from '../exports/workspace-fixture';
 import { engineChildrenOf, isAlive } from './helpers/engine-processes';
+import { cancelOpenFieldChecks } from './helpers/open-checks';
 import { waitFor } from './helpers/wait-for';
 
 const databaseUrl = process.env.DATABASE_URL!;
@@ -34,6 +35,7 @@ async function start() {
 const row = (id: string) => getDb().selectFrom('field_check').selectAll().where('id', '=', id).executeTakeFirstOrThrow();
 
 beforeAll(async () => {
+	await cancelOpenFieldChecks(getDb());
 	ws = await createWorkspace('engine');
 	({ design: { id: designId } } = await createDesign(getDb(), { teamId: ws.teamId, userId: ws.people.owner.id, raw: lowQInput }));
 });
@@ -46,6 +48,7 @@ afterAll(async () => {
 		}
 	}
 	await worker?.stop();
+	await cancelOpenFieldChecks(getDb(), ws.teamId);
 	await stopQueue();
 	await closeDb();
 });
