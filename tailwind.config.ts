@@ -1,5 +1,8 @@
 // Fringefield design tokens: an original palette and a type scale.
 // Colours are our own picks; layer colours in the preview come from here too.
+// Small text (WCAG 2.2 SC 1.4.3, 4.5:1): ground-600 on white or ground-50, ground-200 or copper-200 on ground-800,
+// white on copper-600/800; ground-400 is for borders and graphics only (3.1:1 on white, 4.49:1 on ground-800).
+// tests/unit/source/contrast-tokens.test.ts checks these pairs.
 import type { Config } from 'tailwindcss';
 
 export default {

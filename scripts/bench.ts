@@ -8,7 +8,8 @@ import { coreRows, type BenchRow } from './bench/core.ts';
 import { httpRows } from './bench/http.ts';
 import { runFuzzBench } from './bench/fuzz.ts';
 import { runFullwaveBench } from './bench/fullwave.ts';
-import { existingReliabilitySection } from './bench/reliability-section.ts';
+import { existingReliabilitySection, existingTopSection } from './bench/reliability-section.ts';
+import { runJobsBench } from './bench/jobs.ts';
 import { runSoakBench } from './bench/soak.ts';
 
 function fmt(v: number): string {
@@ -53,6 +54,8 @@ runMain(async () => {
 	// --soak / --fuzz run only the reliability checks, which write their own section of BENCHMARKS.md.
 	if (process.argv.includes('--soak')) return runSoakBench();
 	if (process.argv.includes('--fuzz')) return runFuzzBench();
+	// --jobs: field checks per minute through the queue with 1 and 2 workers (its own section).
+	if (process.argv.includes('--jobs')) return runJobsBench();
 	// --fullwave runs only the Field check timings on openEMS (minutes per case) and prints them as Markdown
 	if (process.argv.includes('--fullwave')) return runFullwaveBench(process.argv);
 	const started = Date.now();
@@ -67,6 +70,7 @@ runMain(async () => {
 	console.log(`\n${text}\n`);
 	const header = `# Benchmarks\n\nMeasured by \`npm run bench\` on ${new Date().toISOString().slice(0, 10)}, Node.js ${process.version}, ${cpus().length} cores (${cpus()[0]?.model ?? 'unknown CPU'}). Medians (p50) from tinybench after warm-up; the floor of each row is measured in the same run. Whole run: ${((Date.now() - started) / 1000).toFixed(0)} s.\n\n`;
 	const reliability = existingReliabilitySection();
-	writeFileSync(join(rootDir, 'BENCHMARKS.md'), `${header}${text}\n\n${findings}${reliability ? `\n${reliability}` : ''}`);
+	const jobQueue = existingTopSection('## Job queue');
+	writeFileSync(join(rootDir, 'BENCHMARKS.md'), `${header}${text}\n\n${findings}${jobQueue ? `\n${jobQueue}` : ''}${reliability ? `\n${reliability}` : ''}`);
 	console.log('written to BENCHMARKS.md');
 });

@@ -2,7 +2,7 @@
 // - no DATABASE_URL: the demo — the private cluster, migrations, demo data, the mail fake and its mailbox page;
 // - DATABASE_URL set: the production path — migrations only (no demo data, no mail fake), and the server
 //   refuses to start without real SMTP settings and an HTTPS ORIGIN unless FRINGEFIELD_LOCAL_TRIAL=1.
-// Both build (unless FRINGEFIELD_SKIP_BUILD=1) and serve `node build`.
+// Both build (unless FRINGEFIELD_SKIP_BUILD=1), serve `node build` and run one job worker (src/worker/main.ts).
 import { spawn, spawnSync } from 'node:child_process';
 import { decideAppMode, SettingError } from '../src/lib/server/app-mode.ts';
 import { ConfigError, loadConfig, rootDir, runMain, type LocalConfig } from './lib/config.ts';
@@ -73,9 +73,26 @@ runMain(async () => {
 		env: { ...process.env, ...plan.env, PORT: String(config.appPort), BODY_SIZE_LIMIT: process.env.BODY_SIZE_LIMIT || '6M' }
 	});
 	recordPid(config, 'app', server.pid!);
+	// One job worker beside the app (field checks and Homing); more on other machines scale out (README "Scaling out").
+	const worker = spawn(process.execPath, ['--import', 'tsx', 'src/worker/main.ts'], {
+		cwd: rootDir,
+		stdio: 'inherit',
+		detached: true,
+		env: { ...process.env, ...plan.env }
+	});
+	recordPid(config, 'worker', worker.pid!);
 	console.log(`\n${plan.banner}  stop with Ctrl-C or \`npm run stop\`\n`);
-	for (const sig of ['SIGINT', 'SIGTERM'] as const) process.on(sig, () => server.kill('SIGTERM'));
+	for (const sig of ['SIGINT', 'SIGTERM'] as const)
+		process.on(sig, () => {
+			server.kill('SIGTERM');
+			worker.kill('SIGTERM');
+		});
 	const code = await new Promise<number | null>((done) => server.on('exit', (c) => done(c)));
 	forgetPid(config, 'app');
+	if (worker.exitCode === null && worker.signalCode === null) {
+		worker.kill('SIGTERM');
+		await new Promise<void>((done) => worker.on('exit', () => done()));
+	}
+	forgetPid(config, 'worker');
 	if (code) process.exit(code);
 });

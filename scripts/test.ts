@@ -110,6 +110,8 @@ runMain(async () => {
 		if (!only || only.e2e.length > 0) {
 			console.log('\n── Playwright end-to-end in Chromium ──');
 			const chromium = ensureChromium();
+			// the field-check journey's worker runs the real engine
+			ensureOpenEms();
 			if (built !== 0) {
 				tallies.push({ suite: 'e2e', passed: 0, failed: 1 });
 			} else {

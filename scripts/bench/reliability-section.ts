@@ -31,3 +31,28 @@ export function existingReliabilitySection(): string {
 	const at = text.indexOf(`\n${HEADING}`);
 	return at >= 0 ? text.slice(at + 1) : '';
 }
+
+/** Replaces (or appends) a top-level "## …" section of BENCHMARKS.md, leaving every other section as it is. */
+export function writeTopSection(heading: string, body: string): void {
+	const file = join(rootDir, 'BENCHMARKS.md');
+	const text = existsSync(file) ? readFileSync(file, 'utf8') : '# Benchmarks\n';
+	const parts = text.split(/\n(?=## )/);
+	const block = `${heading}\n\n${body.trim()}\n`;
+	const i = parts.findIndex((p) => p.startsWith(`${heading}\n`));
+	// A new section goes before the Reliability section, which the main run keeps as the file's tail.
+	const reliability = parts.findIndex((p) => p.startsWith(`${HEADING}\n`));
+	if (i >= 0) parts[i] = block;
+	else if (reliability >= 0) parts.splice(reliability, 0, block);
+	else parts.push(block);
+	writeFileSync(file, parts.map((p) => p.trimEnd() + '\n').join('\n'));
+}
+
+/** An existing top-level section (kept by the main bench run, which rewrites the table), or ''. */
+export function existingTopSection(heading: string): string {
+	const file = join(rootDir, 'BENCHMARKS.md');
+	if (!existsSync(file)) return '';
+	const part = readFileSync(file, 'utf8')
+		.split(/\n(?=## )/)
+		.find((p) => p.startsWith(`${heading}\n`));
+	return part ? part.trimEnd() + '\n' : '';
+}

@@ -48,7 +48,7 @@ test('a personal API token fetches a sweep definition that validates against the
 
 	await page.goto('/api/docs');
 	await expect(page.getByRole('heading', { name: 'Fringefield API' })).toBeVisible();
-	await expect(page.locator('section[id^="get-"]').first()).toBeVisible();
+	await expect(page.locator('article[id^="get-"]').first()).toBeVisible();
 	await page.screenshot({ path: '/tmp/ff-api-docs.png', fullPage: false });
 	await page.screenshot({ path: '/tmp/ff-api-docs-full.png', fullPage: true });
 	await api.dispose();

@@ -39,7 +39,7 @@ test('an invited person signs up from the e-mailed link and lands in the team as
 		headers: { origin: new URL(inviteePage.url()).origin, 'x-sveltekit-action': 'true' }
 	});
 	expect(refused.status()).toBe(403);
-	expect(JSON.parse(await refused.text())).toMatchObject({ type: 'error', error: { message: expect.stringContaining('may not do this (team.manage)') } });
+	expect(JSON.parse(await refused.text())).toMatchObject({ type: 'error', error: { message: expect.stringContaining('Only owners can rename the team, invite people or change their roles.') } });
 
 	// The link was single-use: following it again says so.
 	await inviteePage.goto(new URL(mail.links[0]).pathname);

@@ -1,5 +1,5 @@
 // Playwright in Debian's Chromium against the production build (`node build`) on 127.0.0.1.
-// scripts/test.ts provides DATABASE_URL (the test database) and the mail fake's settings.
+// scripts/test.ts provides DATABASE_URL (the test database) and the mail fake's settings; a job worker runs beside the app.
 import { defineConfig } from '@playwright/test';
 
 const port = Number(process.env.E2E_PORT || 3100);
@@ -32,20 +32,33 @@ export default defineConfig({
 			]
 		}
 	},
-	webServer: {
-		command: 'node build',
-		cwd: '../..',
-		url: `${baseURL}/healthz`,
-		reuseExistingServer: false,
-		timeout: 60_000,
-		env: {
-			...(process.env as Record<string, string>),
-			HOST: '127.0.0.1',
-			PORT: String(port),
-			ORIGIN: baseURL,
-			BODY_SIZE_LIMIT: '6M',
-			// the demo mode (src/lib/server/app-mode.ts): the journeys read caught mail at /dev/mailbox.json
-			FRINGEFIELD_MODE: 'demo'
+	webServer: [
+		{
+			command: 'node build',
+			cwd: '../..',
+			url: `${baseURL}/healthz`,
+			reuseExistingServer: false,
+			timeout: 60_000,
+			env: {
+				...(process.env as Record<string, string>),
+				HOST: '127.0.0.1',
+				PORT: String(port),
+				ORIGIN: baseURL,
+				BODY_SIZE_LIMIT: '6M',
+				// the demo mode (src/lib/server/app-mode.ts): the journeys read caught mail at /dev/mailbox.json
+				FRINGEFIELD_MODE: 'demo'
+			}
+		},
+		// One job worker (field checks with openEMS), as `npm start` runs beside the app.
+		{
+			command: 'node --import tsx src/worker/main.ts',
+			cwd: '../..',
+			wait: { stdout: /taking .* jobs/ },
+			stdout: 'pipe',
+			reuseExistingServer: false,
+			timeout: 60_000,
+			gracefulShutdown: { signal: 'SIGTERM', timeout: 5000 },
+			env: { ...(process.env as Record<string, string>) }
 		}
-	}
+	]
 });

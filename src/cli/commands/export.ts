@@ -6,7 +6,7 @@ import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { bundle, gate, holdsFabFiles, prepare, readBack, writeFiles } from '../../lib/design';
 import { createExportMeta } from '../../lib/formats/export-meta';
-import { formatIds } from '../../lib/formats/format-ids';
+import { bundleFormatIds, formatIds } from '../../lib/formats/format-ids';
 import { hashFiles, type ExportFile } from '../../lib/formats/manifest';
 import { parseFormatList } from '../../lib/formats/parse-format-list';
 import { GeometryError } from '../../lib/geometry';
@@ -29,7 +29,7 @@ are acceptable; the reason and every waived violation are then printed in the fa
 Gerber and drill file is also read back (@tracespace/parser) and compared with the artwork.
 
   --out PATH        a folder (created if missing) or a .zip file
-  --formats LIST    comma-separated, from: ${formatIds.join(', ')} (default: all)
+  --formats LIST    comma-separated, from: ${formatIds.join(', ')} (default: ${bundleFormatIds.join(',')}; step only when named)
   --revision LABEL  revision label used in file names and headers (default A)
   --date DATE       revision date written into the files (default 2000-01-01; no clock is read)
   --profile FILE    a fab profile JSON (see \`check --help\`); default: the built-in
@@ -72,7 +72,7 @@ function parseArgs(argv: string[]): ExportArgs {
 	}
 	if (file === undefined) throw new UsageError('a design file is required: npm run cli -- export design.json --out DIR|FILE.zip');
 	if (!opts.out) throw new UsageError('--out DIR|FILE.zip is required');
-	return { file, out: opts.out, formats: opts.formats ?? formatIds.join(','), revision: opts.revision ?? 'A', date: opts.date ?? '2000-01-01', profile: opts.profile ?? null, waive: opts.waive ?? null };
+	return { file, out: opts.out, formats: opts.formats ?? bundleFormatIds.join(','), revision: opts.revision ?? 'A', date: opts.date ?? '2000-01-01', profile: opts.profile ?? null, waive: opts.waive ?? null };
 }
 
 export function readJson(path: string, what: string): unknown {

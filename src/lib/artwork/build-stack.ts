@@ -1,5 +1,6 @@
 // The stack a solver extrudes: copper, dielectric, copper, with z measured up from the bottom copper's lower face.
 import type { SizedDesign } from '../rf/sized-design';
+import { laminateClassFor } from '../schemas';
 import type { StackLayer } from './types';
 
 export function buildStack(sized: SizedDesign): StackLayer[] {
@@ -7,7 +8,7 @@ export function buildStack(sized: SizedDesign): StackLayer[] {
 	const { heightMm, relativePermittivity, lossTangent, copperConductivitySPerM } = sized.input.substrate;
 	return [
 		{ kind: 'copper', id: 'copper-top', layerId: 'copper-top', zMm: t + heightMm, thicknessMm: t, conductivitySPerM: copperConductivitySPerM },
-		{ kind: 'dielectric', id: 'substrate', zMm: t, thicknessMm: heightMm, relativePermittivity, lossTangent },
+		{ kind: 'dielectric', id: 'substrate', zMm: t, thicknessMm: heightMm, relativePermittivity, lossTangent: lossTangent ?? laminateClassFor(relativePermittivity).typicalLossTangent },
 		{ kind: 'copper', id: 'copper-bottom', layerId: 'copper-bottom', zMm: 0, thicknessMm: t, conductivitySPerM: copperConductivitySPerM }
 	];
 }

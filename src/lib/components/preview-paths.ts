@@ -112,6 +112,11 @@ export function previewDimensions(dims: readonly ArtworkDimension[], board: { wi
 export interface PreviewLayerStyle {
 	fill: string;
 	opacity: number;
+	/**
+	 * How the layer is told apart without its hue (WCAG 2.2 SC 1.4.1 use of colour): ground planes are hatched,
+	 * every other layer is solid.
+	 */
+	pattern: 'solid' | 'hatched';
 	/** Legend and toggle text. */
 	label: string;
 	/** Drawing order: lower first (masks and profile, then ground planes, then the other coppers from the bottom up). */
@@ -143,14 +148,14 @@ export function previewLayerStyles(layers: readonly ArtworkLayer[]): Record<stri
 	const out: Record<string, PreviewLayerStyle> = {};
 	for (const layer of layers) {
 		const fn = layer.function;
-		if (fn.kind === 'profile') out[layer.id] = { fill: '#242d3b', opacity: 1, label: 'Profile', order: 2 };
-		else if (fn.kind === 'solder-mask') out[layer.id] = { fill: '#2f8f5b', opacity: fn.side === 'top' ? 0.35 : 0.25, label: fn.side === 'top' ? 'Top mask openings' : 'Bottom mask openings', order: fn.side === 'top' ? 1 : 0 };
+		if (fn.kind === 'profile') out[layer.id] = { fill: '#242d3b', opacity: 1, pattern: 'solid', label: 'Profile', order: 2 };
+		else if (fn.kind === 'solder-mask') out[layer.id] = { fill: '#2f8f5b', opacity: fn.side === 'top' ? 0.35 : 0.25, pattern: 'solid', label: fn.side === 'top' ? 'Top mask openings' : 'Bottom mask openings', order: fn.side === 'top' ? 1 : 0 };
 		else {
 			const what = copperContents(layer);
 			const ground = what === 'ground';
 			const fill = ground ? GROUND : fn.side === 'top' ? TOP_COPPER : fn.side === 'inner' ? INNER_COPPER : BOTTOM_COPPER;
 			const label = coppers.length === 2 ? (ground ? 'Ground' : fn.side === 'top' ? 'Top copper' : 'Bottom copper') : `L${fn.copperIndex} ${what}`;
-			out[layer.id] = { fill, opacity: ground ? 0.55 : fn.side === 'top' ? (coppers.length > 2 ? 0.8 : 0.95) : 0.85, label, order: ground ? 3 : 10 + (coppers.length - fn.copperIndex) };
+			out[layer.id] = { fill, pattern: ground ? 'hatched' : 'solid', opacity: ground ? 0.55 : fn.side === 'top' ? (coppers.length > 2 ? 0.8 : 0.95) : 0.85, label, order: ground ? 3 : 10 + (coppers.length - fn.copperIndex) };
 		}
 	}
 	return out;
@@ -164,4 +169,51 @@ export function previewCounts(layers: readonly ArtworkLayer[]): { patches: numbe
 		parasitics: all.filter((s) => s.role === 'parasitic-patch').length,
 		networkPieces: all.filter((s) => s.role === 'feed-network' || s.role === 'network-transformer').length
 	};
+}
+
+/** The preview's visible window, in millimetres of the screen frame. */
+export interface PreviewBox {
+	x: number;
+	y: number;
+	w: number;
+	h: number;
+}
+
+/** A tenth of the window per arrow press; ×1.4 per zoom step (the buttons use the same factor). */
+export const KEY_PAN_FRACTION = 0.1;
+export const KEY_ZOOM_FACTOR = 1.4;
+
+/**
+ * What a key does to the preview (WCAG 2.2 SC 2.1.1 keyboard): arrows pan, + and − zoom about the centre,
+ * 0 returns to the fitted view. Returns 'fit' to reset, the new window, or null for a key the preview ignores.
+ */
+export function previewKeyStep(key: string, box: PreviewBox): PreviewBox | 'fit' | null {
+	const dx = box.w * KEY_PAN_FRACTION;
+	const dy = box.h * KEY_PAN_FRACTION;
+	const zoomBy = (factor: number): PreviewBox => {
+		const w = box.w * factor;
+		const h = box.h * factor;
+		return { x: box.x + (box.w - w) / 2, y: box.y + (box.h - h) / 2, w, h };
+	};
+	switch (key) {
+		case 'ArrowLeft':
+			return { ...box, x: box.x - dx };
+		case 'ArrowRight':
+			return { ...box, x: box.x + dx };
+		case 'ArrowUp':
+			return { ...box, y: box.y - dy };
+		case 'ArrowDown':
+			return { ...box, y: box.y + dy };
+		case '+':
+		case '=':
+			return zoomBy(1 / KEY_ZOOM_FACTOR);
+		case '-':
+		case '_':
+		case '−':
+			return zoomBy(KEY_ZOOM_FACTOR);
+		case '0':
+			return 'fit';
+		default:
+			return null;
+	}
 }

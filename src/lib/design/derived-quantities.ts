@@ -4,7 +4,7 @@ import { ghzFromHz } from '../units';
 
 export interface Quantity {
 	key: string;
-	group: 'Patch' | 'Feed' | 'Parasitic' | 'Array' | 'Board' | 'Model' | 'Estimates';
+	group: 'Patch' | 'Feed' | 'Parasitic' | 'Array' | 'Board' | 'Model' | 'Textbook model' | 'Estimates';
 	label: string;
 	/** In the display unit. */
 	value: number | string;
@@ -103,18 +103,37 @@ export function derivedQuantities(s: SizedDesign): Quantity[] {
 
 	add('Model', 'frequencyGHz', 'Frequency f₀', ghzFromHz(s.frequencyHz), 'GHz', 6);
 	add('Model', 'freeSpaceWavelengthMm', 'Free-space wavelength λ₀', s.freeSpaceWavelengthMm, 'mm');
-	add('Model', 'effectivePermittivity', 'Effective permittivity εeff', s.effectivePermittivity, '', 4);
-	if (s.fringeExtensionMm > 0) add('Model', 'fringeExtensionMm', 'Fringe extension ΔL', s.fringeExtensionMm, 'mm', 4);
-	add('Model', 'effectiveLengthMm', 'Effective length', s.effectiveLengthMm, 'mm');
-	add('Model', 'slotConductanceMs', 'Slot conductance G₁', s.slotConductanceS * 1000, 'mS', 4);
-	add('Model', 'mutualConductanceMs', 'Mutual conductance G₁₂', s.mutualConductanceS * 1000, 'mS', 4);
-	add('Model', 'edgeResistanceOhm', 'Edge resistance', s.edgeResistanceOhm, 'Ω', 4);
+	if (p.kind === 'circular') {
+		// the TM11 cavity model: εr itself, the effective radius (above) and the rim's radiation conductance
+		add('Model', 'effectivePermittivity', 'Cavity permittivity (εr)', s.effectivePermittivity, '', 4);
+		if (s.radiationConductanceS !== undefined) add('Model', 'radiationConductanceMs', 'Radiation conductance G_rad', s.radiationConductanceS * 1000, 'mS', 4);
+	} else {
+		add('Model', 'effectivePermittivity', 'Effective permittivity εeff', s.effectivePermittivity, '', 4);
+		if (s.fringeExtensionMm !== undefined) add('Model', 'fringeExtensionMm', 'Fringe extension ΔL', s.fringeExtensionMm, 'mm', 4);
+		if (s.effectiveLengthMm !== undefined) add('Model', 'effectiveLengthMm', 'Effective length L + 2ΔL', s.effectiveLengthMm, 'mm');
+		if (s.slotConductanceS !== undefined) add('Model', 'slotConductanceMs', 'Slot conductance G₁', s.slotConductanceS * 1000, 'mS', 4);
+		if (s.mutualConductanceS !== undefined) add('Model', 'mutualConductanceMs', 'Mutual conductance G₁₂', s.mutualConductanceS * 1000, 'mS', 4);
+	}
+	add('Model', 'edgeResistanceOhm', p.kind === 'circular' ? 'Rim resistance (with losses)' : 'Edge resistance (with losses)', s.edgeResistanceOhm, 'Ω', 4);
+	// revisions stored before the corrected first pass carry no radiation-only value, band or textbook row
+	if (s.radiationEdgeResistanceOhm !== undefined) add('Model', 'radiationEdgeResistanceOhm', p.kind === 'circular' ? 'Rim resistance (radiation only)' : 'Edge resistance (radiation only)', s.radiationEdgeResistanceOhm, 'Ω', 4);
+	const a = s.resonanceAccuracy as SizedDesign['resonanceAccuracy'] | undefined;
+	if (a) add('Model', 'resonanceAccuracy', 'Expected resonance error', `typically within ±${a.typicalErrorPercent} % for h/λ₀ ≤ ${a.maximumHeightRatio}, εr ${a.permittivityRange[0]}–${a.permittivityRange[1]}`, '');
+
+	const t = s.textbook as SizedDesign['textbook'] | undefined;
+	if (t) {
+		add('Textbook model', 'textbookResonantDimensionMm', p.kind === 'circular' ? 'Radius a' : p.kind === 'rectangular' ? 'Length L' : 'Side of the square', t.resonantDimensionMm, 'mm');
+		add('Textbook model', 'textbookResonanceGHz', 'Its resonance of the first-pass patch', ghzFromHz(t.resonanceOfFirstPassHz), 'GHz', 5);
+		if (t.insetDepthMm !== undefined) add('Textbook model', 'textbookInsetDepthMm', 'Inset depth y₀ (cos²)', t.insetDepthMm, 'mm');
+		if (t.probeOffsetMm !== undefined) add('Textbook model', 'textbookProbeOffsetMm', 'Probe from the centre', t.probeOffsetMm, 'mm');
+	}
 
 	const e = s.estimates;
 	add('Estimates', 'bandwidthPercent', 'Bandwidth (VSWR ≤ 2)', e.bandwidthFraction * 100, '%', 3);
 	add('Estimates', 'qualityFactor', 'Quality factor Q', e.qualityFactor, '', 3);
 	add('Estimates', 'directivityDbi', 'Directivity', e.directivityDbi, 'dBi', 3);
 	add('Estimates', 'radiationEfficiencyPercent', 'Radiation efficiency', e.radiationEfficiency * 100, '%', 3);
+	if (e.surfaceWaveEfficiency !== undefined) add('Estimates', 'surfaceWaveEfficiencyPercent', 'Space-wave share (surface waves)', e.surfaceWaveEfficiency * 100, '%', 3);
 	add('Estimates', 'gainDbi', s.array ? 'Element gain' : 'Gain', e.gainDbi, 'dBi', 3);
 	if (s.array) {
 		const af = s.array.factor;

@@ -30,7 +30,8 @@ export function sizeDocument(raw: unknown): SizingOutcome {
 	if (!parsed.success) return { ok: false, issues: fromZodError(parsed.error, raw).issues };
 	try {
 		const { sized, artwork } = prepare(parsed.data);
-		return { ok: true, input: parsed.data, sized, artwork };
+		// sized.input is the complete document, with an assumed tanδ written in (and named by a warning)
+		return { ok: true, input: sized.input, sized, artwork };
 	} catch (err) {
 		if (err instanceof InputError) return { ok: false, issues: err.issues };
 		if (err instanceof GeometryError) {

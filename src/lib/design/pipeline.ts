@@ -7,8 +7,8 @@ import { buildBundle } from '../formats/bundle';
 import { exportFileName } from '../formats/bundle/file-names';
 import type { ExportMeta } from '../formats/export-meta';
 import type { FabNotesWaiver } from '../formats/fab-notes';
-import { formatEntry, formatRegistry, type PreparedDesign } from '../formats/registry';
-import type { FormatId } from '../formats/format-ids';
+import { formatEntry, type PreparedDesign } from '../formats/registry';
+import { writeOrder, type FormatId } from '../formats/format-ids';
 import { buildManifest, hashFiles, serializeManifest, type ExportFile, type HashedFile } from '../formats/manifest';
 import { checkReadBack, isFabFileName, type ReadBackResult } from '../formats/readback';
 import { size, type SizedDesign } from '../rf';
@@ -51,13 +51,13 @@ export interface WriteOptions {
 }
 
 /**
- * The chosen formats' files in the registry's order (formats that do not apply to the artwork write
+ * The chosen formats' files in the write order (the fab notes last; formats that do not apply to the artwork write
  * nothing), each hashed once, with the manifest last.
  */
 export async function writeFiles(prepared: PreparedDesign, formats: readonly FormatId[], meta: ExportMeta, options: WriteOptions = {}): Promise<HashedFile[]> {
 	const manifestName = exportFileName(meta, 'manifest', 'json');
 	const files: ExportFile[] = [];
-	for (const format of formatRegistry) {
+	for (const format of writeOrder.map(formatEntry)) {
 		if (!formats.includes(format.id) || !format.appliesTo(prepared.artwork)) continue;
 		const context = { earlierFileNames: files.map((f) => f.name), manifestName, ...(options.waiver ? { waiver: options.waiver } : {}) };
 		files.push(...format.write(prepared, meta, context));

@@ -11,6 +11,7 @@ import type { ExportMeta } from './export-meta';
 import { buildFabNotes, type FabNotesWaiver } from './fab-notes';
 import { formatIds, type FormatId } from './format-ids';
 import { toGerber } from './gerber';
+import { toStep } from './step';
 import type { ExportFile } from './manifest';
 import { toSvg } from './svg';
 import { buildSweepDocument, serializeSweep } from './sweep';
@@ -113,6 +114,19 @@ const entries: { readonly [K in FormatId]: FormatEntry & { readonly id: K } } = 
 			return files;
 		}
 	},
+	step: {
+		id: 'step',
+		title: '3-D board (STEP)',
+		detail: 'layers, coppers and holes as solids; not in the zip',
+		extension: 'step',
+		// ISO 10303-21 clear text: model/step is the IANA-registered type (from memory: registered for ISO/TC 184/SC 4, 2021; not re-checked)
+		contentType: 'model/step',
+		appliesTo: always,
+		write: ({ artwork }, meta) => {
+			const name = exportFileName(meta, 'board', 'step');
+			return [textFile(name, toStep(artwork, meta, name))];
+		}
+	},
 	notes: {
 		id: 'notes',
 		title: 'Fab notes',
@@ -129,7 +143,7 @@ const entries: { readonly [K in FormatId]: FormatEntry & { readonly id: K } } = 
 	}
 };
 
-/** Every format, in the order an export writes them. */
+/** Every format, in the order the lists name them (formats/format-ids.ts; an export writes in `writeOrder`). */
 export const formatRegistry: readonly FormatEntry[] = formatIds.map((id) => entries[id]);
 
 export function formatEntry(id: FormatId): FormatEntry {

@@ -35,6 +35,7 @@ export {
 	type MeasuredResponse,
 	type MeasuredResponseOptions
 } from './measured-response';
+export { parallelRlcImpedance, reflectionFromImpedance, cavityModelRlc, cavityModelResponse, type ParallelRlc, type ImpedanceSample } from './cavity-input-impedance';
 export { proposeRetune, type RetuneProposal, type RetuneOptions, type DimensionChange } from './retune';
 export { resolveLayerStack, combineDielectrics, type DielectricGroup, type ResolvedStack } from './layer-stack';
 export { apertureStart, SLOT_LENGTH_PATCH_SHARE, SLOT_WIDTH_LENGTH_SHARE, STUB_GUIDED_WAVELENGTH_SHARE, type ApertureStart } from './aperture-coupling';

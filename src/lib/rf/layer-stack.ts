@@ -1,5 +1,5 @@
 // The resolved stack of a document (top to bottom) and its dielectric groups: the layers between two coppers acting as one.
-import type { DesignInput } from '../schemas';
+import { laminateClassFor, type DesignInput } from '../schemas';
 import { mmFromUm } from '../units';
 import type { SizedStackEntry } from './sized-design';
 
@@ -25,7 +25,7 @@ export function resolveLayerStack(d: DesignInput): ResolvedStack {
 		? d.stack.map((l) =>
 				l.kind === 'copper' ? copper(l.thicknessUm) : { kind: 'dielectric', heightMm: l.heightMm, relativePermittivity: l.relativePermittivity, lossTangent: l.lossTangent, bonding: l.bonding }
 			)
-		: [copper(), { kind: 'dielectric', heightMm: s.heightMm, relativePermittivity: s.relativePermittivity, lossTangent: s.lossTangent, bonding: false }, copper()];
+		: [copper(), { kind: 'dielectric', heightMm: s.heightMm, relativePermittivity: s.relativePermittivity, lossTangent: s.lossTangent ?? laminateClassFor(s.relativePermittivity).typicalLossTangent, bonding: false }, copper()];
 	const groups: DielectricGroup[] = [];
 	let run: Extract<SizedStackEntry, { kind: 'dielectric' }>[] = [];
 	for (const e of entries) {

@@ -2,7 +2,7 @@
 import type { Handedness } from '../schemas';
 import { freeSpaceWavelengthMm } from '../units';
 import { requireInRange, requireObject, requirePositive } from './guard';
-import { maximumHeightMm, tooThickError } from './rectangular-patch';
+import { maximumHeightMm, tooThickError, type LineModelKind } from './rectangular-patch';
 import { lineModelOf } from './square-patch';
 
 export interface NearlySquareInput {
@@ -11,6 +11,8 @@ export interface NearlySquareInput {
 	heightMm: number;
 	qualityFactor: number;
 	handedness: Handedness;
+	/** Line model; default 'first-pass'. */
+	model?: LineModelKind;
 }
 
 export interface NearlySquareSize {
@@ -23,9 +25,9 @@ export interface NearlySquareSize {
 }
 
 /** Centre frequency √(fx·fy) of the two orthogonal modes of a W × L patch (transmission-line model each). */
-export function nearlySquareCentreHz(widthMm: number, lengthMm: number, heightMm: number, er: number): number {
-	const modeX = lineModelOf(lengthMm, widthMm, heightMm, er);
-	const modeY = lineModelOf(widthMm, lengthMm, heightMm, er);
+export function nearlySquareCentreHz(widthMm: number, lengthMm: number, heightMm: number, er: number, model: LineModelKind = 'first-pass'): number {
+	const modeX = lineModelOf(lengthMm, widthMm, heightMm, er, model);
+	const modeY = lineModelOf(widthMm, lengthMm, heightMm, er, model);
 	const c = freeSpaceWavelengthMm(1) / 2;
 	const fx = c / (modeX.effectiveLengthMm * Math.sqrt(modeX.effectivePermittivity));
 	const fy = c / (modeY.effectiveLengthMm * Math.sqrt(modeY.effectivePermittivity));
@@ -48,10 +50,11 @@ export function nearlySquarePatch(input: NearlySquareInput): NearlySquareSize {
 	const heightMm = requirePositive('heightMm', d.heightMm);
 	const q = requireInRange('qualityFactor', d.qualityFactor, 0.5, Number.MAX_VALUE);
 	const ratio = 1 + 1 / q;
-	const centre = (short: number) => nearlySquareCentreHz(short, short * ratio, heightMm, er);
+	const model: LineModelKind = input.model === 'textbook' ? 'textbook' : 'first-pass';
+	const centre = (short: number) => nearlySquareCentreHz(short, short * ratio, heightMm, er, model);
 	// The centre frequency falls as the patch grows; the smallest side still has the fringe extensions.
 	const smallestMm = 1e-9 * freeSpaceWavelengthMm(frequencyHz);
-	const tinyCentre = (h: number) => nearlySquareCentreHz(smallestMm, smallestMm * ratio, h, er) - frequencyHz;
+	const tinyCentre = (h: number) => nearlySquareCentreHz(smallestMm, smallestMm * ratio, h, er, model) - frequencyHz;
 	if (!(tinyCentre(heightMm) > 0)) throw tooThickError(heightMm, maximumHeightMm(tinyCentre, heightMm));
 	let lo = smallestMm;
 	let hi = freeSpaceWavelengthMm(frequencyHz);

@@ -3,10 +3,13 @@ import { dbFromPowerRatio, FREE_SPACE_IMPEDANCE_OHM, freeSpaceWavelengthMm, mFro
 import { TM11_EIGENVALUE } from './bessel';
 import { requireInRange, requireObject, requirePositive } from './guard';
 import type { SizedEstimates } from './sized-design';
+import { surfaceWaveEfficiency } from './surface-wave';
 
 export interface EstimateInput {
 	frequencyHz: number;
 	heightMm: number;
+	/** Substrate εr: sets the surface-wave share. */
+	relativePermittivity: number;
 	lossTangent: number;
 	copperConductivitySPerM: number;
 	/** Radiation quality factor Q_rad of the patch (from the shape's function below). */
@@ -49,27 +52,33 @@ export function circularDirectivity(effectiveRadiusMm: number, frequencyHz: numb
 }
 
 /**
- * Combines the loss mechanisms (Balanis, Antenna Theory, §14.2.5, from memory):
- * Q_c = h·√(π·f·µ0·σ), Q_d = 1/tanδ, 1/Q = 1/Q_rad + 1/Q_c + 1/Q_d; fractional bandwidth for
- * VSWR ≤ S is (S − 1)/(Q·√S), i.e. 1/(Q·√2) for S = 2; radiation efficiency Q/Q_rad. Surface waves
- * are not counted, so thick substrates look better than they are.
+ * Combines the loss mechanisms (Balanis, Antenna Theory 4th ed., §14.2.5–14.2.6, from memory):
+ * Q_c = h·√(π·f·µ0·σ), Q_d = 1/tanδ, and the surface wave as Q_sw = Q_rad·e_hed/(1 − e_hed) with
+ * e_hed the Jackson–Alexopoulos space-wave share (surface-wave.ts); 1/Q = 1/Q_rad + 1/Q_sw + 1/Q_c + 1/Q_d.
+ * Fractional bandwidth for VSWR ≤ S is (S − 1)/(Q·√S), i.e. 1/(Q·√2) for S = 2; radiation efficiency
+ * (space wave only) Q/Q_rad. The efficiency therefore never exceeds e_hed, which falls as h/λ0 grows.
  */
 export function performanceEstimates(input: EstimateInput): SizedEstimates {
 	const d = requireObject('input', input);
 	const frequencyHz = requirePositive('frequencyHz', d.frequencyHz);
 	const heightMm = requirePositive('heightMm', d.heightMm);
+	const er = requireInRange('relativePermittivity', d.relativePermittivity, 1, 1000);
 	const tanDelta = requireInRange('lossTangent', d.lossTangent, 0, 1, { exclusiveMax: true });
 	const sigma = requirePositive('copperConductivitySPerM', d.copperConductivitySPerM);
 	const qRad = requirePositive('radiationQualityFactor', d.radiationQualityFactor);
 	const directivity = requirePositive('directivity', d.directivity);
 	const qConductor = mFromMm(heightMm) * Math.sqrt(Math.PI * frequencyHz * VACUUM_PERMEABILITY_H_PER_M * sigma);
-	const inverseQ = 1 / qRad + 1 / qConductor + tanDelta;
+	const spaceWaveShare = surfaceWaveEfficiency(heightMm, frequencyHz, er);
+	const inverseQSurface = (1 / qRad) * (1 / spaceWaveShare - 1);
+	const inverseQ = 1 / qRad + inverseQSurface + 1 / qConductor + tanDelta;
 	const qualityFactor = 1 / inverseQ;
 	const vswr = 2;
 	const radiationEfficiency = 1 / qRad / inverseQ;
 	return {
 		bandwidthFraction: (vswr - 1) / (qualityFactor * Math.sqrt(vswr)),
 		qualityFactor,
+		radiationQualityFactor: qRad,
+		surfaceWaveEfficiency: spaceWaveShare,
 		directivityDbi: dbFromPowerRatio(directivity),
 		radiationEfficiency,
 		gainDbi: dbFromPowerRatio(directivity * radiationEfficiency)

@@ -78,7 +78,7 @@ export function sizeExtended(d: DesignInput, sizeSingle: SizeSingle): SizedDesig
 			message: `The ${d.feed} sizes are first-pass values from published design guidelines, not a solved match: tune ${d.feed === 'aperture-coupled' ? 'slot.lengthMm and slot.stubLengthMm' : 'proximity.overlapMm'} by sweep against a field solver or a measurement.`
 		});
 		// the feed's own warnings (notch, line width) do not apply to a coupled feed; keep the substrate ones
-		const kept = base.warnings.filter((w) => w.code !== 'feed-wider-than-notch' && w.code !== 'inset-too-deep');
+		const kept = base.warnings.filter((w) => w.code !== 'feed-wider-than-notch' && w.code !== 'inset-too-deep' && w.code !== 'feed-mismatch');
 		sized = { ...base, input: d, feedKind: d.feed, feed, warnings: kept };
 	} else if (d.parasitic) {
 		const [upper, lower] = groups;

@@ -1,5 +1,5 @@
 // Sizing one design: validated input in, every derived quantity and the warnings out.
-import { InputError, parseDesignInput, type DesignInput } from '../schemas';
+import { InputError, laminateClassFor, parseDesignInput, type DesignInput } from '../schemas';
 import { freeSpaceWavelengthMm, mmFromUm } from '../units';
 import { circularPatch } from './circular-patch';
 import { circularProbeRadiusMm } from './circular-probe-radius';
@@ -17,6 +17,8 @@ import { sizingWarnings, type WarningFacts } from './sizing-warnings';
 import { slotConductance, type SlotConductances } from './slot-conductance';
 import { squarePatch, lineModelOf } from './square-patch';
 import { truncatedDiagonalFor, truncationLegMm } from './truncated-corner-patch';
+import { resonanceAccuracy as resonanceAccuracyFor } from './first-pass-accuracy';
+import { textbookModel } from './textbook-model';
 
 /** Notch gap default: equal to the feed-line width on each side (common practice, no source). */
 export const NOTCH_GAP_LINE_WIDTHS = 1;
@@ -36,7 +38,10 @@ interface Core {
 	patch: SizedPatch;
 	model: RectangularPatchSize;
 	slots: SlotConductances;
+	/** Resonant input resistance at the edge with every loss: the radiation-only value × the radiation efficiency (cavity model, 1/G_total). */
 	edgeResistanceOhm: number;
+	/** 1/G with radiation only: the textbook's edge resistance. */
+	radiationEdgeResistanceOhm: number;
 	estimates: SizedEstimates;
 	/** Patch extent along x and y. */
 	extentXMm: number;
@@ -47,13 +52,19 @@ interface Core {
 	feedEdgeMm: number;
 }
 
+/** The loaded edge resistance R_rad·η (1/G_total of the cavity) beside the radiation-only R_rad. */
+function edgeResistances(radiationEdgeResistanceOhm: number, estimates: SizedEstimates) {
+	return { edgeResistanceOhm: radiationEdgeResistanceOhm * estimates.radiationEfficiency, radiationEdgeResistanceOhm };
+}
+
 function lineEstimates(d: DesignInput, model: RectangularPatchSize, slots: SlotConductances): SizedEstimates {
 	const { frequencyHz, substrate: s } = d;
 	const g = slots.slotConductanceS + slots.mutualConductanceS;
 	return performanceEstimates({
 		frequencyHz,
 		heightMm: s.heightMm,
-		lossTangent: s.lossTangent,
+		relativePermittivity: s.relativePermittivity,
+		lossTangent: lossTangentOf(d),
 		copperConductivitySPerM: s.copperConductivitySPerM,
 		radiationQualityFactor: rectangularRadiationQuality(model.widthMm, model.effectiveLengthMm, s.heightMm, s.relativePermittivity, frequencyHz, g),
 		directivity: rectangularDirectivity(model.widthMm, frequencyHz, slots.slotIntegral, slots.slotConductanceS, slots.mutualConductanceS)
@@ -76,7 +87,7 @@ function formulaValuesOf(d: DesignInput, fed: SizedFeed, core: Core): FormulaVal
 	if (o.widthMm !== undefined && plain.patch.kind === 'rectangular') out.widthMm = plain.patch.widthMm;
 	if (o.radiusMm !== undefined && plain.patch.kind === 'circular') out.radiusMm = plain.patch.radiusMm;
 	// the feed formulas applied to the patch as overridden, so a tuned feed is compared like for like
-	if (o.insetDepthMm !== undefined && fed.kind === 'inset') out.insetDepthMm = insetDepthMm({ edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm, lengthMm: core.resonantLengthMm });
+	if (o.insetDepthMm !== undefined && fed.kind === 'inset') out.insetDepthMm = insetDepthMm({ edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm, lengthMm: core.resonantLengthMm, law: 'cos4' });
 	if (o.probeOffsetMm !== undefined && fed.kind === 'probe') out.probeOffsetMm = probeFormulaOffset(d, core);
 	return out;
 }
@@ -94,7 +105,8 @@ function rectangularFamily(d: DesignInput): Core {
 		const model = withLengthOverride(rectangularPatch({ ...base, widthMm: d.patchWidthMm ?? d.overrides?.widthMm }), d.overrides?.lengthMm);
 		const slots = slotConductance({ widthMm: model.widthMm, lengthMm: model.lengthMm, frequencyHz });
 		const patch: SizedPatch = { kind: 'rectangular', widthMm: model.widthMm, lengthMm: model.lengthMm };
-		return { patch, model, slots, edgeResistanceOhm: slots.edgeResistanceOhm, estimates: lineEstimates(d, model, slots), extentXMm: model.widthMm, extentYMm: model.lengthMm, resonantLengthMm: model.lengthMm, feedEdgeMm: model.widthMm };
+		const estimates = lineEstimates(d, model, slots);
+		return { patch, model, slots, ...edgeResistances(slots.edgeResistanceOhm, estimates), estimates, extentXMm: model.widthMm, extentYMm: model.lengthMm, resonantLengthMm: model.lengthMm, feedEdgeMm: model.widthMm };
 	}
 	const square = squarePatch(base);
 	const squareSlots = slotConductance({ widthMm: square.widthMm, lengthMm: square.lengthMm, frequencyHz });
@@ -107,7 +119,7 @@ function rectangularFamily(d: DesignInput): Core {
 			handedness: d.handedness,
 			truncatedDiagonal: truncatedDiagonalFor(d.handedness)
 		};
-		return { patch, model: square, slots: squareSlots, edgeResistanceOhm: squareSlots.edgeResistanceOhm, estimates, extentXMm: square.widthMm, extentYMm: square.widthMm, resonantLengthMm: square.widthMm, feedEdgeMm: square.widthMm };
+		return { patch, model: square, slots: squareSlots, ...edgeResistances(squareSlots.edgeResistanceOhm, estimates), estimates, extentXMm: square.widthMm, extentYMm: square.widthMm, resonantLengthMm: square.widthMm, feedEdgeMm: square.widthMm };
 	}
 	// Nearly square: two orthogonal modes; the diagonal probe sees their mean edge resistance.
 	const ns = nearlySquarePatch({ ...base, qualityFactor: estimates.qualityFactor, handedness: d.handedness });
@@ -121,7 +133,7 @@ function rectangularFamily(d: DesignInput): Core {
 	};
 	const model = lineModelOf(ns.widthMm, ns.lengthMm, s.heightMm, s.relativePermittivity);
 	const patch: SizedPatch = { kind: 'nearly-square', widthMm: ns.widthMm, lengthMm: ns.lengthMm, handedness: d.handedness };
-	return { patch, model, slots, edgeResistanceOhm: slots.edgeResistanceOhm, estimates, extentXMm: ns.widthMm, extentYMm: ns.lengthMm, resonantLengthMm: ns.lengthMm, feedEdgeMm: ns.widthMm };
+	return { patch, model, slots, ...edgeResistances(slots.edgeResistanceOhm, estimates), estimates, extentXMm: ns.widthMm, extentYMm: ns.lengthMm, resonantLengthMm: ns.lengthMm, feedEdgeMm: ns.widthMm };
 }
 
 /** An overridden radius brings its own effective radius and radiation conductance. */
@@ -140,7 +152,8 @@ function circularCore(d: DesignInput): Core {
 	const estimates = performanceEstimates({
 		frequencyHz,
 		heightMm: s.heightMm,
-		lossTangent: s.lossTangent,
+		relativePermittivity: s.relativePermittivity,
+		lossTangent: lossTangentOf(d),
 		copperConductivitySPerM: s.copperConductivitySPerM,
 		radiationQualityFactor: circularRadiationQuality(c.effectiveRadiusMm, s.heightMm, s.relativePermittivity, frequencyHz, g),
 		directivity: circularDirectivity(c.effectiveRadiusMm, frequencyHz, g)
@@ -150,7 +163,7 @@ function circularCore(d: DesignInput): Core {
 		patch: { kind: 'circular', radiusMm: c.radiusMm, effectiveRadiusMm: c.effectiveRadiusMm },
 		model: { widthMm: diameter, lengthMm: diameter, effectivePermittivity: s.relativePermittivity, fringeExtensionMm: 0, effectiveLengthMm: 2 * c.effectiveRadiusMm },
 		slots: { slotConductanceS: g, mutualConductanceS: 0, edgeResistanceOhm: c.edgeResistanceOhm, slotIntegral: 0 },
-		edgeResistanceOhm: c.edgeResistanceOhm,
+		...edgeResistances(c.edgeResistanceOhm, estimates),
 		estimates,
 		extentXMm: diameter,
 		extentYMm: diameter,
@@ -175,7 +188,7 @@ function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
 			return { feed: { kind: 'edge', line: l }, feedRoomMm: 0, facts: { feedWidth: { widthMm: l.widthMm, edgeMm: core.feedEdgeMm, notch: false } } };
 		}
 		case 'inset': {
-			const depth = d.overrides?.insetDepthMm ?? insetDepthMm({ edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm, lengthMm: core.resonantLengthMm });
+			const depth = d.overrides?.insetDepthMm ?? insetDepthMm({ edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm, lengthMm: core.resonantLengthMm, law: 'cos4' });
 			const l = line(d.feedLineImpedanceOhm, marginMm + depth);
 			const gap = d.inset.notchGapMm ?? NOTCH_GAP_LINE_WIDTHS * l.widthMm;
 			return {
@@ -210,7 +223,7 @@ function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
 			const target = { edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm };
 			if (core.patch.kind === 'circular') {
 				const rho = d.overrides?.probeOffsetMm ?? circularProbeRadiusMm({ ...target, radiusMm: core.patch.radiusMm, effectiveRadiusMm: core.patch.effectiveRadiusMm });
-				return { feed: { kind: 'probe', offsetXMm: 0, offsetYMm: rho, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: core.patch.radiusMm - rho, padRadiusMm: pad / 2 } } };
+				return { feed: { kind: 'probe', offsetXMm: 0, offsetYMm: rho, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: core.patch.radiusMm - rho, padRadiusMm: pad / 2, drillDiameterMm: common.drillDiameterMm } } };
 			}
 			if (core.patch.kind === 'nearly-square') {
 				// Both modes see R·sin²(π·t/2) at the fraction t of the way from the centre to the corner:
@@ -219,17 +232,17 @@ function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
 				const x = (share * core.patch.widthMm) / 2;
 				const y = (share * core.patch.lengthMm) / 2;
 				const edge = Math.min(core.patch.widthMm / 2 - x, core.patch.lengthMm / 2 - y);
-				return { feed: { kind: 'probe', offsetXMm: x, offsetYMm: y, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: edge, padRadiusMm: pad / 2 } } };
+				return { feed: { kind: 'probe', offsetXMm: x, offsetYMm: y, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: edge, padRadiusMm: pad / 2, drillDiameterMm: common.drillDiameterMm } } };
 			}
 			const offset = d.overrides?.probeOffsetMm ?? probeOffsetMm({ ...target, lengthMm: core.resonantLengthMm });
 			const edge = Math.min(core.resonantLengthMm / 2 - offset, core.extentXMm / 2);
-			return { feed: { kind: 'probe', offsetXMm: 0, offsetYMm: offset, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: edge, padRadiusMm: pad / 2 } } };
+			return { feed: { kind: 'probe', offsetXMm: 0, offsetYMm: offset, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: edge, padRadiusMm: pad / 2, drillDiameterMm: common.drillDiameterMm } } };
 		}
 	}
 }
 
 /** Sizes one single-layer element from a validated document (the original path, untouched by stacks and arrays). */
-function sizeValid(d: DesignInput): SizedDesign {
+function sizeValid(d: DesignInput, assumed?: WarningFacts['assumedLossTangent']): SizedDesign {
 	const s = d.substrate;
 	const lambda0 = freeSpaceWavelengthMm(d.frequencyHz);
 	const core = d.shape === 'circular' ? circularCore(d) : rectangularFamily(d);
@@ -237,17 +250,30 @@ function sizeValid(d: DesignInput): SizedDesign {
 	const fed = attachFeed(d, core, marginMm);
 	const formulaValues = formulaValuesOf(d, fed.feed, core);
 	const ground = groundSize({ patchWidthMm: core.extentXMm, patchLengthMm: core.extentYMm, heightMm: s.heightMm, marginMm, feedRoomMm: fed.feedRoomMm });
+	const resonanceAccuracy = resonanceAccuracyFor(d.shape);
 	const warnings = sizingWarnings({
 		heightMm: s.heightMm,
 		freeSpaceWavelengthMm: lambda0,
 		frequencyHz: d.frequencyHz,
-		lossTangent: s.lossTangent,
+		relativePermittivity: s.relativePermittivity,
+		lossTangent: lossTangentOf(d),
+		assumedLossTangent: assumed,
+		radiationEfficiency: core.estimates.radiationEfficiency,
+		radiationQualityFactor: core.estimates.radiationQualityFactor,
 		marginMm,
+		groundWidthMm: ground.widthMm,
+		groundLengthMm: ground.lengthMm,
 		bandwidthFraction: core.estimates.bandwidthFraction,
 		qualityFactor: core.estimates.qualityFactor,
 		circularlyPolarised: d.shape === 'truncated-corner' || d.shape === 'nearly-square',
+		accuracy: resonanceAccuracy,
+		feedPoint: { resistanceOhm: d.feed === 'edge' ? core.edgeResistanceOhm : d.targetImpedanceOhm, lineImpedanceOhm: d.feedLineImpedanceOhm },
 		...fed.facts
 	});
+	const shapeModel =
+		core.patch.kind === 'circular'
+			? { radiationConductanceS: core.slots.slotConductanceS }
+			: { fringeExtensionMm: core.model.fringeExtensionMm, effectiveLengthMm: core.model.effectiveLengthMm, slotConductanceS: core.slots.slotConductanceS, mutualConductanceS: core.slots.mutualConductanceS };
 	return {
 		input: d,
 		shape: d.shape,
@@ -255,11 +281,11 @@ function sizeValid(d: DesignInput): SizedDesign {
 		frequencyHz: d.frequencyHz,
 		freeSpaceWavelengthMm: lambda0,
 		effectivePermittivity: core.model.effectivePermittivity,
-		fringeExtensionMm: core.model.fringeExtensionMm,
-		effectiveLengthMm: core.model.effectiveLengthMm,
-		slotConductanceS: core.slots.slotConductanceS,
-		mutualConductanceS: core.slots.mutualConductanceS,
+		...shapeModel,
 		edgeResistanceOhm: core.edgeResistanceOhm,
+		radiationEdgeResistanceOhm: core.radiationEdgeResistanceOhm,
+		resonanceAccuracy,
+		textbook: textbookModel(d, core.patch),
 		patch: core.patch,
 		feed: fed.feed,
 		ground,
@@ -268,6 +294,18 @@ function sizeValid(d: DesignInput): SizedDesign {
 		warnings,
 		...(formulaValues ? { formulaValues } : {})
 	};
+}
+
+/** tanδ of a document whose missing value has already been filled by withLossTangent. */
+function lossTangentOf(d: DesignInput): number {
+	return d.substrate.lossTangent ?? laminateClassFor(d.substrate.relativePermittivity).typicalLossTangent;
+}
+
+/** Fills a missing tanδ with its εr class's typical value, and says so. */
+function withLossTangent(d: DesignInput): { doc: DesignInput; assumed?: WarningFacts['assumedLossTangent'] } {
+	if (d.substrate.lossTangent !== undefined) return { doc: d };
+	const c = laminateClassFor(d.substrate.relativePermittivity);
+	return { doc: { ...d, substrate: { ...d.substrate, lossTangent: c.typicalLossTangent } }, assumed: { value: c.typicalLossTangent, materialClass: c.name } };
 }
 
 function toDocumentPaths(error: InputError): InputError {
@@ -281,9 +319,9 @@ function toDocumentPaths(error: InputError): InputError {
  * inset depth reaches the target).
  */
 export function size(input: unknown): SizedDesign {
-	const d = parseDesignInput(input);
+	const { doc: d, assumed } = withLossTangent(parseDesignInput(input));
 	try {
-		return needsExtendedSizing(d) ? sizeExtended(d, sizeValid) : sizeValid(d);
+		return needsExtendedSizing(d) ? sizeExtended(d, (g) => sizeValid(g, assumed)) : sizeValid(d, assumed);
 	} catch (error) {
 		if (error instanceof InputError) throw toDocumentPaths(error);
 		throw error;

@@ -13,7 +13,14 @@ export type WarningCode =
 	| 'cp-outside-validity'
 	| 'first-pass-coupling'
 	| 'parasitic-spacing'
-	| 'grating-lobes';
+	| 'grating-lobes'
+	| 'low-efficiency'
+	| 'dielectric-loss-dominates'
+	| 'small-ground'
+	| 'feed-mismatch'
+	| 'probe-pin-fit'
+	| 'assumed-loss-tangent'
+	| 'outside-model-range';
 
 export interface SizingWarning {
 	code: WarningCode;
@@ -183,12 +190,42 @@ export interface SizedEstimates {
 	bandwidthFraction: number;
 	/** Total quality factor. Estimate. */
 	qualityFactor: number;
+	/** Radiation (space-wave) quality factor Q_rad. Estimate. */
+	radiationQualityFactor: number;
+	/** Space-wave share of the radiated power, P_sp/(P_sp + P_sw), 0..1 (Jackson–Alexopoulos). Estimate. */
+	surfaceWaveEfficiency: number;
 	/** Broadside directivity, dBi. Estimate. */
 	directivityDbi: number;
-	/** Radiation efficiency with dielectric and conductor loss, 0..1. Estimate. */
+	/** Radiation efficiency with surface-wave, dielectric and conductor loss, 0..1. Estimate. */
 	radiationEfficiency: number;
 	/** Gain = directivity × efficiency, dBi. Estimate. */
 	gainDbi: number;
+}
+
+/** The textbook model's answer to the same input, kept beside the first pass for comparison. */
+export interface SizedTextbook {
+	/** Resonant dimension by the textbook model: L (rectangular), the side (corner-cut, nearly square: the short side of the square base), the radius (circular). */
+	resonantDimensionMm: number;
+	/** Resonance the textbook model predicts for the first-pass patch, Hz. */
+	resonanceOfFirstPassHz: number;
+	/** Edge resistance with radiation only (no loss), Ω. */
+	edgeResistanceOhm: number;
+	/** Inset depth by cos² on that edge resistance (inset feed). */
+	insetDepthMm?: number;
+	/** Probe distance from the patch centre by cos² (J1² for a disc) on that edge resistance (probe feed). */
+	probeOffsetMm?: number;
+}
+
+/** The expected error of the first-pass resonance and the range of the data behind it. */
+export interface ResonanceAccuracy {
+	/** Resonance typically within ± this many per cent of the target… */
+	typicalErrorPercent: number;
+	/** …for h/λ0 up to this… */
+	maximumHeightRatio: number;
+	/** …and εr within this range. */
+	permittivityRange: readonly [number, number];
+	/** The data the band comes from. */
+	basis: string;
 }
 
 export interface SizedDesign {
@@ -198,18 +235,26 @@ export interface SizedDesign {
 	feedKind: FeedKind;
 	frequencyHz: number;
 	freeSpaceWavelengthMm: number;
-	/** Effective permittivity of the patch (transmission-line model); cavity model for circular. */
+	/** Effective permittivity of the patch (transmission-line model); εr itself in the circular cavity model. */
 	effectivePermittivity: number;
-	/** Hammerstad fringe extension ΔL per radiating edge (rectangular family; 0 otherwise). */
-	fringeExtensionMm: number;
-	/** L + 2ΔL (rectangular family); 2·a_e for circular. */
-	effectiveLengthMm: number;
-	/** Radiating-slot self conductance G1, S. */
-	slotConductanceS: number;
-	/** Mutual conductance between the two slots G12, S. */
-	mutualConductanceS: number;
-	/** Input resistance at the radiating edge, Ω. */
+	/** Hammerstad fringe extension ΔL per radiating edge (rectangular family only). */
+	fringeExtensionMm?: number;
+	/** L + 2ΔL (rectangular family only). */
+	effectiveLengthMm?: number;
+	/** Radiating-slot self conductance G1, S (rectangular family only). */
+	slotConductanceS?: number;
+	/** Mutual conductance between the two slots G12, S (rectangular family only). */
+	mutualConductanceS?: number;
+	/** Radiation conductance of the TM11 disc at its rim, S (circular only). */
+	radiationConductanceS?: number;
+	/** Resonant input resistance at the radiating edge (the rim for a disc) with every loss counted, Ω: the feed is placed on it. */
 	edgeResistanceOhm: number;
+	/** The same with radiation only (the textbook's edge resistance), Ω. */
+	radiationEdgeResistanceOhm: number;
+	/** The first-pass resonance's expected error band and its range. */
+	resonanceAccuracy: ResonanceAccuracy;
+	/** The textbook model's figures for the same input. */
+	textbook: SizedTextbook;
 	patch: SizedPatch;
 	feed: SizedFeed;
 	/** Ground plane and substrate outline, centred on the patch. */

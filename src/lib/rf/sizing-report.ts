@@ -33,14 +33,19 @@ export function sizingReport(sized: SizedDesign): SizingReport {
 			Object.assign(out, { patchRadiusMm: p.radiusMm, effectiveRadiusMm: p.effectiveRadiusMm });
 			break;
 	}
-	Object.assign(out, {
+	// only the quantities the shape's model defines: slots and ΔL for the line model, G_rad for the disc
+	const model: Record<string, number | undefined> = {
 		effectivePermittivity: sized.effectivePermittivity,
 		fringeExtensionMm: sized.fringeExtensionMm,
 		effectiveLengthMm: sized.effectiveLengthMm,
 		slotConductanceS: sized.slotConductanceS,
 		mutualConductanceS: sized.mutualConductanceS,
-		edgeResistanceOhm: sized.edgeResistanceOhm
-	});
+		radiationConductanceS: sized.radiationConductanceS,
+		edgeResistanceOhm: sized.edgeResistanceOhm,
+		radiationEdgeResistanceOhm: sized.radiationEdgeResistanceOhm
+	};
+	for (const [key, value] of Object.entries(model)) if (value !== undefined) out[key] = value;
+	Object.assign(out, { resonanceAccuracy: sized.resonanceAccuracy, textbook: sized.textbook });
 	const f = sized.feed;
 	const line = (prefix: string, l: { widthMm: number; lengthMm: number; impedanceOhm: number; effectivePermittivity: number }) => ({
 		[`${prefix}ImpedanceOhm`]: l.impedanceOhm,
@@ -81,11 +86,13 @@ export function sizingReport(sized: SizedDesign): SizingReport {
 		groundMarginMm: sized.ground.marginMm,
 		copperThicknessMm: sized.copperThicknessMm,
 		estimates: {
-			note: 'Estimates from the cavity and transmission-line models (surface waves not counted), not measurements.',
+			note: 'Estimates from the cavity and transmission-line models with the surface-wave share (Jackson–Alexopoulos), not measurements.',
 			bandwidthFraction: sized.estimates.bandwidthFraction,
 			qualityFactor: sized.estimates.qualityFactor,
 			directivityDbi: sized.estimates.directivityDbi,
 			radiationEfficiency: sized.estimates.radiationEfficiency,
+			radiationQualityFactor: sized.estimates.radiationQualityFactor,
+			surfaceWaveEfficiency: sized.estimates.surfaceWaveEfficiency,
 			gainDbi: sized.estimates.gainDbi
 		},
 		warnings: sized.warnings

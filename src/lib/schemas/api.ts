@@ -5,6 +5,7 @@ import { designInputSchema, designNameSchema } from './design-input';
 import { revisionNoteSchema } from './revision-note';
 import { sizedDesignSchema } from './sized-design';
 import { waiverReasonSchema } from './waiver-reason';
+import { fieldCheckModes, fieldCheckProgressSchema, fieldCheckResultSchema, homingResultSchema } from './field-check';
 
 /** The design-input document, named for the OpenAPI components. */
 export const designInputDocumentSchema = designInputSchema.meta({ id: 'DesignInput', description: 'The design-input document (see src/lib/schemas/design-input.ts)' });
@@ -155,3 +156,47 @@ export const exportLogSchema = z
 export const problemSchema = z
 	.object({ error: z.string(), issues: z.array(z.object({ path: z.string(), message: z.string() })) })
 	.meta({ id: 'Problem', description: 'What went wrong; for bad input, one issue per field' });
+
+// ---- field checks (full-wave simulation of a revision) and Homing ----
+
+/** POST body that starts a field check (or, with homing, a Homing study) of a revision — editors and owners. */
+export const startFieldCheckBodySchema = z
+	.strictObject({
+		mode: z.enum(fieldCheckModes).default('standard').meta({ description: 'Mesh: quick (a first look, ~2 %), standard, or accurate (standard refined 1.5×, reports the shift)' }),
+		homing: z.boolean().default(false).meta({ description: 'Run Homing instead: move the resonant dimension, then the feed, until the simulated patch meets its target' })
+	})
+	.meta({ id: 'StartFieldCheck' });
+export type StartFieldCheckBody = z.output<typeof startFieldCheckBodySchema>;
+
+export const fieldCheckParamsSchema = z.object({ id: z.uuid({ error: 'id is a field check id (a UUID)' }).meta({ description: 'Field check id', example: '0b9e3c0e-5c1a-4c55-9b43-5c2a7e1d9f10' }) });
+
+export const fieldCheckStates = ['queued', 'running', 'succeeded', 'failed', 'cancelled'] as const;
+
+export const fieldCheckSummarySchema = z
+	.object({
+		id: z.string(),
+		designId: z.string(),
+		revisionLabel: z.string(),
+		kind: z.enum(['check', 'homing']).meta({ description: 'check: one full-wave simulation; homing: the tune-to-target study' }),
+		mode: z.enum(fieldCheckModes),
+		state: z.enum(fieldCheckStates),
+		progress: fieldCheckProgressSchema.nullable(),
+		error: z.string().nullable().meta({ description: 'Why it failed or was cancelled; while queued again after a lost worker, what happened' }),
+		requestedBy: z.string().meta({ description: 'Display name of whoever started it' }),
+		createdAt: z.iso.datetime(),
+		startedAt: z.iso.datetime().nullable(),
+		finishedAt: z.iso.datetime().nullable(),
+		cancelRequested: z.boolean(),
+		attempt: z.number().int().meta({ description: 'Times a worker has taken it (above 1 after a lost worker)' }),
+		statusUrl: z.string().meta({ description: 'GET here for the status, progress and result' })
+	})
+	.meta({ id: 'FieldCheckSummary' });
+
+export const fieldCheckListSchema = z.object({ items: z.array(fieldCheckSummarySchema) }).meta({ id: 'FieldCheckList' });
+
+export const fieldCheckStatusSchema = fieldCheckSummarySchema
+	.extend({
+		result: fieldCheckResultSchema.nullable().meta({ description: 'When succeeded: the full-wave result (for Homing, that of the tuned patch)' }),
+		homing: homingResultSchema.nullable().meta({ description: 'When a Homing study succeeded: its iterations and the tuned design input' })
+	})
+	.meta({ id: 'FieldCheckStatus' });

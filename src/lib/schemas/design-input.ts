@@ -66,8 +66,11 @@ function bounded(min: number, max: number, opts: { exclusiveMin?: boolean; exclu
 export const substrateSchema = z.strictObject({
 	/** Relative permittivity εr of the dielectric. */
 	relativePermittivity: bounded(1, 30, { exclusiveMin: true }),
-	/** Dielectric loss tangent tanδ. */
-	lossTangent: bounded(0, 1, { exclusiveMax: true }).default(0.0009),
+	/**
+	 * Dielectric loss tangent tanδ. No silent default: when it is missing, sizing assumes the typical
+	 * value of the εr's material class (laminateClassFor), writes it into the document and warns.
+	 */
+	lossTangent: bounded(0, 1, { exclusiveMax: true }).optional(),
 	/** Dielectric thickness h between patch copper and ground copper. */
 	heightMm: bounded(0, 100, { exclusiveMin: true }),
 	/** Finished copper thickness (35 µm ≈ 1 oz/ft²). */

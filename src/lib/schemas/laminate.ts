@@ -33,3 +33,35 @@ export const laminateInputSchema = z.strictObject({
 
 export type LaminateProperties = z.output<typeof laminatePropertiesSchema>;
 export type LaminateInput = z.output<typeof laminateInputSchema>;
+
+/**
+ * A class of laminate material: rounded typical ranges, not any one product's datasheet. Exact values
+ * belong in a laminate a team adds from its own supplier's sheet.
+ */
+export interface LaminateClass {
+	name: string;
+	/** εr values the class spans (the upper bound is exclusive when classes meet). */
+	relativePermittivityRange: readonly [number, number];
+	/** Typical tanδ range at 1–10 GHz. */
+	lossTangentRange: readonly [number, number];
+	/** The value assumed when a document gives no tanδ, and the one the built-in presets carry. */
+	typicalLossTangent: number;
+	/** Where the ranges come from. */
+	source: string;
+}
+
+/**
+ * Material classes by εr, with typical tanδ (Pozar, Microwave Engineering 4th ed., Appendix G, and
+ * IPC-4101 / IPC-4103 base-material classes; from memory, rounded).
+ */
+export const laminateClasses: readonly LaminateClass[] = [
+	{ name: 'PTFE-glass class', relativePermittivityRange: [1, 2.7], lossTangentRange: [0.0005, 0.002], typicalLossTangent: 0.001, source: 'Pozar, Microwave Engineering 4th ed., App. G; IPC-4103 (from memory)' },
+	{ name: 'ceramic-filled hydrocarbon or PTFE class', relativePermittivityRange: [2.7, 3.8], lossTangentRange: [0.001, 0.005], typicalLossTangent: 0.003, source: 'IPC-4103 (from memory)' },
+	{ name: 'glass-epoxy (FR-4) class', relativePermittivityRange: [3.8, 5], lossTangentRange: [0.015, 0.025], typicalLossTangent: 0.02, source: 'Pozar, Microwave Engineering 4th ed., App. G; IPC-4101 (from memory)' },
+	{ name: 'high-εr ceramic-filled class', relativePermittivityRange: [5, 30], lossTangentRange: [0.001, 0.004], typicalLossTangent: 0.003, source: 'IPC-4103 (from memory)' }
+];
+
+/** The material class an εr falls in (the first whose range holds it; [lo, hi) except the last). */
+export function laminateClassFor(relativePermittivity: number): LaminateClass {
+	return laminateClasses.find((c) => relativePermittivity >= c.relativePermittivityRange[0] && relativePermittivity < c.relativePermittivityRange[1]) ?? laminateClasses[laminateClasses.length - 1];
+}

@@ -209,10 +209,10 @@ export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number,
 		const line = topLayer.shapes.find((s) => s.role === 'feed-line');
 		if (!line) throw unsupported('a microstrip feed needs its feed line');
 		const pts = shapeOutline(line);
-		const x0 = Math.min(...pts.map((p) => p[0]));
-		const x1 = Math.max(...pts.map((p) => p[0]));
+		const x0 = pts.reduce((m, p) => Math.min(m, p[0]), Infinity);
+		const x1 = pts.reduce((m, p) => Math.max(m, p[0]), -Infinity);
 		// one thirds-rule cell in from the board edge, so the port sits on copper at both ends
-		const y0 = Math.min(...pts.map((p) => p[1])) + edgeCellMm;
+		const y0 = pts.reduce((m, p) => Math.min(m, p[1]), Infinity) + edgeCellMm;
 		port = { fromMm: [x0, y0, groundZMm], toMm: [x1, y0, topZMm], referenceImpedanceOhm };
 		fixedY.push(y0);
 	} else {

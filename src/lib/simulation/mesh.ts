@@ -236,8 +236,8 @@ export function meshStatistics(mesh: FieldMesh, timesteps = 0): MeshStatistics {
 		cellsY,
 		cellsZ,
 		cellCount: cellsX * cellsY * cellsZ,
-		smallestCellMm: Math.min(...sizes),
-		largestCellMm: Math.max(...sizes),
+		smallestCellMm: sizes.reduce((m, s) => Math.min(m, s), Infinity),
+		largestCellMm: sizes.reduce((m, s) => Math.max(m, s), -Infinity),
 		timesteps
 	};
 }

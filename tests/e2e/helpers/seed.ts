@@ -23,3 +23,29 @@ export async function seedEditorWithDesign(tag: string, designName: string, raw:
 	const { design } = await createDesign(db, { teamId, userId: editor.id, raw: { ...raw, name: `${designName} ${suffix}` } });
 	return { editor, teamId, designId: design.id, suffix };
 }
+
+export interface SeededTeam {
+	people: Record<'owner' | 'editor' | 'viewer', { id: string; email: string; password: string }>;
+	teamId: string;
+	designId: string;
+}
+
+/** A team with one confirmed person in each role and one design (revision A), made by the editor. */
+export async function seedTeamWithEveryRole(tag: string, raw: Record<string, unknown>): Promise<SeededTeam> {
+	const suffix = randomBytes(4).toString('hex');
+	const teamId = `team-${tag}-${suffix}`;
+	const db = getDb();
+	await db.insertInto('team').values({ id: teamId, name: `${tag} team ${suffix}` }).execute();
+	const people = {} as SeededTeam['people'];
+	for (const role of ['owner', 'editor', 'viewer'] as const) {
+		const person = { id: `e2e-${tag}-${role}-${suffix}`, email: `${tag}-${role}-${suffix}@e2e.test`, password: `${tag}-${role}-${suffix}-pass` };
+		await db
+			.insertInto('app_user')
+			.values({ id: person.id, email: person.email, display_name: `${role} ${suffix}`, password_hash: await hashPassword(person.password), email_verified_at: new Date() })
+			.execute();
+		await db.insertInto('team_member').values({ team_id: teamId, user_id: person.id, role }).execute();
+		people[role] = person;
+	}
+	const { design } = await createDesign(db, { teamId, userId: people.editor.id, raw: { ...raw, name: `${tag} patch ${suffix}` } });
+	return { people, teamId, designId: design.id };
+}

@@ -21,6 +21,10 @@ describe('openApiDocument', () => {
 				'POST /designs/{designId}/revisions/{label}/export/{format}',
 				'GET /designs/{designId}/revisions/{label}/sweep-plans',
 				'GET /designs/{designId}/revisions/{label}/sweep-plans/{planId}/sweep',
+				'GET /designs/{designId}/revisions/{label}/simulations',
+				'POST /designs/{designId}/revisions/{label}/simulations',
+				'GET /simulations/{id}',
+				'POST /simulations/{id}/cancel',
 				'POST /size'
 			].sort()
 		);
@@ -42,6 +46,20 @@ describe('openApiDocument', () => {
 		expect(Object.keys(download.post.responses)).toEqual(expect.arrayContaining(['200', '400', '401', '403', '404']));
 		expect(schemas.ExportRecord.properties.waiver).toBeDefined();
 		expect(schemas.ExportRecord.required).toContain('waiver');
+	});
+
+	it('documents the field-check endpoints: 202 on start, the status with the full-wave result and Homing, cancel outcomes', () => {
+		const doc = openApiDocument();
+		const paths = doc.paths as Record<string, any>;
+		const schemas = doc.components?.schemas as Record<string, any>;
+		const start = paths['/designs/{designId}/revisions/{label}/simulations'].post;
+		expect(start.requestBody.content['application/json'].schema.$ref).toBe('#/components/schemas/StartFieldCheck');
+		expect(Object.keys(start.responses)).toEqual(expect.arrayContaining(['202', '400', '401', '403', '404', '429']));
+		expect(schemas.StartFieldCheck.properties.mode.enum).toEqual(['quick', 'standard', 'accurate']);
+		const status = paths['/simulations/{id}'].get.responses['200'].content['application/json'].schema.$ref;
+		expect(status).toBe('#/components/schemas/FieldCheckStatus');
+		expect(Object.keys(schemas.FieldCheckStatus.properties)).toEqual(expect.arrayContaining(['state', 'progress', 'result', 'homing', 'statusUrl']));
+		expect(Object.keys(paths['/simulations/{id}/cancel'].post.responses)).toEqual(expect.arrayContaining(['200', '202', '409']));
 	});
 
 	it('documents the sweep-plan endpoints with the plan schema and the planId parameter', () => {
@@ -71,6 +89,6 @@ describe('openApiDocument', () => {
 		expect(names).toEqual(expect.arrayContaining(['path:teamId', 'query:sort', 'query:order', 'query:page', 'query:pageSize', 'query:q', 'query:designId']));
 		const download = (doc.paths as Record<string, any>)['/designs/{designId}/revisions/{label}/export/{format}'].get;
 		const format = download.parameters.find((p: { name: string }) => p.name === 'format');
-		expect(format.schema.enum).toEqual(['bundle', 'gerber', 'drill', 'dxf', 'svg', 'sweep', 'notes']);
+		expect(format.schema.enum).toEqual(['bundle', 'gerber', 'drill', 'dxf', 'svg', 'sweep', 'notes', 'step']);
 	});
 });

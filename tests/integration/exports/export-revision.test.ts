@@ -150,6 +150,6 @@ describe('the download route in the app', () => {
 
 	it('accepts only the known formats (the param matcher turns the rest into 404)', () => {
 		for (const kind of exportKinds) expect(formatMatcher(kind)).toBe(true);
-		for (const bad of ['zip', 'GERBER', 'step', '', 'bundle.zip']) expect(formatMatcher(bad)).toBe(false);
+		for (const bad of ['zip', 'GERBER', 'iges', '', 'bundle.zip']) expect(formatMatcher(bad)).toBe(false);
 	});
 });

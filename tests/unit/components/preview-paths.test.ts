@@ -1,7 +1,7 @@
 // The preview's layer styles and counts: every copper of a stack named by number and contents, ground drawn first, arrays counted.
 import { describe, expect, it } from 'vitest';
 import { buildArtwork } from '../../../src/lib/artwork';
-import { previewCounts, previewLayerStyles } from '../../../src/lib/components/preview-paths';
+import { previewCounts, previewKeyStep, previewLayerStyles } from '../../../src/lib/components/preview-paths';
 import { size } from '../../../src/lib/rf';
 import { designDocument } from '../../fixtures/designs/design-cases';
 import { layeredCases } from '../../fixtures/designs/layered-cases';
@@ -14,6 +14,14 @@ describe('preview layer styles', () => {
 		expect(styles['copper-top'].label).toBe('Top copper');
 		expect(styles['copper-bottom'].label).toBe('Ground');
 		expect(styles['copper-bottom'].order).toBeLessThan(styles['copper-top'].order);
+	});
+
+	// WCAG 2.2 SC 1.4.1 (use of colour): ground and copper differ by pattern, not by hue alone
+	it('hatch every ground plane and keep every other copper solid', () => {
+		const styles = previewLayerStyles(artworkOf('stacked parasitic patch').layers);
+		expect([styles['copper-top'].pattern, styles['copper-inner-1'].pattern, styles['copper-bottom'].pattern]).toEqual(['solid', 'solid', 'hatched']);
+		const two = previewLayerStyles(buildArtwork(size(designDocument('rectangular', 'inset'))).layers);
+		expect([two['copper-top'].pattern, two['copper-bottom'].pattern]).toEqual(['solid', 'hatched']);
 	});
 
 	it('name each copper of an aperture-coupled stack by number and contents, inner layer included', () => {
@@ -38,5 +46,28 @@ describe('preview counts', () => {
 		expect(previewCounts(artworkOf('1×4 inset array').layers).networkPieces).toBeGreaterThan(0);
 		expect(previewCounts(artworkOf('4×4 inset array').layers).patches).toBe(16);
 		expect(previewCounts(artworkOf('aperture-coupled patch').layers)).toEqual({ patches: 1, parasitics: 0, networkPieces: 0 });
+	});
+});
+
+// WCAG 2.2 SC 2.1.1 (keyboard): everything the pointer does to the preview, the keys do too
+describe('preview keys', () => {
+	const box = { x: 0, y: 0, w: 100, h: 50 };
+
+	it('pan a tenth of the window per arrow press', () => {
+		expect(previewKeyStep('ArrowRight', box)).toEqual({ x: 10, y: 0, w: 100, h: 50 });
+		expect(previewKeyStep('ArrowUp', box)).toEqual({ x: 0, y: -5, w: 100, h: 50 });
+	});
+
+	it('zoom about the centre with + and −, and reset with 0', () => {
+		const inOnce = previewKeyStep('+', box) as { x: number; y: number; w: number; h: number };
+		expect(inOnce.w).toBeCloseTo(100 / 1.4, 9);
+		expect(inOnce.x + inOnce.w / 2).toBeCloseTo(50, 9);
+		expect((previewKeyStep('-', box) as { w: number }).w).toBeCloseTo(140, 9);
+		expect(previewKeyStep('0', box)).toBe('fit');
+	});
+
+	it('leave other keys to the page (Tab must still move focus)', () => {
+		expect(previewKeyStep('Tab', box)).toBeNull();
+		expect(previewKeyStep('a', box)).toBeNull();
 	});
 });

@@ -14,13 +14,14 @@ describe('dimension overrides', () => {
 
 	it('uses an overridden length and inset depth, and shows the formula values beside them', () => {
 		const plain = size(rect);
-		const tuned = size({ ...rect, overrides: { lengthMm: 28.5, insetDepthMm: 6 } });
+		const tuned = size({ ...rect, overrides: { lengthMm: 28.5, insetDepthMm: 4.5 } });
 		expect(tuned.patch).toMatchObject({ kind: 'rectangular', lengthMm: 28.5 });
-		expect(tuned.feed).toMatchObject({ kind: 'inset', insetDepthMm: 6 });
+		expect(tuned.feed).toMatchObject({ kind: 'inset', insetDepthMm: 4.5 });
 		expect(tuned.formulaValues!.lengthMm).toBe((plain.patch as { lengthMm: number }).lengthMm);
-		expect(tuned.formulaValues!.insetDepthMm).toBeGreaterThan(6);
+		// the formula's own depth (for the overridden patch) is kept beside the overridden one
+		expect(tuned.formulaValues!.insetDepthMm).toBeGreaterThan(4.5);
 		// L + 2ΔL with ΔL unchanged (Hammerstad's ΔL depends on W and h only; Balanis, Antenna Theory 4th ed., eq. 14-2; from memory)
-		expect(tuned.effectiveLengthMm - 28.5).toBeCloseTo(2 * plain.fringeExtensionMm, 9);
+		expect(tuned.effectiveLengthMm! - 28.5).toBeCloseTo(2 * plain.fringeExtensionMm!, 9);
 		// the artwork draws the overridden patch
 		const dims = buildArtwork(tuned).dimensions;
 		expect(dims.find((d) => d.id === 'patch-length')!.valueMm).toBeCloseTo(28.5, 9);

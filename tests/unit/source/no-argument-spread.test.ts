@@ -17,8 +17,8 @@ const src = join(root, 'src');
  */
 const knownBounded: Record<string, { count: number; why: string }> = {
 	'src/lib/geometry/boolean-ops.ts': { count: 3, why: "forwards its callers' region groups to polygon-clipping's variadic union/difference/intersection" },
-	'src/lib/server/db/index.ts': { count: 1, why: "forwards pg's query(...) arguments unchanged" },
-	'src/lib/formats/sweep/build.ts': { count: 1, why: 'the layers of one stack (a handful); the sweep-plan build belongs to a parallel change of issue 13' }
+	'src/lib/formats/readback/image-item.ts': { count: 2, why: 'a run of one polarity, in batches of at most RUN_BATCH (2000) regions per call' },
+	'src/lib/server/db/index.ts': { count: 1, why: "forwards pg's query(...) arguments unchanged" }
 };
 
 function files(dir: string): string[] {

@@ -25,14 +25,20 @@ function toRegion(item: ImageItem): Region | null {
  * A run of items of one polarity is applied in one operation ((image ∪ d1 ∪ … ∪ dk) − (c1 ∪ … ∪ cm) is the
  * same image as one item at a time), so an array's thousands of shapes cost one sweep, not one per shape.
  */
+/** Most regions handed to one polygon-clipping call (a bounded argument list). */
+const RUN_BATCH = 2000;
+
 export function composeImage(items: readonly ImageItem[]): LayerImage {
 	let image: Region[] = [];
 	let run: Region[] = [];
 	let runPolarity: ImageItem['polarity'] = 'dark';
 	const flush = () => {
-		if (run.length === 0) return;
-		if (runPolarity === 'dark') image = unionRegions(image, ...run.map((r) => [r]));
-		else if (image.length) image = differenceRegions(image, ...run.map((r) => [r]));
+		// in batches, so no call gets more arguments than RUN_BATCH however large the layer
+		for (let start = 0; start < run.length; start += RUN_BATCH) {
+			const groups = run.slice(start, start + RUN_BATCH).map((r) => [r]);
+			if (runPolarity === 'dark') image = unionRegions(image, ...groups);
+			else if (image.length) image = differenceRegions(image, ...groups);
+		}
 		run = [];
 	};
 	for (const item of items) {

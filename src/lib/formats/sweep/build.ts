@@ -19,7 +19,7 @@ function sweepStack(artwork: Artwork): readonly (StackLayer | SweepProbeEntry)[]
 	const hole = artwork.drills.find((d) => d.role === 'probe');
 	if (!probe || !hole) return slabs;
 	const bottomMm = slabs[0].zMm;
-	const topMm = Math.max(...slabs.map((l) => l.zMm + l.thicknessMm));
+	const topMm = slabs.reduce((top, l) => Math.max(top, l.zMm + l.thicknessMm), -Infinity);
 	const entry: SweepProbeEntry = { kind: 'probe', id: hole.id, ...probe, center: [hole.center[0], hole.center[1]], zMm: bottomMm, thicknessMm: topMm - bottomMm };
 	return [...slabs, entry];
 }

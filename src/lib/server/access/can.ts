@@ -11,6 +11,8 @@ export const actions = [
 	'sweep.write', // save sweep plans
 	'measurement.upload',
 	'measurement.delete', // delete a measured S11 file (recorded in the security log)
+	'field-check.start', // start a full-wave field check or a Homing study of a revision (viewers see the results)
+	'field-check.cancel', // cancel a queued or running one
 	'export.download', // download any format or the bundle, from the UI or the API
 	'export.waive', // record a waiver for design-rule violations
 	'token.manage-own' // create and revoke one's own API tokens for this team
@@ -18,7 +20,7 @@ export const actions = [
 export type Action = (typeof actions)[number];
 
 const viewer: readonly Action[] = ['team.read', 'export.download', 'token.manage-own'];
-const editor: readonly Action[] = [...viewer, 'design.create', 'revision.create', 'laminate.write', 'fab-profile.write', 'sweep.write', 'measurement.upload', 'measurement.delete', 'export.waive'];
+const editor: readonly Action[] = [...viewer, 'design.create', 'revision.create', 'laminate.write', 'fab-profile.write', 'sweep.write', 'measurement.upload', 'measurement.delete', 'field-check.start', 'field-check.cancel', 'export.waive'];
 const owner: readonly Action[] = [...editor, 'team.manage'];
 
 const grants: Record<TeamRole, ReadonlySet<Action>> = {

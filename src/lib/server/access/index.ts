@@ -2,7 +2,9 @@
 import { error } from '@sveltejs/kit';
 import type { TeamRole } from '../db/team.table';
 import { can, type Action } from './can';
+import { refusalSentence } from './refusal-sentence';
 
+export { refusalSentence } from './refusal-sentence';
 export { can, actions, canAsAccount, confirmedEmailSteps, CONFIRM_EMAIL_FIRST, type Action, type AccountState, type ConfirmedEmailStep } from './can';
 
 /**
@@ -11,5 +13,5 @@ export { can, actions, canAsAccount, confirmedEmailSteps, CONFIRM_EMAIL_FIRST, t
  */
 export function authorize(role: TeamRole | null | undefined, action: Action, what = 'Not found'): void {
 	if (!role) error(404, what);
-	if (!can(role, action)) error(403, `Your role (${role}) may not do this (${action})`);
+	if (!can(role, action)) error(403, refusalSentence(role, action));
 }

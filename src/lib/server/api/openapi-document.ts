@@ -11,10 +11,14 @@ import {
 	exportLogQuerySchema,
 	exportLogSchema,
 	exportParamsSchema,
+	fieldCheckListSchema,
+	fieldCheckParamsSchema,
+	fieldCheckStatusSchema,
 	problemSchema,
 	revisionDetailSchema,
 	revisionParamsSchema,
 	sizedDesignSchema,
+	startFieldCheckBodySchema,
 	sweepPlanParamsSchema,
 	teamListSchema,
 	teamParamsSchema,
@@ -165,6 +169,51 @@ function buildRegistry(): OpenAPIRegistry {
 			200: { description: 'The sweep document; x-sweep-point-count carries its point count', content: { 'application/json': { schema: sweepDocumentSchema } } },
 			...badInput,
 			...denied
+		}
+	});
+	registry.registerPath({
+		method: 'post',
+		path: '/designs/{designId}/revisions/{label}/simulations',
+		tags: ['field checks'],
+		summary: 'Start a field check (one full-wave simulation of the revision’s artwork) or, with homing, a Homing study — editors and owners; it runs on a worker, follow it at statusUrl',
+		request: { params: revisionParamsSchema, body: { required: true, content: { 'application/json': { schema: startFieldCheckBodySchema } } } },
+		responses: {
+			202: jsonResponse('Queued; the Location header and statusUrl name the status endpoint', fieldCheckStatusSchema),
+			...badInput,
+			...denied,
+			...forbidden,
+			429: problemResponse('The team already has as many field checks waiting or running as it may')
+		}
+	});
+	registry.registerPath({
+		method: 'get',
+		path: '/designs/{designId}/revisions/{label}/simulations',
+		tags: ['field checks'],
+		summary: 'The revision’s field checks and Homing studies, newest first (without results)',
+		request: { params: revisionParamsSchema },
+		responses: { 200: jsonResponse('The checks', fieldCheckListSchema), ...badInput, ...denied }
+	});
+	registry.registerPath({
+		method: 'get',
+		path: '/simulations/{id}',
+		tags: ['field checks'],
+		summary: 'A field check’s state and progress; when it succeeded, its S11, impedance, resonance, band and (for Homing) the iterations and tuned input',
+		request: { params: fieldCheckParamsSchema },
+		responses: { 200: jsonResponse('The check', fieldCheckStatusSchema), ...badInput, ...denied }
+	});
+	registry.registerPath({
+		method: 'post',
+		path: '/simulations/{id}/cancel',
+		tags: ['field checks'],
+		summary: 'Cancel a queued or running field check — editors and owners; a running engine is stopped within a few seconds',
+		request: { params: fieldCheckParamsSchema },
+		responses: {
+			200: jsonResponse('It was queued and is now cancelled', fieldCheckStatusSchema),
+			202: jsonResponse('It was running: its worker stops the engine on its next heartbeat and marks it cancelled', fieldCheckStatusSchema),
+			409: problemResponse('It had already ended'),
+			...badInput,
+			...denied,
+			...forbidden
 		}
 	});
 	registry.registerPath({

@@ -5,6 +5,7 @@ import type { DesignTable, RevisionTable } from './design.table';
 import type { EmailVerificationTable } from './email-verification.table';
 import type { ExportRecordTable } from './export-record.table';
 import type { FabProfileTable } from './fab-profile.table';
+import type { FieldCheckTable } from './field-check.table';
 import type { LaminateTable } from './laminate.table';
 import type { MeasurementTable } from './measurement.table';
 import type { PasswordResetTable } from './password-reset.table';
@@ -31,4 +32,5 @@ export interface Database {
 	measurement: MeasurementTable;
 	fab_profile: FabProfileTable;
 	rate_limit: RateLimitTable;
+	field_check: FieldCheckTable;
 }

@@ -2,7 +2,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Kysely } from 'kysely';
 import { InputError, parseWith } from '../../schemas/input-error';
-import { laminateInputSchema, laminatePropertiesSchema, type LaminateProperties } from '../../schemas/laminate';
+import { laminateInputSchema, laminatePropertiesSchema, type LaminateClass, type LaminateProperties } from '../../schemas/laminate';
 import type { Database } from '../db/database';
 import * as laminateQueries from '../db/laminate.queries';
 import { laminatePresets } from './laminate-presets';
@@ -13,6 +13,8 @@ export interface Laminate {
 	properties: LaminateProperties;
 	/** True for the presets that come with the product (not editable, not stored per team). */
 	builtIn: boolean;
+	/** For a preset: the material class its typical values come from, with ranges and source. */
+	materialClass?: LaminateClass;
 }
 
 export async function listLaminates(db: Kysely<Database>, teamId: string): Promise<Laminate[]> {

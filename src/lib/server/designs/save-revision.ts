@@ -19,6 +19,8 @@ export interface SaveRevisionOptions {
 	note?: string;
 	/** Set by a retune: the measurement this revision was retuned from (stored at insert; revisions never change). */
 	retunedFromMeasurementId?: string;
+	/** Set when made from a Homing study's tuned input: the study (stored at insert; revisions never change). */
+	homedFromFieldCheckId?: string;
 	/** The fab profile values this revision is checked against (stored at insert; absent: the database's built-in default). */
 	fabProfile?: FabProfile;
 }
@@ -52,6 +54,7 @@ export async function saveRevision(db: Kysely<Database>, opts: SaveRevisionOptio
 			note,
 			created_by: opts.userId,
 			...(opts.retunedFromMeasurementId ? { retuned_from_measurement_id: opts.retunedFromMeasurementId } : {}),
+			...(opts.homedFromFieldCheckId ? { homed_from_field_check_id: opts.homedFromFieldCheckId } : {}),
 			...(opts.fabProfile ? { fab_profile: JSON.stringify(opts.fabProfile) } : {})
 		});
 		return { id, label, parentLabel: parent.label };

@@ -4,7 +4,7 @@
 import { artworkBuildCount } from '$lib/artwork';
 import { bundle, gate, holdsFabFiles, prepareSized, readBack, writeFiles, type PreparedDesign } from '$lib/design';
 import type { Violation } from '$lib/drc';
-import { bundleFileName, contentTypeOfFile, exportFileName, formatIds, hashFiles, sha256Hex, type ExportFile, type ExportMeta, type FabNotesWaiver, type FormatId, type HashedFile } from '$lib/formats';
+import { bundleFileName, contentTypeOfFile, exportFileName, bundleFormatIds, hashFiles, sha256Hex, type ExportFile, type ExportMeta, type FabNotesWaiver, type FormatId, type HashedFile } from '$lib/formats';
 import type { ReadBackMismatch } from '$lib/formats/readback';
 import type { SizedDesign } from '$lib/rf';
 import type { ExportKind } from '$lib/schemas/api';
@@ -72,7 +72,7 @@ async function buildPrepared(input: ExportBuildInput, prepared: PreparedDesign, 
 	if (violations.length > 0 && !input.waiverReason) return { outcome: 'refused', violations };
 	const waiver = violations.length > 0 && input.waiverReason ? input.waiverReason : null;
 	const notesWaiver: FabNotesWaiver | undefined = waiver ? { reason: waiver, profileName: profile.name, violations: violations.map((v) => v.message) } : undefined;
-	const formats: readonly FormatId[] = kind === 'bundle' ? formatIds : [kind];
+	const formats: readonly FormatId[] = kind === 'bundle' ? bundleFormatIds : [kind];
 	const written = await writeFiles(prepared, formats, meta, notesWaiver ? { waiver: notesWaiver } : {});
 	// test hooks rewrite bytes on purpose: what they return is hashed again
 	const files = corruptFiles ? await hashFiles(corruptFiles(written)) : written;

@@ -14,8 +14,12 @@ import { goldenBundle, goldenDesign, goldenMeta } from '../../../fixtures/bundle
  * then check the new files by eye and record the new hash.
  * Re-recorded when the sweep JSON's stack turned bottom up (z increasing): only design.sweep.json
  * and the manifest naming its hash changed; every Gerber, drill, DXF, SVG and the notes kept their bytes.
+ * Re-recorded for the corrected first pass (issue 16): the patch 0.008 mm shorter (Hammerstad–Jensen
+ * εeff), the probe 0.69 mm further from the centre (loaded edge resistance), the ground 0.008 mm
+ * shorter, the sweep's new derived values, and two new warnings in the fab notes (small ground,
+ * probe hole against the connector pin). Checked file by file against the previous build.
  */
-const GOLDEN_SHA256 = '092a42be4991233ce2461e03eb83c6b7efb335948ad1d3978378b0ed618dcf39';
+const GOLDEN_SHA256 = 'b898aabda1aebab1d08f74831e8a174356d728769f9ce398b487dc8e93c46627';
 const sha = (b: Uint8Array) => createHash('sha256').update(b).digest('hex');
 
 describe('export bundle', () => {

@@ -15,6 +15,8 @@ const expected: Record<Action, [boolean, boolean, boolean]> = {
 	'sweep.write': [_, R, R],
 	'measurement.upload': [_, R, R],
 	'measurement.delete': [_, R, R],
+	'field-check.start': [_, R, R],
+	'field-check.cancel': [_, R, R],
 	'export.download': [R, R, R],
 	'export.waive': [_, R, R],
 	'token.manage-own': [R, R, R]

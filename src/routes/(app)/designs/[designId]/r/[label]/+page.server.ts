@@ -1,16 +1,67 @@
-// One revision: its stored input and results (the page draws the preview and the DXF from them).
-import { error } from '@sveltejs/kit';
+// One revision: its stored input and results (the page draws the preview and the DXF from them), and its Field check
+// panel: start a check or Homing, cancel one, make a revision from a Homing study's tuned input.
+import { error, fail, isHttpError, redirect } from '@sveltejs/kit';
 import { getDb } from '$lib/server/db';
 import { findDesignWithRevisions } from '$lib/server/designs';
 import { requireDesign } from '$lib/server/designs/design-access';
 import { revisionFabProfile } from '$lib/server/fab-profiles';
-import type { PageServerLoad } from './$types';
+import { cancelFieldCheck, loadFieldCheckPanel, requireFieldCheck, reviseFromHoming, startFieldCheck } from '$lib/server/field-checks';
+import { requireRevision } from '$lib/server/measurements';
+import { InputError, parseWith } from '$lib/schemas';
+import { startFieldCheckBodySchema } from '$lib/schemas/api';
+import { can } from '$lib/server/access';
+import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	const { design, canEdit } = await requireDesign(event, event.params.designId, 'team.read');
+	const { design, canEdit, role } = await requireDesign(event, event.params.designId, 'team.read');
 	const found = await findDesignWithRevisions(getDb(), design.id);
 	const revision = found?.revisions.find((r) => r.label === event.params.label);
 	if (!found || !revision) error(404, 'Revision not found');
 	const children = found.revisions.filter((r) => r.parentId === revision.id).map((r) => r.label);
-	return { design, revision, children, labels: found.revisions.map((r) => r.label), canEdit, fabCheck: await revisionFabProfile(getDb(), revision.id) };
+	return {
+		design,
+		revision,
+		children,
+		labels: found.revisions.map((r) => r.label),
+		canEdit,
+		fabCheck: await revisionFabProfile(getDb(), revision.id),
+		fieldCheck: { ...(await loadFieldCheckPanel(getDb(), revision, event.url.searchParams.get('check'))), canRun: can(role, 'field-check.start') }
+	};
+};
+
+const back = (designId: string, label: string, checkId: string) => `/designs/${designId}/r/${label}?check=${checkId}#field-check`;
+
+export const actions: Actions = {
+	startFieldCheck: async ({ locals, params, request }) => {
+		const { design, revision } = await requireRevision(locals.identity, params.designId, params.label, 'field-check.start');
+		const form = await request.formData();
+		let id: string;
+		try {
+			const body = parseWith(startFieldCheckBodySchema, { mode: String(form.get('mode') ?? 'standard'), homing: form.get('kind') === 'homing' });
+			({ id } = await startFieldCheck(getDb(), { design, revision, userId: locals.user!.id, kind: body.homing ? 'homing' : 'check', mode: body.mode }));
+		} catch (err) {
+			if (err instanceof InputError) return fail(400, { fieldCheck: { message: err.first.message } });
+			if (isHttpError(err) && err.status === 429) return fail(429, { fieldCheck: { message: err.body.message } });
+			throw err;
+		}
+		redirect(303, back(design.id, revision.label, id));
+	},
+	cancelFieldCheck: async ({ locals, params, request }) => {
+		const { check } = await requireFieldCheck(locals.identity, String((await request.formData()).get('checkId') ?? ''), 'field-check.cancel');
+		if (check.designId !== params.designId) error(404, 'Field check not found');
+		await cancelFieldCheck(getDb(), check.id, locals.user!.displayName);
+		redirect(303, back(params.designId, params.label, check.id));
+	},
+	reviseFromHoming: async ({ locals, params, request }) => {
+		const { check, design } = await requireFieldCheck(locals.identity, String((await request.formData()).get('studyId') ?? ''), 'revision.create');
+		if (check.designId !== params.designId) error(404, 'Field check not found');
+		let label: string;
+		try {
+			({ label } = await reviseFromHoming(getDb(), { design, study: check, userId: locals.user!.id }));
+		} catch (err) {
+			if (err instanceof InputError) return fail(422, { fieldCheck: { message: err.first.message } });
+			throw err;
+		}
+		redirect(303, `/designs/${design.id}/r/${label}`);
+	}
 };

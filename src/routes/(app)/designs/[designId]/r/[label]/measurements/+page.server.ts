@@ -1,9 +1,11 @@
-// A revision's measured S11 files: upload (multipart, ≤ 5 MB, strict), the plot of one (its thinned trace, never the raw samples),
-// its retune proposal, confirming it, and deleting a file (editors and owners, after a confirm step; recorded in the security log).
+// A revision's measured S11 files: upload (multipart, ≤ 5 MB, strict), the plot of one (its thinned trace, never the raw samples;
+// against the revision's newest full-wave check when there is one), its retune proposal, confirming it, and deleting a file
+// (editors and owners, after a confirm step; recorded in the security log).
 import { error, fail, redirect } from '@sveltejs/kit';
 import { can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
 import * as measurements from '$lib/server/measurements';
+import { findLatestFieldCheckResult, thinSamples } from '$lib/server/field-checks';
 import { InputError } from '$lib/schemas';
 import { TouchstoneError } from '$lib/formats/touchstone';
 import type { Actions, PageServerLoad } from './$types';
@@ -14,6 +16,7 @@ export const load: PageServerLoad = async ({ locals, params, url }) => {
 	const list = await measurements.listMeasurements(db, revision.id);
 	const chosenId = url.searchParams.get('m') ?? list[0]?.id;
 	const chosen = chosenId ? await measurements.findMeasurementView(db, revision.id, chosenId) : null;
+	const fullWave = chosen ? ((await findLatestFieldCheckResult(db, revision.id))?.result ?? null) : null;
 	let selected = null;
 	if (chosen) {
 		let proposal = null;
@@ -28,6 +31,8 @@ export const load: PageServerLoad = async ({ locals, params, url }) => {
 		selected = {
 			...facts,
 			points: trace,
+			// complex samples, thinned, only to draw against a full-wave check (the Smith chart needs S11 itself)
+			samples: fullWave ? thinSamples((await measurements.findMeasurement(db, revision.id, chosen.id))?.samples ?? []) : [],
 			proposal,
 			proposalError,
 			retunedInto: await measurements.listRetunedRevisions(db, chosen.id)
@@ -41,6 +46,7 @@ export const load: PageServerLoad = async ({ locals, params, url }) => {
 		list,
 		selected,
 		retunedFrom: await measurements.findRetuneSource(db, revision.id),
+		fullWave,
 		canUpload: can(role, 'measurement.upload'),
 		canRetune: can(role, 'revision.create'),
 		canDelete: can(role, 'measurement.delete'),
