@@ -60,7 +60,7 @@ export async function writeFiles(prepared: PreparedDesign, formats: readonly For
 	for (const format of writeOrder.map(formatEntry)) {
 		if (!formats.includes(format.id) || !format.appliesTo(prepared.artwork)) continue;
 		const context = { earlierFileNames: files.map((f) => f.name), manifestName, ...(options.waiver ? { waiver: options.waiver } : {}) };
-		files.push(...format.write(prepared, meta, context));
+		for (const file of format.write(prepared, meta, context)) files.push(file);
 	}
 	const hashed = await hashFiles(files);
 	const [manifest] = await hashFiles([{ name: manifestName, bytes: new TextEncoder().encode(serializeManifest(buildManifest(hashed, meta))) }]);

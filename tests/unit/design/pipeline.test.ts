@@ -4,7 +4,7 @@ import { describe, expect, it, vi, beforeEach } from 'vitest';
 import * as artworkModule from '../../../src/lib/artwork';
 import { bundle, gate, holdsFabFiles, prepare, prepareSized, readBack, writeFiles } from '../../../src/lib/design';
 import { canonicalJson } from '../../../src/lib/design/canonical-json';
-import { formatIds } from '../../../src/lib/formats/format-ids';
+import { bundleFormatIds, formatIds } from '../../../src/lib/formats/format-ids';
 import { formatRegistry } from '../../../src/lib/formats/registry';
 import { size } from '../../../src/lib/rf';
 import { parseDesignInput } from '../../../src/lib/schemas';
@@ -44,7 +44,7 @@ describe('the design pipeline', () => {
 	});
 
 	it('draws the artwork once for the whole bundle, the one-point sweep included', async () => {
-		await download(prepare(parseDesignInput(goldenDesign)), formatIds);
+		await download(prepare(parseDesignInput(goldenDesign)), bundleFormatIds);
 		expect(builds()).toBe(1);
 	});
 
@@ -54,10 +54,10 @@ describe('the design pipeline', () => {
 			Array.isArray(v) ? v.map(reorder) : v && typeof v === 'object' ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => a.length - b.length || (a < b ? -1 : 1)).map(([k, x]) => [k, reorder(x)])) : v;
 		const stored = JSON.parse(JSON.stringify(reorder(size(parseDesignInput(goldenDesign)))));
 		vi.mocked(artworkModule.buildArtwork).mockClear();
-		const fromStore = await download(prepareSized(stored), formatIds);
+		const fromStore = await download(prepareSized(stored), bundleFormatIds);
 		expect(builds()).toBe(1);
 		// and the bytes are those of a fresh design: the reorder changes nothing a user downloads
-		expect(fromStore).toEqual(await download(prepare(parseDesignInput(goldenDesign)), formatIds));
+		expect(fromStore).toEqual(await download(prepare(parseDesignInput(goldenDesign)), bundleFormatIds));
 	});
 
 	it('draws the artwork once per CLI export', async () => {

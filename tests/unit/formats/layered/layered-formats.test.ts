@@ -3,7 +3,7 @@ import Ajv2020 from 'ajv/dist/2020';
 import DxfParser from 'dxf-parser';
 import { describe, expect, it } from 'vitest';
 import { buildArtwork } from '../../../../src/lib/artwork';
-import { buildDxfCommands, buildSweepDocument, formatIds, createExportMeta, dxfLayerName, serializeSweep, sweepJsonSchema, toDxf, toGerber } from '../../../../src/lib/formats';
+import { buildDxfCommands, buildSweepDocument, createExportMeta, dxfLayerName, serializeSweep, sweepJsonSchema, toDxf, toGerber, bundleFormatIds } from '../../../../src/lib/formats';
 import { size } from '../../../../src/lib/rf';
 import { layeredCases } from '../../../fixtures/designs/layered-cases';
 import { readBackGerber } from '../gerber/read-back';
@@ -74,7 +74,7 @@ describe('layered designs and arrays in every format', () => {
 
 	it('writes the whole bundle of a 2×4 aperture-coupled array: three copper Gerbers, DXF, SVG, sweep, notes with the bonding film', async () => {
 		const c = cases.find((x) => x.name === '2×4 aperture-coupled array')!;
-		const files = await writeFiles(prepareSized(c.sized), formatIds, meta);
+		const files = await writeFiles(prepareSized(c.sized), bundleFormatIds, meta);
 		const names = files.map((f) => f.name);
 		expect(names).toEqual(
 			['copper-top.gbr', 'copper-inner-1.gbr', 'copper-bottom.gbr', 'profile.gbr', 'drawing.dxf', 'drawing.svg', 'design.sweep.json', 'array-pattern.json', 'fab-notes.txt', 'manifest.json'].map((n) => `layered-demo-A.${n}`)
