@@ -16,7 +16,7 @@ export const sizedDerivedSchema = z.looseObject({
 	patch: z.looseObject({ kind: z.enum(patchShapes) }),
 	feed: z.looseObject({ kind: z.enum(allFeedKinds) }),
 	ground: z.looseObject({ widthMm: z.number().min(0), lengthMm: z.number().min(0), marginMm: z.number().min(0) }),
-	estimates: z.record(z.string(), z.number()).meta({ description: 'Bandwidth, efficiency, gain and the rest: numbers, units in their keys' })
+	estimates: z.object({ bandwidthFraction: z.number(), gainDbi: z.number() }).catchall(z.number()).meta({ description: 'Bandwidth, efficiency, gain and the rest: numbers, units in their keys' })
 });
 
 export const sizedDesignSchema = sizedDerivedSchema
