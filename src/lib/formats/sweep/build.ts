@@ -55,51 +55,76 @@ function withoutControlCharactersInName(raw: unknown): unknown {
 	return typeof name === 'string' ? { ...raw, name: replaceControlCharacters(name) } : raw;
 }
 
-/**
- * Builds the sweep. Throws InputError for a bad base design or plan (including more than
- * MAX_SWEEP_POINTS points) before sizing anything; a point that sizing or geometry refuses is
- * recorded as refused, with the reason. `known` is a design already drawn: a point that sizes to exactly
- * it takes its artwork instead of drawing it again.
- */
-export function buildSweepDocument(baseRaw: unknown, planRaw: unknown, meta: ExportMeta, known?: { readonly sized: SizedDesign; readonly artwork: Artwork }): SweepDocument {
+type KnownDesign = { readonly sized: SizedDesign; readonly artwork: Artwork };
+
+/** One point of the sweep: sized and drawn, or refused with the reason (a bad point never stops the sweep). */
+function sweepPoint(base: unknown, parameters: Record<string, number>, index: number, known?: KnownDesign): SweepPoint {
+	let doc: unknown = base;
+	for (const [field, value] of Object.entries(parameters)) doc = withField(doc, field, value);
+	try {
+		const sized = size(doc);
+		// a point that is the known design itself (the one-point sweep of an export) reuses its artwork
+		const artwork = known && JSON.stringify(sized) === JSON.stringify(known.sized) ? known.artwork : buildArtwork(sized);
+		const { input: _input, warnings, ...derived } = sized;
+		void _input;
+		return {
+			index,
+			status: 'sized',
+			parameters,
+			derived,
+			warnings: warnings.map((w) => ({ code: w.code, message: w.message })),
+			board: artwork.board,
+			layers: artwork.layers,
+			drills: artwork.drills,
+			stack: sweepStack(artwork)
+		};
+	} catch (e) {
+		if (e instanceof InputError) return { index, status: 'refused', parameters, error: { kind: 'input', path: e.first.path, message: e.first.message } };
+		if (e instanceof GeometryError) return { index, status: 'refused', parameters, error: { kind: 'geometry', path: e.code, message: e.message } };
+		throw e;
+	}
+}
+
+/** The parsed base and plan, every point's parameters, and the document without its points. */
+function startSweep(baseRaw: unknown, planRaw: unknown, meta: ExportMeta) {
 	const base = parseDesignInput(withoutControlCharactersInName(baseRaw));
 	const plan = parseSweepPlan(planRaw);
-	const points: SweepPoint[] = sweepCombinations(plan).map((parameters, index) => {
-		let doc: unknown = base;
-		for (const [field, value] of Object.entries(parameters)) doc = withField(doc, field, value);
-		try {
-			const sized = size(doc);
-			// a point that is the known design itself (the one-point sweep of an export) reuses its artwork
-			const artwork = known && JSON.stringify(sized) === JSON.stringify(known.sized) ? known.artwork : buildArtwork(sized);
-			const { input: _input, warnings, ...derived } = sized;
-			void _input;
-			return {
-				index,
-				status: 'sized',
-				parameters,
-				derived,
-				warnings: warnings.map((w) => ({ code: w.code, message: w.message })),
-				board: artwork.board,
-				layers: artwork.layers,
-				drills: artwork.drills,
-				stack: sweepStack(artwork)
-			};
-		} catch (e) {
-			if (e instanceof InputError) return { index, status: 'refused', parameters, error: { kind: 'input', path: e.first.path, message: e.first.message } };
-			if (e instanceof GeometryError) return { index, status: 'refused', parameters, error: { kind: 'geometry', path: e.code, message: e.message } };
-			throw e;
-		}
-	});
-	return {
+	const combinations = sweepCombinations(plan);
+	const head: Omit<SweepDocument, 'points'> = {
 		$schema: SWEEP_SCHEMA_PATH,
 		format: SWEEP_FORMAT,
 		formatVersion: SWEEP_FORMAT_VERSION,
 		design: { name: meta.designName, slug: meta.designSlug, revision: meta.revisionLabel, revisionDate: meta.revisionDate, software: `${SOFTWARE_NAME} ${meta.softwareVersion}` },
 		base,
 		plan,
-		pointCount: points.length,
-		points
+		pointCount: combinations.length
 	};
+	return { base, combinations, head };
+}
+
+/**
+ * Builds the sweep. Throws InputError for a bad base design or plan (including more than
+ * MAX_SWEEP_POINTS points) before sizing anything; a point that sizing or geometry refuses is
+ * recorded as refused, with the reason. `known` is a design already drawn: a point that sizes to exactly
+ * it takes its artwork instead of drawing it again.
+ */
+export function buildSweepDocument(baseRaw: unknown, planRaw: unknown, meta: ExportMeta, known?: KnownDesign): SweepDocument {
+	const { base, combinations, head } = startSweep(baseRaw, planRaw, meta);
+	return { ...head, points: combinations.map((parameters, index) => sweepPoint(base, parameters, index, known)) };
+}
+
+/**
+ * The bytes of `serializeSweep(buildSweepDocument(…))`, as text pieces made one point at a time, so a
+ * 10 000-point file is written without ever holding all its points (or all its text) at once. Throws
+ * InputError before the first piece, as buildSweepDocument does.
+ */
+export function* sweepTextPieces(baseRaw: unknown, planRaw: unknown, meta: ExportMeta): Generator<string, void, undefined> {
+	const { base, combinations, head } = startSweep(baseRaw, planRaw, meta);
+	// the document with an empty point list ends in `"points":[]}`; the points go between the brackets
+	const shell = JSON.stringify({ ...head, points: [] });
+	yield shell.slice(0, -2);
+	for (let index = 0; index < combinations.length; index++) yield (index > 0 ? ',' : '') + JSON.stringify(sweepPoint(base, combinations[index], index));
+	yield ']}\n';
 }
 
 /** Compact JSON with a final newline: the bytes of a .sweep.json file. */
