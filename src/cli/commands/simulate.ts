@@ -98,7 +98,7 @@ function readDocument(path: string): unknown {
 }
 
 /** The printed summary of one check (samples go to the Touchstone file, not the terminal). */
-function summaryOf(r: FieldCheckResult) {
+export function summaryOf(r: FieldCheckResult) {
 	return {
 		engine: r.engine,
 		mode: r.mode,
