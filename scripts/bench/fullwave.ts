@@ -1,16 +1,26 @@
-// `npm run bench -- --fullwave [--cases a,b] [--skip-homing]`: Field check timings on the real openEMS, printed as Markdown.
-// Standard and accurate mode per case (accurate's shift is the mesh-convergence figure), then one Homing study (quick mode).
+// `npm run bench -- --fullwave [--cases a,b] [--skip-homing] [--pattern-only]`: Field check timings on the real openEMS,
+// printed as Markdown. Standard and accurate mode per case (accurate's shift is the mesh-convergence figure), one Homing
+// study (quick mode), and the far field against the textbook patch (validation: full-wave directivity against the
+// published design example's two-slot directivity) and against the sizing's estimate for every case.
 import { readFileSync } from 'node:fs';
 import { cpus } from 'node:os';
 import { join } from 'node:path';
 import { rootDir } from '../lib/config.ts';
 import { ensureOpenEms } from '../lib/openems.ts';
 import { runFieldCheck, runHoming } from '../../src/worker/fullwave/index.ts';
+import { size } from '../../src/lib/rf/index.ts';
 import type { FieldCheckResult } from '../../src/lib/schemas/field-check.ts';
 
 const CASES = ['rectangular-inset', 'rectangular-probe', 'circular-probe'];
 
 const fixture = (name: string) => JSON.parse(readFileSync(join(rootDir, 'tests/fixtures/simulation', name, 'input.json'), 'utf8'));
+/**
+ * The validation patch: Balanis's rectangular design example (Antenna Theory 4th ed., Example 14.1; from memory):
+ * εr 2.2, h 1.588 mm, 10 GHz → W 11.86 mm, L 9.06 mm, both pinned as overrides; probe-fed, on a ground 15 mm
+ * (half a wavelength) beyond the patch so the finite board stays close to the textbook's infinite ground.
+ */
+const VALIDATION_PATCH = 'simulation-validation/balanis-10ghz';
+const validationInput = () => JSON.parse(readFileSync(join(rootDir, 'tests/fixtures', VALIDATION_PATCH, 'input.json'), 'utf8'));
 const ghz = (hz: number | null | undefined) => (hz ? (hz / 1e9).toFixed(4) : '—');
 const pct = (f: number | null | undefined) => (f === null || f === undefined ? '—' : `${(f * 100).toFixed(2)} %`);
 
@@ -22,6 +32,7 @@ export async function runFullwaveBench(argv: string[]): Promise<void> {
 	if (!ensureOpenEms()) throw new Error('openEMS is needed for the Field check benchmark');
 	const casesArg = argv.indexOf('--cases');
 	const cases = casesArg >= 0 ? argv[casesArg + 1].split(',') : CASES;
+	if (argv.includes('--pattern-only')) return console.log((await farFieldStudy(cases)).join('\n'));
 	const lines = [
 		`Field check on openEMS, ${cpus().length} cores (${cpus()[0]?.model ?? 'unknown CPU'}), Node.js ${process.version}, ${new Date().toISOString().slice(0, 10)}.`,
 		'',
@@ -46,5 +57,43 @@ export async function runFullwaveBench(argv: string[]): Promise<void> {
 		lines.push('', '| step | parameter | value mm | resonance GHz | S11 at target dB |', '| ---: | --- | ---: | ---: | ---: |');
 		for (const it of h.iterations) lines.push(`| ${it.step} | ${it.parameter} | ${it.value.toFixed(3)} | ${ghz(it.resonanceHz)} | ${it.s11AtTargetDb.toFixed(1)} |`);
 	}
+	lines.push('', ...(await farFieldStudy(cases)));
 	console.log(lines.join('\n'));
+}
+
+const dbi = (v: number | null | undefined) => (v === null || v === undefined ? '—' : v.toFixed(2));
+
+/**
+ * The far field, standard mode: every case at its target, and the validation patch at its own simulated resonance
+ * (a first run finds it; the second records the near field there, same geometry, probe position pinned).
+ */
+async function farFieldStudy(cases: string[]): Promise<string[]> {
+	const lines = [
+		'| case | at GHz | resonance GHz | directivity dBi (full-wave) | sizing estimate dBi | gain dBi (full-wave) | sizing gain dBi | radiation efficiency | E/H peak θ | seconds |',
+		'| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |'
+	];
+	const add = (name: string, input: unknown, r: FieldCheckResult) => {
+		const est = size(input).estimates;
+		const p = r.pattern;
+		const peak = (cut: NonNullable<FieldCheckResult['pattern']>['ePlane']) => cut.levels.reduce((b, l) => (l.levelDb > b.levelDb ? l : b), cut.levels[0]).thetaDeg;
+		lines.push(
+			`| ${name} | ${ghz(r.targetFrequencyHz)} | ${ghz(r.resonance?.frequencyHz)} | ${dbi(p?.directivityDbi)} | ${est.directivityDbi.toFixed(2)} | ${dbi(p?.gainDbi)} | ${est.gainDbi.toFixed(2)} | ${p?.radiationEfficiency === null || !p ? '—' : `${(p.radiationEfficiency * 100).toFixed(0)} %`} | ${p ? `${peak(p.ePlane)}° / ${peak(p.hPlane)}°` : '—'} | ${r.runSeconds.toFixed(0)} |`
+		);
+		console.error(lines[lines.length - 1]);
+	};
+	for (const name of cases) {
+		console.error(`far field, ${name}, standard…`);
+		add(name, fixture(name), await runFieldCheck(fixture(name), { mode: 'standard', budgetSeconds: 7200 }, {}));
+	}
+	console.error('far field, validation patch, standard (two runs)…');
+	const input = validationInput();
+	const first = await runFieldCheck(input, { mode: 'standard', budgetSeconds: 7200 }, {});
+	add('textbook 10 GHz patch, at its target', input, first);
+	if (first.resonance) {
+		const sized = size(input);
+		const offsetYMm = sized.feed.kind === 'probe' ? sized.feed.offsetYMm : undefined;
+		const atResonance = { ...input, frequencyHz: first.resonance.frequencyHz, overrides: { ...input.overrides, ...(offsetYMm === undefined ? {} : { probeOffsetMm: offsetYMm }) } };
+		add('textbook 10 GHz patch, at its simulated resonance', atResonance, await runFieldCheck(atResonance, { mode: 'standard', budgetSeconds: 7200 }, {}));
+	}
+	return lines;
 }

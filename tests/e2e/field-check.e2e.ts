@@ -54,6 +54,12 @@ test('an editor runs a field check and sees its progress, the S11 plot and the S
 	await expect(smith.locator('circle[data-smith-r="1"]')).toHaveCount(1);
 	await expect(smith.locator('path[data-trace="fullwave"]')).toHaveAttribute('d', /^M[\d.]+,[\d.]+(L[\d.]+,[\d.]+){50,}/);
 	await expect(panel.getByTestId('impedance-plot').locator('path[data-trace="fullwave-r"]')).toHaveAttribute('d', /^M.+L/);
+	// The far field: both cuts drawn all round the polar chart (θ −180° to 180° in 2° steps), the broadside figures beside them.
+	const farField = panel.getByTestId('field-pattern');
+	for (const cut of ['e-plane', 'h-plane']) await expect(farField.locator(`path[data-cut="${cut}"]`)).toHaveAttribute('d', /^M[\d.]+,[\d.]+(L[\d.]+,[\d.]+){170,}Z$/);
+	await expect(farField.locator('[data-figure="directivity"]')).toHaveText(/^\d+\.\d\d dBi$/);
+	await expect(farField.locator('[data-figure="gain"]')).toHaveText(/^-?\d+\.\d\d dBi$/);
+	await expect(farField.locator('[data-figure="estimate"]')).toContainText('dBi');
 
 	// The endpoint the page polled says the same, with the session.
 	const status = await page.request.get(`/api/v1/simulations/${checkId}`);
@@ -62,4 +68,8 @@ test('an editor runs a field check and sees its progress, the S11 plot and the S
 	expect(body.state).toBe('succeeded');
 	expect(body.result.engine.name).toBe('openEMS');
 	expect(body.result.samples.length).toBeGreaterThan(50);
+	// a thin-to-moderate rectangular patch over a ground radiates a broadside beam of about 6–8 dBi (Balanis, Antenna
+	// Theory 4th ed., §14.2.5; from memory); a finite ground and the quick mesh widen the range to 4–10 dBi
+	expect(body.result.pattern.directivityDbi).toBeGreaterThan(4);
+	expect(body.result.pattern.directivityDbi).toBeLessThan(10);
 });

@@ -20,7 +20,9 @@ export const help = `Usage: npm run cli -- simulate design.json [--quick|--accur
 
 Builds the design's artwork, meshes it and runs the openEMS full-wave engine locally (no server, no
 database), then prints JSON: the simulated resonance in Hz and its deviation from the target, the
-−10 dB band, S11 at the target, the minimum VSWR, the mesh (cells, timesteps) and the run time.
+−10 dB band, S11 at the target, the minimum VSWR, the mesh (cells, timesteps), the run time and the
+far field at the target (farField: broadside and peak directivity, gain, radiation efficiency; the
+E/H-plane cuts are in the app and the API, not on the terminal).
 
   --quick             coarse mesh (λ/12 in the dielectric): a first look in about a minute
   --accurate          standard mesh and 1.5× refined; reports how far refinement moved the resonance
@@ -96,7 +98,7 @@ function readDocument(path: string): unknown {
 }
 
 /** The printed summary of one check (samples go to the Touchstone file, not the terminal). */
-function summaryOf(r: FieldCheckResult) {
+export function summaryOf(r: FieldCheckResult) {
 	return {
 		engine: r.engine,
 		mode: r.mode,
@@ -111,7 +113,17 @@ function summaryOf(r: FieldCheckResult) {
 		mesh: r.mesh,
 		energyDecayDb: r.energyDecayDb,
 		runSeconds: r.runSeconds,
-		refinement: r.refinement
+		refinement: r.refinement,
+		farField: r.pattern
+			? {
+					frequencyHz: r.pattern.frequencyHz,
+					directivityDbi: r.pattern.directivityDbi,
+					peakDirectivityDbi: r.pattern.peakDirectivityDbi,
+					gainDbi: r.pattern.gainDbi,
+					radiationEfficiency: r.pattern.radiationEfficiency,
+					ePlanePhiDeg: r.pattern.ePlane.phiDeg
+				}
+			: null
 	};
 }
 

@@ -41,8 +41,35 @@ export const meshStatisticsSchema = z.strictObject({
 });
 export type MeshStatistics = z.infer<typeof meshStatisticsSchema>;
 
-/** A pattern cut: gain (or directivity) in dBi against θ in one plane through broadside. */
-export const patternCutSchema = z.array(z.strictObject({ thetaDeg: z.number(), levelDbi: z.number() }));
+/**
+ * A pattern cut: the level against θ (−180° to 180°, 0° = broadside) in the plane φ = `phiDeg`
+ * through broadside, in dB relative to the pattern's peak (0 dB at the peak, floored at −40 dB).
+ */
+export const patternCutSchema = z.strictObject({
+	phiDeg: z.number(),
+	levels: z.array(z.strictObject({ thetaDeg: z.number().min(-180).max(180), levelDb: z.number().max(1e-9) })).min(3)
+});
+export type PatternCut = z.infer<typeof patternCutSchema>;
+
+/**
+ * The far field of a Field check at the target frequency (the engine's near-to-far-field transform
+ * over a box around the board): broadside (θ = 0) and peak directivity, gain with the port's
+ * accepted power (G = D·P_rad/P_accepted; the mismatch is not counted), and the E- and H-plane cuts.
+ */
+export const fieldCheckPatternSchema = z.strictObject({
+	frequencyHz: z.number().positive(),
+	directivityDbi: z.number(),
+	peakDirectivityDbi: z.number(),
+	gainDbi: z.number().nullable(),
+	/** P_rad / P_accepted: dielectric, copper and surface-wave loss; null when the port accepted no power. */
+	radiationEfficiency: z.number().nonnegative().nullable(),
+	radiatedPowerW: z.number().nonnegative(),
+	acceptedPowerW: z.number().positive().nullable(),
+	/** The cut in the plane of the broadside field's polarisation (the patch's resonant dimension). */
+	ePlane: patternCutSchema,
+	hPlane: patternCutSchema
+});
+export type FieldCheckPattern = z.infer<typeof fieldCheckPatternSchema>;
 
 export const fieldCheckResultSchema = z.strictObject({
 	engine: z.strictObject({ name: z.string(), version: z.string() }),
@@ -63,16 +90,8 @@ export const fieldCheckResultSchema = z.strictObject({
 	/** The −10 dB band around the resonance, interpolated; null when S11 never reaches −10 dB. */
 	band: z.strictObject({ lowHz: z.number().positive(), highHz: z.number().positive() }).nullable(),
 	minimumVswr: z.number().min(1),
-	/** Broadside directivity and the E/H-plane cuts from the near-to-far-field transform, when it ran. */
-	pattern: z
-		.strictObject({
-			frequencyHz: z.number().positive(),
-			directivityDbi: z.number(),
-			gainDbi: z.number().nullable(),
-			ePlane: patternCutSchema,
-			hPlane: patternCutSchema
-		})
-		.nullable(),
+	/** The far field at the target (directivity, gain, E/H-plane cuts); null when it was not computed (results stored before it existed). */
+	pattern: fieldCheckPatternSchema.nullable(),
 	/** Accurate mode only: resonance of the standard mesh, and how far refinement moved it (fraction). */
 	refinement: z.strictObject({ standardResonanceHz: z.number().positive(), shiftFraction: z.number() }).nullable()
 });

@@ -230,7 +230,7 @@ export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number,
 	const z: AxisFeatures = { fromMm: groundZMm - boundaryMm, toMm: topZMm + boundaryMm, edges: [], fixedMm: fixedZ, fineFromMm: groundZMm, fineToMm: topZMm };
 	const mesh = buildMesh({ x, y, z }, { x: planXY, y: planXY, z: planZ });
 
-	const nearFarField = options.nearFarField ?? false;
+	const nearFarField = options.nearFarField ?? true;
 	return {
 		mode: options.mode,
 		refinement,
@@ -244,16 +244,17 @@ export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number,
 		mesh,
 		properties,
 		port,
-		nearFieldBox: nearFarField ? nearFieldBoxOf(mesh, boardW, boardL, groundZMm, topZMm) : null
+		nearFieldBox: nearFarField ? nearFieldBoxOf(mesh, boardW, boardL, groundZMm, topZMm, targetHz) : null
 	};
 }
 
 /** A box halfway between the board and the boundaries, snapped to mesh lines, for the far-field transform. */
-function nearFieldBoxOf(mesh: FieldModel['mesh'], boardW: number, boardL: number, groundZMm: number, topZMm: number): FieldModel['nearFieldBox'] {
+function nearFieldBoxOf(mesh: FieldModel['mesh'], boardW: number, boardL: number, groundZMm: number, topZMm: number, targetHz: number): FieldModel['nearFieldBox'] {
 	const snap = (lines: readonly number[], want: number) => lines.reduce((best, l) => (Math.abs(l - want) < Math.abs(best - want) ? l : best), lines[0]);
 	const mid = (lines: readonly number[], inner: number, side: -1 | 1) => snap(lines, (inner + (side < 0 ? lines[0] : lines[lines.length - 1])) / 2);
 	return {
 		fromMm: [mid(mesh.xMm, 0, -1), mid(mesh.yMm, 0, -1), mid(mesh.zMm, groundZMm, -1)],
-		toMm: [mid(mesh.xMm, boardW, 1), mid(mesh.yMm, boardL, 1), mid(mesh.zMm, topZMm, 1)]
+		toMm: [mid(mesh.xMm, boardW, 1), mid(mesh.yMm, boardL, 1), mid(mesh.zMm, topZMm, 1)],
+		frequenciesHz: [targetHz]
 	};
 }

@@ -5,9 +5,15 @@ import type { FieldModel, ModelPrimitive, ModelProperty } from './types';
 /** The engine's file names for the port's voltage and current time series. */
 export const PORT_VOLTAGE_FILE = 'port_ut1';
 export const PORT_CURRENT_FILE = 'port_it1';
-/** Time-domain near-field dumps on the six faces of the near-field box (HDF5, for nf2ff). */
-export const NEAR_FIELD_E_DUMP = 'nf2ff_E';
-export const NEAR_FIELD_H_DUMP = 'nf2ff_H';
+/**
+ * Frequency-domain near-field dumps on the six faces of the near-field box (HDF5, for the engine's
+ * far-field tool): the engine writes one file per face, `<name>_<face>.h5`, faces 0–5 in the order
+ * x-min, x-max, y-min, y-max, z-min, z-max.
+ */
+export const NEAR_FIELD_E_DUMP = 'nearbox_E';
+export const NEAR_FIELD_H_DUMP = 'nearbox_H';
+/** The near-field dump file of one face (0–5) as the engine names it. */
+export const nearFieldDumpFile = (dump: string, face: number) => `${dump}_${face}.h5`;
 
 /** Fixed number formatting: 12 significant digits, shortest form, never "-0". */
 export function formatNumber(value: number): string {
@@ -22,6 +28,7 @@ const attrs = (pairs: Record<string, string | number>) =>
 		.map(([k, v]) => `${k}="${typeof v === 'number' ? formatNumber(v) : esc(v)}"`)
 		.join(' ');
 const point = (tag: string, p: readonly number[]) => `<${tag} ${attrs({ X: p[0], Y: p[1], Z: p[2] })}/>`;
+const lines = (values: readonly number[]) => values.map(formatNumber).join(',');
 const triple = (a: number, b: number, c: number) => `${formatNumber(a)},${formatNumber(b)},${formatNumber(c)}`;
 
 function primitive(p: ModelPrimitive, indent: string): string[] {
@@ -123,17 +130,16 @@ function nearFieldDumps(model: FieldModel, firstId: number): string[] {
 		[[x0, y0, z0], [x1, y1, z0]],
 		[[x0, y0, z1], [x1, y1, z1]]
 	];
-	// DumpType 0/1 = E/H field in time; DumpMode 1 = cell-interpolated; FileType 1 = HDF5
+	// DumpType 10/11 = E/H phasors at FD_Samples (a running DFT); DumpMode 1 = cell-interpolated; FileType 1 = HDF5
 	return [NEAR_FIELD_E_DUMP, NEAR_FIELD_H_DUMP].flatMap((name, i) => [
-		`    <DumpBox ${attrs({ ID: firstId + i, Name: name, DumpType: i, DumpMode: 1, FileType: 1 })}>`,
+		`    <DumpBox ${attrs({ ID: firstId + i, Name: name, DumpType: 10 + i, DumpMode: 1, FileType: 1 })}>`,
 		'      <Primitives>',
 		...faces.flatMap(([from, to]) => [`        <Box Priority="0">`, `          ${point('P1', from)}`, `          ${point('P2', to)}`, `        </Box>`]),
 		'      </Primitives>',
+		`      <FD_Samples>${lines(nf.frequenciesHz)}</FD_Samples>`,
 		'    </DumpBox>'
 	]);
 }
-
-const lines = (values: readonly number[]) => values.map(formatNumber).join(',');
 
 /** Serialises the model as the XML the engine reads; deterministic (fixed number formatting and order). */
 export function serializeFieldModel(model: FieldModel): string {

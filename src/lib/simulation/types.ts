@@ -75,10 +75,16 @@ export interface ModelPort {
 	readonly referenceImpedanceOhm: number;
 }
 
-/** The near-field box for the far-field transform (time-domain E and H dumps on its six faces). */
+/**
+ * The near-field box for the far-field transform: the engine records the E and H phasors at
+ * `frequenciesHz` (a running DFT during the run) on the box's six faces, one HDF5 file per face;
+ * the far-field transform then integrates them. The box lies in air, around the whole board.
+ */
 export interface ModelNearFieldBox {
 	readonly fromMm: readonly [x: number, y: number, z: number];
 	readonly toMm: readonly [x: number, y: number, z: number];
+	/** Frequencies of the recorded phasors (the target). */
+	readonly frequenciesHz: readonly number[];
 }
 
 /** Everything the engine needs for one Field check run. */
@@ -108,7 +114,7 @@ export interface FieldModelOptions {
 	mode: FieldCheckMode;
 	/** Extra mesh refinement factor (default 1). */
 	refinement?: number;
-	/** Record time-domain near-field dumps for a far-field transform (default false: the runner does not transform them yet). */
+	/** Record the near-field box at the target frequency for the far-field transform (default true). */
 	nearFarField?: boolean;
 }
 

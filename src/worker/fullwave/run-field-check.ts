@@ -20,6 +20,7 @@ import {
 	type FieldModel
 } from '../../lib/simulation';
 import { BudgetExceededError, EngineFailedError, EngineMissingError, FieldCheckAbortedError } from './errors';
+import { computeFarField } from './far-field';
 import { ENGINE_INSTALL_HINT, engineBinary, findEngine } from './find-engine';
 
 export interface FieldCheckContext {
@@ -42,6 +43,8 @@ interface EngineRun {
 	runSeconds: number;
 	voltageText: string;
 	currentText: string;
+	/** The far field at the target, when the model recorded a near-field box. */
+	pattern: FieldCheckResult['pattern'];
 }
 
 /** The engine's progress line: "[@ 40s] Timestep: 10846 || Speed: 18.4 MC/s (…) || Energy: ~5.43e-16 (-18.13dB)". */
@@ -138,8 +141,13 @@ async function runEngine(
 		}
 	};
 	const [voltageText, currentText] = await Promise.all([read(PORT_VOLTAGE_FILE), read(PORT_CURRENT_FILE)]);
+	let pattern: FieldCheckResult['pattern'] = null;
+	if (model.nearFieldBox) {
+		report(1, `${progressSpan.label}: far-field transform`);
+		pattern = await computeFarField(dir, model.targetFrequencyHz, { voltage: parsePortSeries(voltageText), current: parsePortSeries(currentText) }, context.signal);
+	}
 	report(1, `${progressSpan.label}: done`);
-	return { model, energyDecayDb: energyDb, timesteps, runSeconds: (performance.now() - started) / 1000, voltageText, currentText };
+	return { model, energyDecayDb: energyDb, timesteps, runSeconds: (performance.now() - started) / 1000, voltageText, currentText, pattern };
 }
 
 function resultOf(run: EngineRun, engineVersion: string, mode: FieldCheckOptions['mode']): FieldCheckResult {
@@ -160,7 +168,7 @@ function resultOf(run: EngineRun, engineVersion: string, mode: FieldCheckOptions
 		energyDecayDb: Number.isFinite(run.energyDecayDb) ? run.energyDecayDb : -300,
 		runSeconds: run.runSeconds,
 		...analysis,
-		pattern: null,
+		pattern: run.pattern,
 		refinement: null
 	};
 }
@@ -179,8 +187,9 @@ export async function runFieldCheck(input: unknown, options: Partial<FieldCheckO
 	const zRef = referenceImpedanceOf(sized);
 	const models =
 		opts.mode === 'accurate'
-			? [buildFieldModel(artwork, zRef, { mode: 'accurate', refinement: 1, nearFarField: false }), buildFieldModel(artwork, zRef, { mode: 'accurate', refinement: ACCURATE_REFINEMENT, nearFarField: false })]
-			: [buildFieldModel(artwork, zRef, { mode: opts.mode, refinement: context.refinement ?? 1, nearFarField: false })];
+			? // the far field of the refined run only: the standard run gives the resonance shift
+				[buildFieldModel(artwork, zRef, { mode: 'accurate', refinement: 1, nearFarField: false }), buildFieldModel(artwork, zRef, { mode: 'accurate', refinement: ACCURATE_REFINEMENT })]
+			: [buildFieldModel(artwork, zRef, { mode: opts.mode, refinement: context.refinement ?? 1 })];
 	const engine = await findEngine();
 	if (!engine) throw new EngineMissingError(`the full-wave engine (${engineBinary()}) is not installed; ${ENGINE_INSTALL_HINT}`);
 

@@ -4,6 +4,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { FieldCheckResult } from '../../../src/lib/schemas/field-check';
 
 const ROOT = resolve(__dirname, '../../..');
 let dir: string;
@@ -52,5 +53,53 @@ describe('cli simulate', () => {
 		const r = cli([join(dir, 'good.json'), '--quick'], { FRINGEFIELD_OPENEMS: '/nonexistent/openEMS' });
 		expect(r.code).toBe(4);
 		expect(r.stderr).toMatch(/apt-get install openems/);
+	});
+});
+
+describe('cli simulate: the printed summary', () => {
+	const base: FieldCheckResult = {
+		engine: { name: 'openEMS', version: '0.0.35' },
+		mode: 'quick',
+		targetFrequencyHz: 2.45e9,
+		referenceImpedanceOhm: 50,
+		mesh: { cellsX: 2, cellsY: 2, cellsZ: 2, cellCount: 8, smallestCellMm: 0.4, largestCellMm: 4, timesteps: 10 },
+		energyDecayDb: -40,
+		runSeconds: 1,
+		samples: [
+			{ frequencyHz: 2.4e9, s11Re: 0.1, s11Im: 0, resistanceOhm: 61, reactanceOhm: 0 },
+			{ frequencyHz: 2.5e9, s11Re: 0.2, s11Im: 0, resistanceOhm: 75, reactanceOhm: 0 }
+		],
+		resonance: null,
+		deviationFraction: null,
+		s11AtTargetDb: -15,
+		band: null,
+		minimumVswr: 1.2,
+		pattern: null,
+		refinement: null
+	};
+
+	it('prints the far field’s broadside figures (not the cuts) under farField, and null when there is none', async () => {
+		const { summaryOf } = await import('../../../src/cli/commands/simulate');
+		const { analyzeFarField, FAR_FIELD_PHI_DEG, FAR_FIELD_THETA_DEG } = await import('../../../src/lib/simulation');
+		expect(summaryOf(base).farField).toBeNull();
+		// a short dipole along y (D = 1.5, Balanis, Antenna Theory 4th ed., §4.2; standard result) with half its accepted power radiated
+		const n = FAR_FIELD_THETA_DEG.length * FAR_FIELD_PHI_DEG.length;
+		const eThetaRe = new Float64Array(n);
+		const ePhiRe = new Float64Array(n);
+		FAR_FIELD_PHI_DEG.forEach((p, j) =>
+			FAR_FIELD_THETA_DEG.forEach((t, i) => {
+				eThetaRe[j * FAR_FIELD_THETA_DEG.length + i] = Math.cos((t * Math.PI) / 180) * Math.sin((p * Math.PI) / 180);
+				ePhiRe[j * FAR_FIELD_THETA_DEG.length + i] = Math.cos((p * Math.PI) / 180);
+			})
+		);
+		const sphere = { frequencyHz: 2.45e9, radiusM: 1, thetaDeg: FAR_FIELD_THETA_DEG, phiDeg: FAR_FIELD_PHI_DEG, eThetaRe, eThetaIm: new Float64Array(n), ePhiRe, ePhiIm: new Float64Array(n) };
+		const radiated = analyzeFarField(sphere, null).radiatedPowerW;
+		const pattern = analyzeFarField(sphere, 2 * radiated);
+		const printed = summaryOf({ ...base, pattern }).farField!;
+		expect(printed.directivityDbi).toBeCloseTo(1.76, 2);
+		expect(printed.gainDbi).toBeCloseTo(1.76 - 3.01, 2);
+		expect(printed.radiationEfficiency).toBeCloseTo(0.5, 9);
+		expect(printed.ePlanePhiDeg).toBe(90);
+		expect(Object.keys(printed)).not.toContain('ePlane');
 	});
 });

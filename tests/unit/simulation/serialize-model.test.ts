@@ -101,14 +101,42 @@ describe('serializeFieldModel', () => {
 		expect(all(parseXml(serializeFieldModel(fixtureModel('rectangular-inset'))), 'Metal')).toHaveLength(0);
 	});
 
-	it('adds near-field dump boxes on six faces only when asked', () => {
-		const base = fixtureModel('rectangular-probe');
-		expect(serializeFieldModel(base)).not.toContain('DumpBox');
-		const box = { fromMm: [-10, -10, -5] as const, toMm: [80, 80, 20] as const };
-		const doc = parseXml(serializeFieldModel({ ...base, nearFieldBox: box }));
+	it.each(fixtureCases())('records %s on a near-field box around the board at the target frequency, for the far-field transform', (name) => {
+		const model = fixtureModel(name);
+		const input = fixtureInput(name) as { frequencyHz: number };
+		const doc = parseXml(serializeFieldModel(model));
 		const dumps = all(doc, 'DumpBox');
-		expect(dumps.map((d) => d.attributes.DumpType)).toEqual(['0', '1']);
-		for (const d of dumps) expect(all(d, 'Box')).toHaveLength(6);
+		// DumpType 10/11: E/H phasors at FD_Samples, FileType 1: HDF5 (CSXCAD's AddDump, as Debian's python3-openems nf2ff.py records its box)
+		expect(dumps.map((d) => [d.attributes.Name, d.attributes.DumpType, d.attributes.FileType])).toEqual([
+			['nearbox_E', '10', '1'],
+			['nearbox_H', '11', '1']
+		]);
+		for (const d of dumps) {
+			expect(Number(one(d, 'FD_Samples').text)).toBe(input.frequencyHz);
+			const faces = all(d, 'Box').map((b) => ['P1', 'P2'].map((p) => ['X', 'Y', 'Z'].map((k) => Number(one(b, p).attributes[k]))));
+			expect(faces).toHaveLength(6);
+			// each face is flat along its own axis (x-min, x-max, y-min, y-max, z-min, z-max)
+			faces.forEach(([from, to], i) => expect(from[Math.floor(i / 2)]).toBe(to[Math.floor(i / 2)]));
+		}
+		const box = model.nearFieldBox!;
+		const mesh = [model.mesh.xMm, model.mesh.yMm, model.mesh.zMm];
+		const board = all(one(doc, 'Material'), 'Box')[0];
+		for (let axis = 0; axis < 3; axis++) {
+			const lines = mesh[axis];
+			// on mesh lines, strictly inside the absorbing boundaries, around the whole board (dielectric and copper)
+			expect(lines).toContain(box.fromMm[axis]);
+			expect(lines).toContain(box.toMm[axis]);
+			expect(box.fromMm[axis]).toBeGreaterThan(lines[0]);
+			expect(box.toMm[axis]).toBeLessThan(lines[lines.length - 1]);
+			const key = ['X', 'Y', 'Z'][axis];
+			expect(box.fromMm[axis]).toBeLessThan(Number(one(board, 'P1').attributes[key]));
+			expect(box.toMm[axis]).toBeGreaterThan(Number(one(board, 'P2').attributes[key]));
+		}
+	});
+
+	it('writes no near-field box when the far field is not wanted', () => {
+		const base = fixtureModel('rectangular-probe');
+		expect(serializeFieldModel({ ...base, nearFieldBox: null })).not.toContain('DumpBox');
 	});
 
 	it('formats numbers with 12 significant digits and never writes -0 or non-finite values', () => {
