@@ -14,7 +14,7 @@ export const IMPEDANCE_VSWR_LIMIT = 2;
 /**
  * Fractional axial-ratio bandwidth of a single-feed CP patch (nearly-square or corner-truncated) whose
  * two orthogonal modes, each of quality factor Q, are split for exact CP at the centre:
- * ARBW = (AR − 1)/(Q·√AR) with AR the field ratio (AR ≤ 3 dB: AR = √2, ARBW ≈ 0.348/Q).
+ * ARBW = (AR − 1)/(Q·√AR) with AR the field ratio (AR ≤ 3 dB: AR = 10^(3/20) ≈ 1.413, ARBW ≈ 0.347/Q).
  * Langston & Jackson, "Impedance, axial-ratio, and receive-power bandwidths of microstrip antennas",
  * IEEE Trans. Antennas Propag. 52(10), 2004 (from memory). It has the same form as the VSWR ≤ S band
  * (S − 1)/(Q·√S) of one mode.
