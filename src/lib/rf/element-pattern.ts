@@ -54,9 +54,8 @@ export function elementFieldMagnitude(g: ElementPatternGeometry, thetaRad: numbe
 	if (g.model === 'two-slot') {
 		const f = (theta: number) =>
 			sinc(((k0 * g.heightMm) / 2) * Math.cos(theta)) * sinc(((k0 * g.widthMm) / 2) * Math.sin(theta) * Math.cos(phiRad)) * Math.cos(((k0 * g.effectiveLengthMm) / 2) * Math.sin(theta) * Math.sin(phiRad));
-		const eTheta = Math.sin(phiRad) * f(thetaRad);
-		const ePhi = ct * Math.cos(phiRad) * f(thetaRad);
-		return Math.hypot(eTheta, ePhi) / f(0);
+		const here = f(thetaRad);
+		return Math.hypot(Math.sin(phiRad) * here, ct * Math.cos(phiRad) * here) / f(0);
 	}
 	const x = k0 * g.effectiveRadiusMm * st;
 	const j0 = besselJ(0, x);
