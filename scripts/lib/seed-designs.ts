@@ -53,7 +53,9 @@ function demoDesigns(): DemoDesign[] {
 		shape: 'truncated-corner',
 		feed: 'inset',
 		handedness: 'rhcp',
-		substrate: laminate('preset:ptfe-glass-0.787')
+		substrate: laminate('preset:ptfe-glass-0.787'),
+		// the whole 5.8 GHz ISM band: wider than one corner-cut patch's usable CP band, so the demo shows the warning
+		bandToCover: { lowerHz: 5.725e9, upperHz: 5.875e9 }
 	};
 	const coupon = {
 		name: 'Circular test coupon 5.2 GHz',

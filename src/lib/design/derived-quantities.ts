@@ -1,5 +1,5 @@
 // The derived values of a sized design as labelled rows with display units, shared by the panel and the diff.
-import type { SizedDesign } from '../rf';
+import { elementPattern, elementPatternGeometry, polarisationBandsOf, type FrequencyBand, type SizedDesign } from '../rf';
 import { ghzFromHz } from '../units';
 
 export interface Quantity {
@@ -145,6 +145,23 @@ export function derivedQuantities(s: SizedDesign): Quantity[] {
 		const yz = width(af.halfPowerBeamwidthYzDeg);
 		add('Estimates', 'beamwidthXzDeg', 'Beamwidth x–z (−3 dB)', xz.v, xz.u, 3);
 		add('Estimates', 'beamwidthYzDeg', 'Beamwidth y–z (−3 dB)', yz.v, yz.u, 3);
+	}
+	// a single patch's pattern and a CP patch's bands, derived from the stored sizing (old revisions too)
+	const geometry = elementPatternGeometry(s);
+	if (geometry) {
+		const pattern = elementPattern(geometry);
+		const width = (deg: number | null) => (deg === null ? { v: 'wider than 180°', u: '' } : { v: deg, u: '°' });
+		const e = width(pattern.halfPowerBeamwidthEDeg);
+		const h = width(pattern.halfPowerBeamwidthHDeg);
+		add('Estimates', 'beamwidthEDeg', 'Beamwidth E-plane (−3 dB)', e.v, e.u, 3);
+		add('Estimates', 'beamwidthHDeg', 'Beamwidth H-plane (−3 dB)', h.v, h.u, 3);
+	}
+	const cp = polarisationBandsOf(s);
+	if (cp) {
+		const mhz = (b: FrequencyBand | null) => (b === null ? 'none' : `${(b.lowerHz / 1e6).toFixed(1)}–${(b.upperHz / 1e6).toFixed(1)}`);
+		add('Estimates', 'axialRatioBandMHz', 'Axial ratio ≤ 3 dB band', mhz(cp.axialRatioBand), 'MHz');
+		add('Estimates', 'cpImpedanceBandMHz', 'VSWR ≤ 2 band (both modes)', mhz(cp.impedanceBand), 'MHz');
+		add('Estimates', 'usableBandMHz', 'Usable CP band (overlap)', mhz(cp.usableBand), 'MHz');
 	}
 	return q;
 }

@@ -41,6 +41,8 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'frequencyGHz', path: 'frequencyHz', label: 'Target frequency f₀', unit: 'GHz', kind: 'number', group: 'Design', scale: ghz, step: 'any' },
 	{ name: 'shape', path: 'shape', label: 'Patch shape', unit: '', kind: 'choice', group: 'Design', choices: patchShapes },
 	{ name: 'handedness', path: 'handedness', label: 'Circular polarisation sense', unit: '', kind: 'choice', group: 'Design', choices: handednesses },
+	{ name: 'bandToCover.lowerGHz', path: 'bandToCover.lowerHz', label: 'Band to cover, from', unit: 'GHz', kind: 'number', group: 'Design', scale: ghz, optional: true, hint: 'optional; blank = none', step: 'any' },
+	{ name: 'bandToCover.upperGHz', path: 'bandToCover.upperHz', label: 'Band to cover, to', unit: 'GHz', kind: 'number', group: 'Design', scale: ghz, optional: true, hint: 'optional; blank = none', step: 'any' },
 	{ name: 'substrate.relativePermittivity', path: 'substrate.relativePermittivity', label: 'Permittivity εr', unit: '', kind: 'number', group: 'Substrate', step: 'any' },
 	{ name: 'substrate.lossTangent', path: 'substrate.lossTangent', label: 'Loss tangent tanδ', unit: '', kind: 'number', group: 'Substrate', step: 'any' },
 	{ name: 'substrate.heightMm', path: 'substrate.heightMm', label: 'Thickness h', unit: 'mm', kind: 'number', group: 'Substrate', step: 'any' },

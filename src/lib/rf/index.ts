@@ -50,3 +50,29 @@ export {
 	type ArrayGeometry
 } from './array-factor';
 export { PARASITIC_SPACING_WAVELENGTHS, NETWORK_CLEARANCE_LINE_WIDTHS } from './size-extended';
+export {
+	elementPattern,
+	elementPatternGeometry,
+	elementFieldMagnitude,
+	elementCutMagnitude,
+	elementCutDb,
+	elementHalfPowerBeamwidthDeg,
+	type ElementPattern,
+	type ElementPatternGeometry,
+	type PatternPlane
+} from './element-pattern';
+export {
+	polarisationBands,
+	polarisationBandsOf,
+	axialRatioBandwidthFraction,
+	twoModeImpedanceBandwidthFraction,
+	bandAround,
+	bandOverlap,
+	bandCovers,
+	bandWidthHz,
+	isCircularlyPolarisedShape,
+	AXIAL_RATIO_LIMIT_DB,
+	IMPEDANCE_VSWR_LIMIT,
+	type FrequencyBand,
+	type PolarisationBands
+} from './polarisation-bands';

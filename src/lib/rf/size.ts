@@ -19,6 +19,7 @@ import { squarePatch, lineModelOf } from './square-patch';
 import { truncatedDiagonalFor, truncationLegMm } from './truncated-corner-patch';
 import { resonanceAccuracy as resonanceAccuracyFor } from './first-pass-accuracy';
 import { textbookModel } from './textbook-model';
+import { bandAround, isCircularlyPolarisedShape, polarisationBands, type FrequencyBand } from './polarisation-bands';
 
 /** Notch gap default: equal to the feed-line width on each side (common practice, no source). */
 export const NOTCH_GAP_LINE_WIDTHS = 1;
@@ -265,8 +266,9 @@ function sizeValid(d: DesignInput, assumed?: WarningFacts['assumedLossTangent'])
 		groundLengthMm: ground.lengthMm,
 		bandwidthFraction: core.estimates.bandwidthFraction,
 		qualityFactor: core.estimates.qualityFactor,
-		circularlyPolarised: d.shape === 'truncated-corner' || d.shape === 'nearly-square',
+		circularlyPolarised: isCircularlyPolarisedShape(d.shape),
 		accuracy: resonanceAccuracy,
+		...(d.bandToCover ? { bandCover: { wanted: d.bandToCover, usable: usableBandOf(d, core.estimates) } } : {}),
 		feedPoint: { resistanceOhm: d.feed === 'edge' ? core.edgeResistanceOhm : d.targetImpedanceOhm, lineImpedanceOhm: d.feedLineImpedanceOhm },
 		...fed.facts
 	});
@@ -294,6 +296,12 @@ function sizeValid(d: DesignInput, assumed?: WarningFacts['assumedLossTangent'])
 		warnings,
 		...(formulaValues ? { formulaValues } : {})
 	};
+}
+
+/** The band a design is usable over: a CP patch's AR ≤ 3 dB and VSWR ≤ 2 overlap, else its VSWR ≤ 2 band. */
+function usableBandOf(d: DesignInput, estimates: SizedEstimates): FrequencyBand | null {
+	if (isCircularlyPolarisedShape(d.shape)) return polarisationBands(d.frequencyHz, estimates.qualityFactor).usableBand;
+	return bandAround(d.frequencyHz, estimates.bandwidthFraction);
 }
 
 /** tanδ of a document whose missing value has already been filled by withLossTangent. */

@@ -20,7 +20,8 @@ export type WarningCode =
 	| 'feed-mismatch'
 	| 'probe-pin-fit'
 	| 'assumed-loss-tangent'
-	| 'outside-model-range';
+	| 'outside-model-range'
+	| 'band-not-covered';
 
 export interface SizingWarning {
 	code: WarningCode;

@@ -1,5 +1,6 @@
 // The flat report of a sized design: every quantity with its unit in its key, as the CLI and API print it.
 import type { DesignInput } from '../schemas';
+import { polarisationBandsOf } from './polarisation-bands';
 import type { SizedDesign, SizingWarning } from './sized-design';
 
 export interface SizingReport {
@@ -97,6 +98,21 @@ export function sizingReport(sized: SizedDesign): SizingReport {
 		},
 		warnings: sized.warnings
 	});
+	// a CP patch: its AR ≤ 3 dB, two-mode VSWR ≤ 2 and usable bands (derived from Q here, so stored revisions show them too)
+	const cp = polarisationBandsOf(sized);
+	if (cp) {
+		out.circularPolarisation = {
+			note: 'Estimates from the two-mode cavity model (Langston & Jackson, 2004): AR ≤ 3 dB and VSWR ≤ 2 bands centred on the target; the usable band is where both hold.',
+			axialRatioBandwidthFraction: cp.axialRatioBandwidthFraction,
+			axialRatioBandLowerHz: cp.axialRatioBand.lowerHz,
+			axialRatioBandUpperHz: cp.axialRatioBand.upperHz,
+			impedanceBandwidthFraction: cp.impedanceBandwidthFraction,
+			impedanceBandLowerHz: cp.impedanceBand.lowerHz,
+			impedanceBandUpperHz: cp.impedanceBand.upperHz,
+			usableBandLowerHz: cp.usableBand?.lowerHz ?? null,
+			usableBandUpperHz: cp.usableBand?.upperHz ?? null
+		};
+	}
 	// present only for layered designs and arrays, so single-layer reports keep their keys
 	if (sized.layerStack) out.layerStack = sized.layerStack;
 	if (sized.parasitic) out.parasitic = sized.parasitic;

@@ -1,5 +1,6 @@
 // The warnings a sized design carries: each a code and a sentence a designer can act on, judged from the design's own physics.
 import type { ResonanceAccuracy, SizingWarning } from './sized-design';
+import { bandCovers, bandWidthHz, type FrequencyBand } from './polarisation-bands';
 import { surfaceWaveLimitRatio } from './surface-wave';
 
 /** Radiation efficiency below which a design is flagged (the issue's "say 60 %"; common practice, no source). */
@@ -51,7 +52,12 @@ export interface WarningFacts {
 	probe?: { edgeDistanceMm: number; padRadiusMm: number; drillDiameterMm: number };
 	/** The resistance the feed presents where it meets the line, and the line's impedance. */
 	feedPoint?: { resistanceOhm: number; lineImpedanceOhm: number };
+	/** The document's band to cover and the design's usable band (CP: AR ≤ 3 dB and VSWR ≤ 2 overlap; else VSWR ≤ 2). */
+	bandCover?: { wanted: FrequencyBand; usable: FrequencyBand | null };
 }
+
+const mhz = (hz: number) => `${(hz / 1e6).toFixed(1)} MHz`;
+const bandText = (b: FrequencyBand) => `${mhz(b.lowerHz)}–${mhz(b.upperHz)}`;
 
 const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
 
@@ -149,6 +155,18 @@ export function sizingWarnings(f: WarningFacts): SizingWarning[] {
 		out.push({
 			code: 'probe-pin-fit',
 			message: `At its lower tolerance (−${PLATED_HOLE_TOLERANCE_MM} mm) the ${f.probe.drillDiameterMm} mm plated probe hole finishes at ${(f.probe.drillDiameterMm - PLATED_HOLE_TOLERANCE_MM).toFixed(2)} mm, smaller than a common connector's ${CONNECTOR_PIN_DIAMETER_MM} mm centre pin. Check your connector's pin and drill at least ${(CONNECTOR_PIN_DIAMETER_MM + PLATED_HOLE_TOLERANCE_MM).toFixed(2)} mm.`
+		});
+	}
+	if (f.bandCover && !bandCovers(f.bandCover.usable, f.bandCover.wanted)) {
+		const { wanted, usable } = f.bandCover;
+		const what = f.circularlyPolarised ? 'usable CP band (axial ratio ≤ 3 dB and VSWR ≤ 2)' : 'VSWR ≤ 2 band';
+		const short = bandWidthHz(usable) < bandWidthHz(wanted);
+		out.push({
+			code: 'band-not-covered',
+			message:
+				usable === null
+					? `The estimated ${what} is empty, so it cannot cover ${bandText(wanted)}.`
+					: `The estimated ${what} is ${bandText(usable)} (${mhz(bandWidthHz(usable))}), ${short ? 'narrower than' : 'off'} the band to cover ${bandText(wanted)} (${mhz(bandWidthHz(wanted))}). ${short ? 'A thicker or lower-εr substrate lowers Q and widens it' : 'Move the target frequency to the middle of the band to cover'}${f.circularlyPolarised && short ? ', or use a dual-feed CP patch' : ''}.`
 		});
 	}
 	if (f.circularlyPolarised && f.qualityFactor < CP_MINIMUM_Q) {

@@ -198,6 +198,19 @@ export type DimensionOverrides = z.infer<typeof dimensionOverridesSchema>;
 
 const isPowerOfTwo = (n: number) => Number.isInteger(n) && n >= 1 && (n & (n - 1)) === 0;
 
+/**
+ * The band the antenna must serve, e.g. 5.725–5.875 GHz. Optional; when given, sizing warns if the
+ * design's usable band (a CP patch: where AR ≤ 3 dB and VSWR ≤ 2 overlap; otherwise the VSWR ≤ 2
+ * band) does not hold all of it.
+ */
+export const bandToCoverSchema = z.strictObject({
+	/** Lower edge of the band to cover. */
+	lowerHz: bounded(100e6, 100e9),
+	/** Upper edge of the band to cover; above lowerHz. */
+	upperHz: bounded(100e6, 100e9)
+});
+export type BandToCover = z.infer<typeof bandToCoverSchema>;
+
 /** A design's name: shown in every file of its exports (titles, comments, the fab notes). */
 export const designNameSchema = z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).superRefine(plainText('name'));
 
@@ -234,7 +247,9 @@ const designInputObject = z.strictObject({
 	/** Repeat the element as a 1×N or N×M array with a corporate feed. */
 	array: arrayOptionsSchema.optional(),
 	/** Explicit dimensions that replace the sizing formulas' values (see dimensionOverridesSchema). */
-	overrides: dimensionOverridesSchema.optional()
+	overrides: dimensionOverridesSchema.optional(),
+	/** The band the antenna must serve (see bandToCoverSchema); absent: none stated. */
+	bandToCover: bandToCoverSchema.optional()
 });
 
 export const designInputSchema = designInputObject.superRefine((d, ctx) => {
@@ -261,6 +276,9 @@ export const designInputSchema = designInputObject.superRefine((d, ctx) => {
 	}
 	layeredRules(d, ctx);
 	overrideRules(d, ctx);
+	if (d.bandToCover && !(d.bandToCover.upperHz > d.bandToCover.lowerHz)) {
+		ctx.addIssue({ code: 'custom', path: ['bandToCover', 'upperHz'], input: d.bandToCover.upperHz, message: `must be above bandToCover.lowerHz (${d.bandToCover.lowerHz})` });
+	}
 	if (d.probe.clearanceDiameterMm <= d.probe.drillDiameterMm) {
 		ctx.addIssue({
 			code: 'custom',

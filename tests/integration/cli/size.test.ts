@@ -82,3 +82,25 @@ describe('cli size', () => {
 		for (const flag of ['--shape', '--feed', '--frequency-ghz', '--er', '--height-mm', '--loss-tangent', '--target-ohm', '--copper-um', '--ground-margin-mm']) expect(r.out).toContain(flag);
 	});
 });
+
+describe('cli size: a CP design with a band to cover', () => {
+	const doc = { name: 'FPV', frequencyHz: 5.8e9, shape: 'truncated-corner', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.001 }, bandToCover: { lowerHz: 5.725e9, upperHz: 5.875e9 } };
+
+	it('prints the circularPolarisation bands, echoes bandToCover in the input and warns band-not-covered', () => {
+		const r = cli(['-'], JSON.stringify(doc));
+		expect(r.code).toBe(0);
+		const report = JSON.parse(r.out);
+		expect(report.input.bandToCover).toEqual(doc.bandToCover);
+		const cp = report.circularPolarisation;
+		expect(cp.axialRatioBandLowerHz).toBeLessThan(5.8e9);
+		expect(cp.axialRatioBandUpperHz).toBeGreaterThan(5.8e9);
+		expect(cp.usableBandUpperHz - cp.usableBandLowerHz).toBeLessThan(doc.bandToCover.upperHz - doc.bandToCover.lowerHz);
+		expect(report.warnings.map((w: { code: string }) => w.code)).toContain('band-not-covered');
+	});
+
+	it('refuses a band whose upper edge is below its lower edge with exit code 2, naming the field', () => {
+		const r = cli(['-'], JSON.stringify({ ...doc, bandToCover: { lowerHz: 5.875e9, upperHz: 5.725e9 } }));
+		expect(r.code).toBe(2);
+		expect(r.err).toContain('bandToCover.upperHz');
+	});
+});

@@ -30,3 +30,21 @@ describe('derived values of layered designs and arrays', () => {
 		expect(rows('4×4 inset array').has('arraySpacingYMm')).toBe(true);
 	});
 });
+
+describe('derived values of a single patch: its pattern and, for CP, its bands', () => {
+	const cp = { frequencyHz: 5.8e9, shape: 'truncated-corner', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.001 } };
+	it('lists the E- and H-plane beamwidths of a single patch, and not of an array', () => {
+		const single = new Map(derivedQuantities(size({ ...cp, shape: 'rectangular' })).map((q) => [q.key, q]));
+		expect(single.get('beamwidthEDeg')?.unit).toBe('°');
+		expect(Number(single.get('beamwidthHDeg')?.value)).toBeGreaterThan(60);
+		const array = new Map(derivedQuantities(size({ ...cp, shape: 'rectangular', array: { columns: 4 } })).map((q) => [q.key, q]));
+		expect(array.has('beamwidthEDeg')).toBe(false);
+	});
+
+	it('lists the AR, two-mode VSWR and usable bands of a CP patch in MHz, and none for a linear one', () => {
+		const rowsCp = new Map(derivedQuantities(size(cp)).map((q) => [q.key, q]));
+		expect(rowsCp.get('axialRatioBandMHz')?.value).toMatch(/^57\d\d\.\d–58\d\d\.\d$/);
+		expect(rowsCp.get('usableBandMHz')?.value).toBe(rowsCp.get('axialRatioBandMHz')?.value);
+		expect(new Map(derivedQuantities(size({ ...cp, shape: 'rectangular' })).map((q) => [q.key, q])).has('axialRatioBandMHz')).toBe(false);
+	});
+});

@@ -87,3 +87,20 @@ describe('editor form values for layered designs and arrays', () => {
 		expect(fieldApplies(slot, 'rectangular', 'proximity-coupled')).toBe(false);
 	});
 });
+
+describe('the band to cover in the editor', () => {
+	it('turns the two GHz fields into bandToCover in Hz and back, and leaves it out when both are blank', () => {
+		const values = { ...formValuesFromInput(parseDesignInput({ frequencyHz: 5.8e9, shape: 'truncated-corner', substrate: { relativePermittivity: 2.2, heightMm: 0.787 } })) };
+		expect(documentFromFormValues(values)).not.toHaveProperty('bandToCover');
+		const doc = documentFromFormValues({ ...values, 'bandToCover.lowerGHz': '5.725', 'bandToCover.upperGHz': '5.875' });
+		expect(doc.bandToCover).toEqual({ lowerHz: 5.725e9, upperHz: 5.875e9 });
+		const back = formValuesFromInput(parseDesignInput(doc));
+		expect([back['bandToCover.lowerGHz'], back['bandToCover.upperGHz']]).toEqual(['5.725', '5.875']);
+	});
+
+	it('shows an upper edge below the lower one beside the upper field, in GHz', () => {
+		const issues = fieldIssues([{ path: 'bandToCover.upperHz', value: 5.7e9, message: 'must be above bandToCover.lowerHz (5875000000)' }]);
+		expect(issues[0].field).toBe('bandToCover.upperGHz');
+		expect(designFormFields.find((f) => f.name === 'bandToCover.lowerGHz')?.unit).toBe('GHz');
+	});
+});
