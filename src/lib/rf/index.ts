@@ -45,8 +45,11 @@ export {
 	arrayFactorCutDb,
 	arrayPattern,
 	gratingLobeLimitWavelengths,
+	gratingLobeCondition,
 	halfPowerBeamwidthDeg,
 	broadsideLineDirectivityApprox,
 	type ArrayGeometry
 } from './array-factor';
 export { PARASITIC_SPACING_WAVELENGTHS, NETWORK_CLEARANCE_LINE_WIDTHS } from './size-extended';
+export { conductorLossDbPerMm, dielectricLossDbPerMm, lineLossDbPerMm, surfaceResistanceOhm, type LossyLine } from './microstrip-loss';
+export { corporateFeedPath, feedPathLengthMm, feedLineLossDb, feedMismatchLossDb, type FeedPathInput, type FeedPathLevel, type FeedLineMedium } from './corporate-feed-budget';

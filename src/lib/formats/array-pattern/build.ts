@@ -18,6 +18,8 @@ export interface ArrayPatternDocument {
 	readonly gratingLobeLimitWavelengths: number;
 	readonly arrayFactorDirectivityDbi: number;
 	readonly gainDbi: number;
+	/** The terms of gainDbi: element gain + 10·log10 N − feed-line loss − mismatch loss (dB). */
+	readonly gainBreakdown: { elementGainDbi: number; arrayGainDb: number; feedLossDb: number; mismatchLossDb: number };
 	readonly halfPowerBeamwidthXzDeg: number | null;
 	readonly halfPowerBeamwidthYzDeg: number | null;
 	/** What the numbers are: isotropic elements, no coupling, no feed loss. */
@@ -43,9 +45,10 @@ export function buildArrayPatternDocument(sized: SizedDesign, meta: ExportMeta):
 		gratingLobeLimitWavelengths: a.gratingLobeLimitWavelengths,
 		arrayFactorDirectivityDbi: a.factor.arrayFactorDirectivityDbi,
 		gainDbi: a.factor.gainDbi,
+		gainBreakdown: a.factor.gainBreakdown,
 		halfPowerBeamwidthXzDeg: a.factor.halfPowerBeamwidthXzDeg,
 		halfPowerBeamwidthYzDeg: a.factor.halfPowerBeamwidthYzDeg,
-		note: 'Array factor of isotropic elements; gain = element gain estimate + 10·log10(element count), without mutual coupling or feed-network loss. Estimates, not measurements.',
+		note: 'Array factor of isotropic elements; gain = element gain estimate + 10·log10(element count) − the corporate feed\'s line loss (conductor + dielectric along the routed path) − the mismatch loss at the port, without mutual coupling. Estimates, not measurements.',
 		pattern: a.factor.pattern
 	};
 }
