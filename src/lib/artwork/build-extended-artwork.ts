@@ -125,6 +125,15 @@ function tryArray(sized: SizedDesign, element: BuiltElement, marginMm: number, d
 		throw e;
 	}
 	const crowded = networkCollision(pieces, element.feedBoxes, dx, dy, rows, columns, gap / 2);
+	if (crowded && crowded.axis === 'y') {
+		// several rows: each row's tree runs in the gap below its row, one line per level and the connector
+		const lengthMm = fp.maxYMm - fp.minYMm;
+		const lines = Math.round(Math.log2(columns)) + 1;
+		return {
+			...crowded,
+			what: `${crowded.what}: the gap between rows, ${(dy - lengthMm).toFixed(3)} mm (the pitch less the element's ${lengthMm.toFixed(3)} mm), must hold each row's feed tree of ${lines} line${lines === 1 ? '' : 's'} ${array.network.levelPitchMm.toFixed(3)} mm apart`
+		};
+	}
 	return crowded ?? { pieces };
 }
 
