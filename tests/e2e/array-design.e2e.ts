@@ -49,6 +49,14 @@ test('a 4 × 1 array made in the editor: live preview with four patches and the 
 	const directivity = Number((await pattern.locator('[data-figure="directivity"]').textContent())!.replace(/[^\d.-]/g, ''));
 	expect(directivity).toBeGreaterThan(6);
 	expect(directivity).toBeLessThan(9);
+	// the gain is a budget: element gain + 10·log10 4 − the feed's line loss − the mismatch, and it adds up
+	const term = async (t: string) => Number((await pattern.locator(`[data-term="${t}"]`).textContent())!.replace(/[^\d.-]/g, ''));
+	const gain = Number((await pattern.locator('[data-figure="gain"]').textContent())!.replace(/[^\d.-]/g, ''));
+	expect(await term('array')).toBeCloseTo(6.02, 2);
+	expect(await term('feed-loss')).toBeGreaterThan(0);
+	expect(gain).toBeCloseTo((await term('element')) + (await term('array')) - (await term('feed-loss')) - (await term('mismatch')), 1);
+	// the grating-lobe condition reads as a true statement (0.7 λ0 against the broadside limit 1 λ0)
+	await expect(pattern.locator('[data-figure="grating-lobes"] [data-axis="x"]')).toHaveText('x: pitch 0.7 λ₀ < limit 1.000 λ₀: no grating lobe');
 	await pattern.scrollIntoViewIfNeeded();
 	await pattern.screenshot({ path: '/tmp/ff-array-pattern.png' });
 	await page.screenshot({ path: '/tmp/ff-revision-array.png', fullPage: true });

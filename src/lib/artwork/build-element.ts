@@ -24,6 +24,8 @@ export interface BuiltElement {
 	readonly groundCuts: ArtworkShape[];
 	/** Bounds of the element's copper on the feed layer. */
 	readonly feedFootprint: Bounds;
+	/** Bounds of each of those shapes on its own (the corporate feed keeps its clearance from these). */
+	readonly feedBoxes: Bounds[];
 	/** Bounds of all the element's copper (every layer but the ground). */
 	readonly footprint: Bounds;
 	/** Centre of the patch. */
@@ -93,7 +95,8 @@ export function buildElement(sized: SizedDesign, runMm: number): BuiltElement {
 		if (sized.parasitic) shapes[roles.topIndex].push(region('parasitic-patch', 'parasitic-patch', patchRegion(sized.parasitic.patch, center)));
 	}
 	const all = shapes.filter((_, i) => i !== roles.groundIndex).flat();
-	return { shapes, voids, groundCuts, feedFootprint: shapeBounds([...shapes[roles.feedIndex], ...groundCuts]), footprint: shapeBounds(all), center, patchEdgeYMm: center[1] - hy };
+	const feedShapes = [...shapes[roles.feedIndex], ...groundCuts];
+	return { shapes, voids, groundCuts, feedFootprint: shapeBounds(feedShapes), feedBoxes: feedShapes.map((s) => shapeBounds([s])), footprint: shapeBounds(all), center, patchEdgeYMm: center[1] - hy };
 }
 
 export { shapeBounds };

@@ -3,7 +3,7 @@ import { GeometryError, createRectangleContour, emptyBounds, mergeBounds, type B
 import type { SizedDesign } from '../rf/sized-design';
 import { buildElement, layerRolesOf, shapeBounds, type BuiltElement } from './build-element';
 import { buildLayeredStack, copperLayerIds } from './build-stack';
-import { layoutCorporateFeed, pieceBounds, pieceShape } from './build-corporate-feed';
+import { layoutCorporateFeed, pieceBounds, pieceShape, type NetworkPiece } from './build-corporate-feed';
 import { profileLayer } from './profile-layer';
 import { translateShape } from './translate-shape';
 import type { Artwork, ArtworkDimension, ArtworkLayer, ArtworkShape } from './types';
@@ -32,30 +32,8 @@ export function buildExtendedArtwork(sized: SizedDesign): Artwork {
 	const element: BuiltElement = buildElement(sized, run);
 	const dx = array?.spacingXMm ?? 0;
 	const dy = array?.spacingYMm ?? 0;
+	const pieces = array ? placeArray(sized, element, marginMm) : [];
 	const origin = (r: number, c: number): Point => [c * dx, r * dy];
-	if (array) {
-		// neighbouring elements must keep the network clearance between their copper on every layer
-		const fp = element.footprint;
-		const gap = array.network.clearanceMm;
-		if (columns > 1 && !(dx - (fp.maxXMm - fp.minXMm) >= gap)) {
-			throw new GeometryError('elements-overlap', `array.spacingXWavelengths gives a pitch of ${dx.toFixed(3)} mm; the element is ${(fp.maxXMm - fp.minXMm).toFixed(3)} mm wide and needs ${gap.toFixed(3)} mm clearance`);
-		}
-		if (rows > 1 && !(dy - (fp.maxYMm - fp.minYMm) >= gap)) {
-			throw new GeometryError('elements-overlap', `array.spacingYWavelengths gives a pitch of ${dy.toFixed(3)} mm; the element is ${(fp.maxYMm - fp.minYMm).toFixed(3)} mm long and needs ${gap.toFixed(3)} mm clearance`);
-		}
-	}
-
-	// network, in the frame where element (0, 0) has its feed point at the origin
-	const pieces = array
-		? layoutCorporateFeed(
-				Array.from({ length: rows }, (_, r) => Array.from({ length: columns }, (_, c) => origin(r, c))),
-				array,
-				element.feedFootprint.minXMm,
-				element.feedFootprint.minYMm,
-				marginMm
-			).pieces
-		: [];
-	if (array) checkNetworkClearance(pieces.map((p) => ({ bounds: pieceBounds(p), element: p.element })), element.feedFootprint, dx, dy, rows, columns, array.network.clearanceMm / 2);
 
 	// board: every non-ground copper plus the margin; the bottom edge is the port (or the single feed line's start)
 	let copper: Bounds = emptyBounds;
@@ -116,21 +94,100 @@ export function buildExtendedArtwork(sized: SizedDesign): Artwork {
 	};
 }
 
-/** Every network piece keeps `gapMm` from every element's feed-layer copper but the one it starts at. */
-function checkNetworkClearance(pieces: { bounds: Bounds; element?: readonly [number, number] }[], footprint: Bounds, dx: number, dy: number, rows: number, columns: number, gapMm: number): void {
+/** Why an array does not fit at a pitch: the code, the axis whose pitch is short, and what collides. */
+interface ArrayMisfit {
+	code: 'elements-overlap' | 'network-arm-too-short' | 'feed-network-crowded';
+	axis: 'x' | 'y';
+	what: string;
+}
+
+const AXIS_KEY = { x: 'spacingXWavelengths', y: 'spacingYWavelengths' } as const;
+
+/** Lays out the network at pitches dx, dy; a misfit when elements or the network collide. */
+function tryArray(sized: SizedDesign, element: BuiltElement, marginMm: number, dx: number, dy: number): { pieces: NetworkPiece[] } | ArrayMisfit {
+	const array = sized.array!;
+	const { columns, rows } = array;
+	// neighbouring elements must keep the network clearance between their copper on every layer
+	const fp = element.footprint;
+	const gap = array.network.clearanceMm;
+	if (columns > 1 && !(dx - (fp.maxXMm - fp.minXMm) >= gap)) {
+		return { code: 'elements-overlap', axis: 'x', what: `the element is ${(fp.maxXMm - fp.minXMm).toFixed(3)} mm wide and needs ${gap.toFixed(3)} mm clearance to its neighbour` };
+	}
+	if (rows > 1 && !(dy - (fp.maxYMm - fp.minYMm) >= gap)) {
+		return { code: 'elements-overlap', axis: 'y', what: `the element is ${(fp.maxYMm - fp.minYMm).toFixed(3)} mm long and needs ${gap.toFixed(3)} mm clearance to its neighbour` };
+	}
+	let pieces: NetworkPiece[];
+	try {
+		const points = Array.from({ length: rows }, (_, r) => Array.from({ length: columns }, (_, c): Point => [c * dx, r * dy]));
+		pieces = layoutCorporateFeed(points, array, element.feedFootprint.minXMm, element.feedFootprint.minYMm, marginMm).pieces;
+	} catch (e) {
+		if (e instanceof GeometryError && e.code === 'network-arm-too-short') return { code: e.code, axis: /spacingY/.test(e.message) ? 'y' : 'x', what: e.message.replace(/: raise .*$/, '') };
+		throw e;
+	}
+	const crowded = networkCollision(pieces, element.feedBoxes, dx, dy, rows, columns, gap / 2);
+	if (crowded && crowded.axis === 'y') {
+		// several rows: each row's tree runs in the gap below its row, one line per level and the connector
+		const lengthMm = fp.maxYMm - fp.minYMm;
+		const lines = Math.round(Math.log2(columns)) + 1;
+		return {
+			...crowded,
+			what: `${crowded.what}: the gap between rows, ${(dy - lengthMm).toFixed(3)} mm (the pitch less the element's ${lengthMm.toFixed(3)} mm), must hold each row's feed tree of ${lines} line${lines === 1 ? '' : 's'} ${array.network.levelPitchMm.toFixed(3)} mm apart`
+		};
+	}
+	return crowded ?? { pieces };
+}
+
+/** The network pieces of an array, or a GeometryError naming the pitch that is short and the smallest that builds. */
+function placeArray(sized: SizedDesign, element: BuiltElement, marginMm: number): NetworkPiece[] {
+	const array = sized.array!;
+	const lambda0 = sized.freeSpaceWavelengthMm;
+	const first = tryArray(sized, element, marginMm, array.spacingXMm, array.spacingYMm);
+	if ('pieces' in first) return first.pieces;
+	// the smallest pitch on the short axis (the other kept) that builds, in steps of 0.005 λ0 up to the schema's 2 λ0
+	const step = 0.005;
+	let smallest: { x: number; y: number } | null = null;
+	const sx = array.spacingXWavelengths, sy = array.spacingYWavelengths;
+	for (let k = 1; k <= Math.ceil((2 - (first.axis === 'x' ? sx : sy)) / step); k++) {
+		const s = Math.ceil(((first.axis === 'x' ? sx : sy) + k * step) / step - 1e-9) * step;
+		const x = first.axis === 'x' ? s : sx, y = first.axis === 'y' ? s : sy;
+		if (x > 2 || y > 2) break;
+		const t = tryArray(sized, element, marginMm, x * lambda0, y * lambda0);
+		if ('pieces' in t) {
+			smallest = { x, y };
+			break;
+		}
+		if (t.axis !== first.axis) break;
+	}
+	const key = AXIS_KEY[first.axis];
+	const pitchMm = first.axis === 'x' ? array.spacingXMm : array.spacingYMm;
+	const pitch = first.axis === 'x' ? sx : sy;
+	const hint = smallest
+		? `the smallest ${key} that builds here is ${(first.axis === 'x' ? smallest.x : smallest.y).toFixed(3)} (${((first.axis === 'x' ? smallest.x : smallest.y) * lambda0).toFixed(3)} mm)`
+		: `no ${key} up to 2 builds with the other pitch kept: change the other pitch, a thinner feed substrate or a higher feed impedance`;
+	throw new GeometryError(first.code, `array.${key} ${pitch} gives a pitch of ${pitchMm.toFixed(3)} mm along ${first.axis}, too short: ${first.what}; ${hint}`);
+}
+
+/** The first network piece that comes within `gapMm` of copper of an element it does not start at, as a misfit; null when none does. */
+function networkCollision(pieces: readonly NetworkPiece[], boxes: readonly Bounds[], dx: number, dy: number, rows: number, columns: number, gapMm: number): ArrayMisfit | null {
+	const footprint = boxes.reduce((b, q) => mergeBounds(b, q), emptyBounds);
 	const cell = (v: number, pitch: number, n: number) => (pitch > 0 ? Math.min(n - 1, Math.max(0, Math.floor(v / pitch))) : 0);
 	for (const p of pieces) {
-		const c0 = cell(p.bounds.minXMm - footprint.maxXMm, dx, columns), c1 = cell(p.bounds.maxXMm - footprint.minXMm, dx, columns) + 1;
-		const r0 = cell(p.bounds.minYMm - footprint.maxYMm, dy, rows), r1 = cell(p.bounds.maxYMm - footprint.minYMm, dy, rows) + 1;
+		const pb = pieceBounds(p);
+		const c0 = cell(pb.minXMm - footprint.maxXMm, dx, columns), c1 = cell(pb.maxXMm - footprint.minXMm, dx, columns) + 1;
+		const r0 = cell(pb.minYMm - footprint.maxYMm, dy, rows), r1 = cell(pb.maxYMm - footprint.minYMm, dy, rows) + 1;
 		for (let r = Math.max(0, r0 - 1); r <= Math.min(rows - 1, r1); r++) {
 			for (let c = Math.max(0, c0 - 1); c <= Math.min(columns - 1, c1); c++) {
 				if (p.element && p.element[0] === r && p.element[1] === c) continue;
-				if (overlaps(p.bounds, shift(footprint, c * dx, r * dy), gapMm)) {
-					throw new GeometryError('feed-network-crowded', `the corporate feed passes within ${gapMm.toFixed(3)} mm of element (row ${r}, column ${c}): raise array.spacingXWavelengths / spacingYWavelengths or use a thinner feed substrate`);
+				// each of the element's own shapes, not their union: a line may pass under a patch's corner region beside its feed line
+				if (boxes.some((b) => overlaps(pb, shift(b, c * dx, r * dy), gapMm))) {
+					const horizontal = p.from[1] === p.to[1];
+					const axis: 'x' | 'y' = rows > 1 && horizontal ? 'y' : 'x';
+					return { code: 'feed-network-crowded', axis, what: `the corporate feed passes within ${gapMm.toFixed(3)} mm of element (row ${r}, column ${c})` };
 				}
 			}
 		}
 	}
+	return null;
 }
 
 function dimensionsOf(sized: SizedDesign, element: BuiltElement, center: Point, offX: number, offY: number, gw: number, gl: number, feedIndex: number): ArtworkDimension[] {

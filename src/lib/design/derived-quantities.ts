@@ -83,6 +83,17 @@ export function derivedQuantities(s: SizedDesign): Quantity[] {
 		add('Parasitic', 'parasiticSizeRatio', 'Size over the driven patch', s.parasitic.sizeRatio, '×', 3);
 		add('Parasitic', 'parasiticSpacingMm', 'Height above the driven patch', s.parasitic.spacingMm, 'mm', 4);
 		add('Parasitic', 'parasiticSpacingWavelengths', 'Height above the driven patch', s.parasitic.spacingWavelengths, 'λ₀', 3);
+		const cover = s.parasitic.cover;
+		if (cover) {
+			add('Parasitic', 'drivenUncoveredEffectivePermittivity', 'Driven patch εeff, uncovered', cover.uncoveredEffectivePermittivity, '', 4);
+			add('Parasitic', 'drivenCoveredEffectivePermittivity', 'Driven patch εeff under the spacer (sized on this)', cover.coveredEffectivePermittivity, '', 4);
+			add('Parasitic', 'drivenUncoveredLengthMm', 'Driven patch length if uncovered', cover.uncoveredResonantLengthMm, 'mm');
+		}
+		const bw = s.parasitic.bandwidth;
+		if (bw) {
+			add('Parasitic', 'drivenBandwidthPercent', 'Bandwidth, driven patch alone (VSWR ≤ 2)', bw.drivenBandwidthFraction * 100, '%', 3);
+			add('Parasitic', 'pairBandwidthPercent', 'Bandwidth, stacked pair (estimate, VSWR ≤ 2)', bw.pairBandwidthFraction * 100, '%', 3);
+		}
 	}
 
 	if (s.array) {
@@ -94,6 +105,8 @@ export function derivedQuantities(s: SizedDesign): Quantity[] {
 		add('Array', 'networkTransformerWidthMm', 'T-junction λ/4 arm width', a.network.transformer.widthMm, 'mm');
 		add('Array', 'networkTransformerImpedanceOhm', 'T-junction λ/4 arm impedance', a.network.transformer.impedanceOhm, 'Ω', 4);
 		add('Array', 'networkJunctionLevels', 'T-junction levels', String(a.network.junctionLevels), '');
+		// revisions stored before the gain budget carry no path length or breakdown
+		if (a.network.pathLengthMm !== undefined) add('Array', 'networkPathLengthMm', 'Feed line per element (routed)', a.network.pathLengthMm, 'mm');
 	}
 
 	const per = s.array ? 'Element ground' : 'Ground';
@@ -138,7 +151,12 @@ export function derivedQuantities(s: SizedDesign): Quantity[] {
 	if (s.array) {
 		const af = s.array.factor;
 		add('Estimates', 'arrayFactorDirectivityDbi', 'Array-factor directivity', af.arrayFactorDirectivityDbi, 'dBi', 3);
-		add('Estimates', 'arrayGainDbi', 'Array gain', af.gainDbi, 'dBi', 3);
+		const b = af.gainBreakdown as typeof af.gainBreakdown | undefined;
+		if (b) {
+			add('Estimates', 'arrayFeedLossDb', 'Feed-line loss (conductor + dielectric)', b.feedLossDb, 'dB', 3);
+			add('Estimates', 'arrayMismatchLossDb', 'Mismatch loss at the port', b.mismatchLossDb, 'dB', 3);
+		}
+		add('Estimates', 'arrayGainDbi', b ? 'Array gain (element + 10·log N − feed loss − mismatch)' : 'Array gain', af.gainDbi, 'dBi', 3);
 		// a single row has no −3 dB point across it (isotropic elements): said in words, without a unit
 		const width = (deg: number | null) => (deg === null ? { v: 'none in view', u: '' } : { v: deg, u: '°' });
 		const xz = width(af.halfPowerBeamwidthXzDeg);

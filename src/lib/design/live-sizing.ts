@@ -11,13 +11,12 @@ const GEOMETRY_PATHS: Record<string, string> = {
 	'feed-longer-than-margin': 'groundMarginMm',
 	'notch-outside-patch': 'inset.notchGapMm',
 	'probe-outside-patch': 'probe.padDiameterMm',
-	'clearance-outside-ground': 'probe.clearanceDiameterMm',
-	'feed-network-crowded': 'array.spacingXWavelengths'
+	'clearance-outside-ground': 'probe.clearanceDiameterMm'
 };
 
-/** The field a geometry error is about: by its code, or (elements too close) by the spacing its message names. */
+/** The field a geometry error is about: by its code, or (an array that does not fit) by the spacing its message names. */
 function geometryPath(err: GeometryError): string {
-	if (err.code === 'elements-overlap') return err.message.startsWith('array.spacingYWavelengths') ? 'array.spacingYWavelengths' : 'array.spacingXWavelengths';
+	if (err.code === 'elements-overlap' || err.code === 'feed-network-crowded' || err.code === 'network-arm-too-short') return err.message.startsWith('array.spacingYWavelengths') ? 'array.spacingYWavelengths' : 'array.spacingXWavelengths';
 	return GEOMETRY_PATHS[err.code] ?? '';
 }
 

@@ -109,3 +109,21 @@ export function arrayPattern(g: ArrayGeometry): { anglesDeg: number[]; xzDb: num
 export function broadsideLineDirectivityApprox(count: number, spacingWavelengths: number): number {
 	return 2 * count * spacingWavelengths;
 }
+
+/**
+ * The grating-lobe condition of one axis as a true statement in words and a correct inequality, e.g.
+ * "0.75 λ₀ < 1.000 λ₀: no grating lobe" or "1 λ₀ ≥ 1.000 λ₀: a grating lobe reaches visible space".
+ * The limit is shown with enough digits that the printed numbers keep the relation they state.
+ */
+export function gratingLobeCondition(spacingWavelengths: number, limitWavelengths: number): { free: boolean; text: string } {
+	const free = spacingWavelengths < limitWavelengths;
+	let digits = 3;
+	const show = (v: number) => String(Number(v.toFixed(digits)));
+	// widen until the rounded numbers no longer look equal when they differ (or stay equal when they are)
+	while (digits < 9 && free && show(spacingWavelengths) === show(limitWavelengths)) digits++;
+	const limit = limitWavelengths.toFixed(Math.max(3, digits));
+	const s = show(spacingWavelengths);
+	return free
+		? { free, text: `pitch ${s} λ₀ < limit ${limit} λ₀: no grating lobe` }
+		: { free, text: `pitch ${s} λ₀ ≥ limit ${limit} λ₀: a grating lobe reaches visible space` };
+}

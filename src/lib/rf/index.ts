@@ -45,6 +45,7 @@ export {
 	arrayFactorCutDb,
 	arrayPattern,
 	gratingLobeLimitWavelengths,
+	gratingLobeCondition,
 	halfPowerBeamwidthDeg,
 	broadsideLineDirectivityApprox,
 	type ArrayGeometry
@@ -76,3 +77,5 @@ export {
 	type FrequencyBand,
 	type PolarisationBands
 } from './polarisation-bands';
+export { conductorLossDbPerMm, dielectricLossDbPerMm, lineLossDbPerMm, surfaceResistanceOhm, type LossyLine } from './microstrip-loss';
+export { corporateFeedPath, feedPathLengthMm, feedLineLossDb, feedMismatchLossDb, type FeedPathInput, type FeedPathLevel, type FeedLineMedium } from './corporate-feed-budget';

@@ -3,7 +3,11 @@ import { InputError, type DesignInput } from '../schemas';
 import { dbFromPowerRatio, mmFromUm } from '../units';
 import { apertureStart } from './aperture-coupling';
 import { arrayFactorDirectivity, arrayPattern, gratingLobeLimitWavelengths, halfPowerBeamwidthDeg, type ArrayGeometry } from './array-factor';
+import { staticEffectivePermittivity } from './analyze-microstrip';
+import { BODE_FANO_BANDWIDTH_Q, COVERED_MICROSTRIP_MODEL, DOUBLE_TUNED_BANDWIDTH_Q, coveredEffectivePermittivity, equivalentSubstratePermittivity } from './covered-microstrip';
 import { combineDielectrics, resolveLayerStack, type DielectricGroup } from './layer-stack';
+import { corporateFeedPath, feedLineLossDb, feedMismatchLossDb, feedPathLengthMm } from './corporate-feed-budget';
+import { lineLossDbPerMm } from './microstrip-loss';
 import { microstripSection, quarterGuidedWavelengthMm } from './quarter-wave-transformer';
 import type { SizedArray, SizedDesign, SizedFeed, SizedLine, SizedPatch, SizingWarning } from './sized-design';
 
@@ -36,6 +40,15 @@ function scalePatch(p: SizedPatch, k: number): SizedPatch {
 		case 'circular':
 			return { ...p, radiusMm: p.radiusMm * k, effectiveRadiusMm: p.effectiveRadiusMm * k };
 	}
+}
+
+/** What the stacked-pair bandwidth estimate is. */
+const BANDWIDTH_MODEL =
+	'estimate: the two coupled resonators of a stacked pair at their best double-tuned VSWR ≤ 2 response on the driven patch’s Q, 1.733/Q (Pues & Van de Capelle’s double-tuned match, IEEE Trans. Antennas Propag. 1989, from memory); the Bode–Fano limit π/(Q·ln 3) is the ceiling of any match. The parasitic’s own radiation and the real coupling are not modelled: tune by sweep.';
+
+/** Width of the patch across the feed axis (the diameter of a disc). */
+function patchWidthOf(p: SizedPatch): number {
+	return p.kind === 'circular' ? 2 * p.radiusMm : p.kind === 'truncated-corner' ? p.sideMm : p.widthMm;
 }
 
 /** Resonant length of the patch along the feed axis. */
@@ -82,7 +95,15 @@ export function sizeExtended(d: DesignInput, sizeSingle: SizeSingle): SizedDesig
 		sized = { ...base, input: d, feedKind: d.feed, feed, warnings: kept };
 	} else if (d.parasitic) {
 		const [upper, lower] = groups;
-		const driven = sizeSingle(onGroup(d, lower));
+		// the driven patch lies under the spacer: size it on the covered εeff (as an equivalent substrate εr at its own width)
+		const uncovered = sizeSingle(onGroup(d, lower));
+		const widthMm = patchWidthOf(uncovered.patch);
+		const cover = { widthMm, heightMm: lower.heightMm, relativePermittivity: lower.relativePermittivity, coverHeightMm: upper.heightMm, coverRelativePermittivity: upper.relativePermittivity };
+		const coveredEff = coveredEffectivePermittivity(cover);
+		const uncoveredEff = staticEffectivePermittivity(widthMm / lower.heightMm, lower.relativePermittivity);
+		const equivalentPermittivity = equivalentSubstratePermittivity(widthMm, lower.heightMm, coveredEff);
+		const onCovered = onGroup(d, { ...lower, relativePermittivity: equivalentPermittivity });
+		const driven = sizeSingle(d.shape === 'rectangular' && d.patchWidthMm === undefined ? { ...onCovered, patchWidthMm: widthMm } : onCovered);
 		const lambda0 = driven.freeSpaceWavelengthMm;
 		const spacingWavelengths = upper.heightMm / lambda0;
 		if (spacingWavelengths < PARASITIC_SPACING_WAVELENGTHS.min || spacingWavelengths > PARASITIC_SPACING_WAVELENGTHS.max) {
@@ -95,10 +116,23 @@ export function sizeExtended(d: DesignInput, sizeSingle: SizeSingle): SizedDesig
 			code: 'first-pass-coupling',
 			message: `The parasitic patch (×${d.parasitic.sizeRatio} the driven one) and its spacing are first-pass values from published guidelines: tune parasitic.sizeRatio by sweep for the bandwidth you need.`
 		});
+		const q = driven.estimates.qualityFactor;
 		sized = {
 			...driven,
 			input: d,
-			parasitic: { patch: scalePatch(driven.patch, d.parasitic.sizeRatio), sizeRatio: d.parasitic.sizeRatio, spacingMm: upper.heightMm, spacingWavelengths }
+			parasitic: {
+				patch: scalePatch(driven.patch, d.parasitic.sizeRatio),
+				sizeRatio: d.parasitic.sizeRatio,
+				spacingMm: upper.heightMm,
+				spacingWavelengths,
+				cover: { model: COVERED_MICROSTRIP_MODEL, uncoveredEffectivePermittivity: uncoveredEff, coveredEffectivePermittivity: coveredEff, equivalentSubstratePermittivity: equivalentPermittivity, uncoveredResonantLengthMm: patchLengthMm(uncovered.patch) },
+				bandwidth: {
+					model: BANDWIDTH_MODEL,
+					drivenBandwidthFraction: driven.estimates.bandwidthFraction,
+					pairBandwidthFraction: DOUBLE_TUNED_BANDWIDTH_Q / q,
+					limitBandwidthFraction: BODE_FANO_BANDWIDTH_Q / q
+				}
+			}
 		};
 	} else {
 		// one dielectric group between two coppers: the single-layer path on the equivalent layer
@@ -110,6 +144,25 @@ export function sizeExtended(d: DesignInput, sizeSingle: SizeSingle): SizedDesig
 		sized = { ...sized, array };
 	}
 	return { ...sized, warnings: [...sized.warnings, ...extraWarnings] };
+}
+
+/** How far the element's copper on the feed layer reaches left of its feed point (as artwork/build-element.ts draws it). */
+function elementLeftReachMm(e: SizedDesign, line: SizedLine): number {
+	const f = e.feed;
+	if (f.kind === 'aperture-coupled') return Math.max(f.slotLengthMm, f.line.widthMm) / 2;
+	if (f.kind === 'proximity-coupled') return f.line.widthMm / 2;
+	const p = e.patch;
+	const half = p.kind === 'circular' ? p.radiusMm : p.kind === 'truncated-corner' ? p.sideMm / 2 : p.widthMm / 2;
+	return Math.max(half, line.widthMm / 2);
+}
+
+/** The element's feed line past the network's run: into the inset notch, or under the patch to the coupling point. */
+function elementLeadBeyondRunMm(e: SizedDesign): number {
+	const f = e.feed;
+	if (f.kind === 'inset') return f.insetDepthMm;
+	if (f.kind === 'aperture-coupled') return patchLengthMm(e.patch) / 2;
+	if (f.kind === 'proximity-coupled') return f.overlapMm;
+	return 0;
 }
 
 function sizeArray(d: DesignInput, element: SizedDesign, g: DielectricGroup, thicknessMm: number, warnings: SizingWarning[]): SizedArray {
@@ -133,6 +186,29 @@ function sizeArray(d: DesignInput, element: SizedDesign, g: DielectricGroup, thi
 			});
 		}
 	}
+	const spacingXMm = a.spacingXWavelengths * lambda0;
+	const spacingYMm = a.spacingYWavelengths * lambda0;
+	const levels = corporateFeedPath({
+		columns: a.columns,
+		rows: a.rows,
+		spacingXMm,
+		spacingYMm,
+		line,
+		transformer,
+		levelPitchMm,
+		clearanceMm,
+		marginMm: element.ground.marginMm,
+		elementLeftReachMm: elementLeftReachMm(element, line),
+		elementLeadMm: clearanceMm + elementLeadBeyondRunMm(element)
+	});
+	const medium = { frequencyHz: d.frequencyHz, relativePermittivity: g.relativePermittivity, lossTangent: g.lossTangent, conductivitySPerM: d.substrate.copperConductivitySPerM };
+	const perMm = (l: SizedLine) => lineLossDbPerMm(l, d.frequencyHz, g.relativePermittivity, g.lossTangent, d.substrate.copperConductivitySPerM);
+	// a quarter-wave element's own transformer is part of every path too
+	const ownTransformer = element.feed.kind === 'quarter-wave' ? element.feed.transformer : null;
+	const feedLossDb = feedLineLossDb(levels, line, transformer, medium) + (ownTransformer ? ownTransformer.lengthMm * perMm(ownTransformer) : 0);
+	const elementResistanceOhm = element.feed.kind === 'edge' ? element.edgeResistanceOhm : element.feed.kind === 'inset' || element.feed.kind === 'quarter-wave' ? d.targetImpedanceOhm : z0;
+	const mismatchLossDb = feedMismatchLossDb(levels, elementResistanceOhm, line, transformer, z0, d.frequencyHz);
+	const length = feedPathLengthMm(levels, transformer.lengthMm);
 	const geometry: ArrayGeometry = { columns: a.columns, rows: a.rows, spacingXWavelengths: a.spacingXWavelengths, spacingYWavelengths: a.spacingYWavelengths, scanAngleDeg: a.scanAngleDeg };
 	const n = a.columns * a.rows;
 	const directivity = arrayFactorDirectivity(geometry);
@@ -140,17 +216,29 @@ function sizeArray(d: DesignInput, element: SizedDesign, g: DielectricGroup, thi
 		columns: a.columns,
 		rows: a.rows,
 		elementCount: n,
-		spacingXMm: a.spacingXWavelengths * lambda0,
-		spacingYMm: a.spacingYWavelengths * lambda0,
+		spacingXMm,
+		spacingYMm,
 		spacingXWavelengths: a.spacingXWavelengths,
 		spacingYWavelengths: a.spacingYWavelengths,
 		scanAngleDeg: a.scanAngleDeg,
 		gratingLobeLimitWavelengths: limit,
-		network: { line, transformer, branchImpedanceOhm, levelPitchMm, clearanceMm, junctionLevels: Math.log2(a.columns) + Math.log2(a.rows) },
+		network: {
+			line,
+			transformer,
+			branchImpedanceOhm,
+			levelPitchMm,
+			clearanceMm,
+			junctionLevels: Math.log2(a.columns) + Math.log2(a.rows),
+			pathLengthMm: length.lineMm + length.transformerMm + (ownTransformer?.lengthMm ?? 0),
+			lineLossDbPerMm: perMm(line),
+			transformerLossDbPerMm: perMm(transformer),
+			elementResistanceOhm
+		},
 		factor: {
 			arrayFactorDirectivityDbi: dbFromPowerRatio(directivity),
-			// element gain + array gain of N (common practice, no source): ignores mutual coupling and network loss
-			gainDbi: element.estimates.gainDbi + dbFromPowerRatio(n),
+			// element gain + array gain of N (equal split, in phase) − the network's line and mismatch loss; mutual coupling ignored
+			gainDbi: element.estimates.gainDbi + dbFromPowerRatio(n) - feedLossDb - mismatchLossDb,
+			gainBreakdown: { elementGainDbi: element.estimates.gainDbi, arrayGainDb: dbFromPowerRatio(n), feedLossDb, mismatchLossDb },
 			halfPowerBeamwidthXzDeg: halfPowerBeamwidthDeg(geometry, 'xz'),
 			halfPowerBeamwidthYzDeg: halfPowerBeamwidthDeg(geometry, 'yz'),
 			pattern: arrayPattern(geometry)

@@ -140,19 +140,56 @@ export interface SizedParasitic {
 	/** Dielectric height between the driven and the parasitic patch. */
 	spacingMm: number;
 	spacingWavelengths: number;
+	/** How the driven patch was sized under the spacer (absent in revisions stored before). */
+	cover?: {
+		/** The covered-microstrip model used. */
+		model: string;
+		/** εeff of the driven patch as an uncovered wide microstrip (Hammerstad–Jensen) and under the spacer. */
+		uncoveredEffectivePermittivity: number;
+		coveredEffectivePermittivity: number;
+		/** The substrate εr the single-layer sizing was given so that it sizes on the covered εeff. */
+		equivalentSubstratePermittivity: number;
+		/** The driven patch's resonant length as if uncovered, for comparison. */
+		uncoveredResonantLengthMm: number;
+	};
+	/** Bandwidth estimates, fractions for VSWR ≤ 2 (absent in revisions stored before). */
+	bandwidth?: {
+		/** What the figures are. */
+		model: string;
+		/** The driven patch alone. */
+		drivenBandwidthFraction: number;
+		/** The stacked pair: an estimate. */
+		pairBandwidthFraction: number;
+		/** The Bode–Fano ceiling on the driven patch's Q. */
+		limitBandwidthFraction: number;
+	};
 }
 
 /** Array-factor figures for isotropic elements; `pattern` is ready to plot. */
 export interface SizedArrayFactor {
 	/** Directivity of the array factor alone (isotropic elements), dBi. */
 	arrayFactorDirectivityDbi: number;
-	/** Estimated array gain: element gain + 10·log10(element count). Neglects coupling and feed loss. */
+	/** Estimated array gain: element gain + 10·log10(element count) − feed-line loss − mismatch loss (the terms in `gainBreakdown`). Neglects mutual coupling. */
 	gainDbi: number;
+	/** The terms of `gainDbi`, each an estimate. */
+	gainBreakdown: ArrayGainBreakdown;
 	/** Half-power beamwidth in the scan plane (x–z) and across it; null when the beam has no −3 dB point in view. */
 	halfPowerBeamwidthXzDeg: number | null;
 	halfPowerBeamwidthYzDeg: number | null;
 	/** Normalised array factor, dB (0 at the beam peak), on the angles −90°…90° in 1° steps. */
 	pattern: { anglesDeg: number[]; xzDb: number[]; yzDb: number[] };
+}
+
+/** Array gain = elementGainDbi + arrayGainDb − feedLossDb − mismatchLossDb. */
+export interface ArrayGainBreakdown {
+	/** One element's gain estimate, dBi. */
+	elementGainDbi: number;
+	/** 10·log10(element count): N elements fed in phase with equal power, dB. */
+	arrayGainDb: number;
+	/** Conductor and dielectric loss along one port-to-element path of the routed network, dB (≥ 0). */
+	feedLossDb: number;
+	/** Mismatch loss at the port at f0, −10·log10(1 − |Γ|²), dB (≥ 0). */
+	mismatchLossDb: number;
 }
 
 /** The corporate feed: T-junctions whose arms start with a λg/4 transformer to 2·Z0 at the junction. */
@@ -169,6 +206,13 @@ export interface SizedCorporateFeed {
 	clearanceMm: number;
 	/** Levels of T-junctions from the elements to the port. */
 	junctionLevels: number;
+	/** Routed length of one port-to-element path (Z0 line and λg/4 transformers, the element's own lead included). */
+	pathLengthMm: number;
+	/** Loss of the line and of a transformer per millimetre (conductor + dielectric), dB/mm. */
+	lineLossDbPerMm: number;
+	transformerLossDbPerMm: number;
+	/** Resistance each element presents at its feed point, Ω (the design's target, the edge for an edge feed). */
+	elementResistanceOhm: number;
 }
 
 export interface SizedArray {

@@ -18,12 +18,19 @@ describe('derived values of layered designs and arrays', () => {
 		// the demo stack's spacer is 6 mm (tests/fixtures/designs/layered-cases.ts)
 		expect(p.get('parasiticSpacingMm')?.value).toBeCloseTo(6, 6);
 		expect(p.get('parasiticSizeRatio')?.value).toBe(1.07);
+		// the driven patch sized under the spacer, and the pair's bandwidth beside the driven patch's
+		expect(Number(p.get('drivenCoveredEffectivePermittivity')?.value)).toBeGreaterThan(Number(p.get('drivenUncoveredEffectivePermittivity')?.value));
+		expect(Number(p.get('pairBandwidthPercent')?.value)).toBeGreaterThan(Number(p.get('drivenBandwidthPercent')?.value));
+		expect(p.get('pairBandwidthPercent')?.label).toMatch(/estimate/);
 	});
 
-	it('give an array its element count, its gain as element gain + 10·log10 N, and say a single row has no y–z beamwidth', () => {
+	it('give an array its element count, its gain as element gain + 10·log10 N less the feed-line and mismatch loss, and say a single row has no y–z beamwidth', () => {
 		const a = rows('1×4 inset array');
 		expect(a.get('arrayElements')?.value).toBe('4 × 1 = 4');
-		expect(Number(a.get('arrayGainDbi')?.value)).toBeCloseTo(Number(a.get('gainDbi')?.value) + 10 * Math.log10(4), 9);
+		const loss = Number(a.get('arrayFeedLossDb')?.value) + Number(a.get('arrayMismatchLossDb')?.value);
+		expect(Number(a.get('arrayFeedLossDb')?.value)).toBeGreaterThan(0);
+		expect(Number(a.get('arrayGainDbi')?.value)).toBeCloseTo(Number(a.get('gainDbi')?.value) + 10 * Math.log10(4) - loss, 9);
+		expect(Number(a.get('networkPathLengthMm')?.value)).toBeGreaterThan(0);
 		expect(a.get('beamwidthYzDeg')).toMatchObject({ value: 'none in view', unit: '' });
 		expect(typeof a.get('beamwidthXzDeg')?.value).toBe('number');
 		expect(a.has('arraySpacingYMm')).toBe(false);

@@ -1,6 +1,7 @@
 // Array factor: broadside line directivity against Balanis's closed form, a numeric sphere integral, beamwidth, and the grating-lobe onset.
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { arrayFactorCutDb, arrayFactorDirectivity, arrayFactorMagnitude, broadsideLineDirectivityApprox, gratingLobeLimitWavelengths, halfPowerBeamwidthDeg, integrateGaussLegendre, size } from '../../../src/lib/rf';
+import { gratingLobeCondition, arrayFactorCutDb, arrayFactorDirectivity, arrayFactorMagnitude, broadsideLineDirectivityApprox, gratingLobeLimitWavelengths, halfPowerBeamwidthDeg, integrateGaussLegendre, size } from '../../../src/lib/rf';
 import { layeredDocument } from '../../fixtures/designs/layered-cases';
 
 const line = (n: number, d: number, scanAngleDeg = 0) => ({ columns: n, rows: 1, spacingXWavelengths: d, spacingYWavelengths: 0.5, scanAngleDeg });
@@ -80,5 +81,30 @@ describe('array factor', () => {
 		expect(warn(limit + 0.001, 30).length).toBe(1);
 		expect(warn(limit + 0.001, 30)[0].message).toMatch(/along x/);
 		expect(warn(0.9, 0)).toEqual([]);
+	});
+});
+
+describe('the grating-lobe condition in words', () => {
+	// the condition d/λ0 < 1/(1 + |sin θ0|) (Balanis, Antenna Theory, ch. 6, from memory): the printed relation must be true of the printed numbers
+	it.each([
+		[0.75, 0, 'pitch 0.75 λ₀ < limit 1.000 λ₀: no grating lobe'],
+		[1, 0, 'pitch 1 λ₀ ≥ limit 1.000 λ₀: a grating lobe reaches visible space'],
+		[0.7, 30, 'pitch 0.7 λ₀ ≥ limit 0.667 λ₀: a grating lobe reaches visible space'],
+		[0.9999, 0, 'pitch 0.9999 λ₀ < limit 1.0000 λ₀: no grating lobe']
+	])('pitch %s λ0 at a %s° scan reads "%s"', (s, scan, text) => {
+		expect(gratingLobeCondition(s, gratingLobeLimitWavelengths(scan)).text).toBe(text);
+	});
+
+	it('never prints a false inequality (property test)', () => {
+		fc.assert(
+			fc.property(fc.double({ min: 0.3, max: 2, noNaN: true }), fc.double({ min: 0, max: 80, noNaN: true }), (s, scan) => {
+				const { free, text } = gratingLobeCondition(s, gratingLobeLimitWavelengths(scan));
+				const m = /^pitch ([\d.]+) λ₀ ([<≥]) limit ([\d.]+) λ₀: /.exec(text)!;
+				const [a, b] = [Number(m[1]), Number(m[3])];
+				expect(m[2] === '<' ? a < b : a >= b).toBe(true);
+				expect(free).toBe(m[2] === '<');
+			}),
+			{ numRuns: 300 }
+		);
 	});
 });

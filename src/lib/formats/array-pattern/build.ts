@@ -18,6 +18,8 @@ export interface ArrayPatternDocument {
 	readonly gratingLobeLimitWavelengths: number;
 	readonly arrayFactorDirectivityDbi: number;
 	readonly gainDbi: number;
+	/** The terms of gainDbi: element gain + 10·log10 N − feed-line loss − mismatch loss (dB). */
+	readonly gainBreakdown?: { elementGainDbi: number; arrayGainDb: number; feedLossDb: number; mismatchLossDb: number };
 	readonly halfPowerBeamwidthXzDeg: number | null;
 	readonly halfPowerBeamwidthYzDeg: number | null;
 	/** What the numbers are: isotropic elements, no coupling, no feed loss. */
@@ -25,6 +27,11 @@ export interface ArrayPatternDocument {
 	/** xz: the scan plane (φ = 0); yz: the plane across it through the beam. Normalised power, dB. */
 	readonly pattern: { anglesDeg: number[]; xzDb: number[]; yzDb: number[] };
 }
+
+/** The note of revisions sized before the gain budget: kept word for word, so their files export byte for byte as before. */
+const NOTE_BEFORE_GAIN_BUDGET = 'Array factor of isotropic elements; gain = element gain estimate + 10·log10(element count), without mutual coupling or feed-network loss. Estimates, not measurements.';
+const GAIN_BUDGET_NOTE =
+	"Array factor of isotropic elements; gain = element gain estimate + 10·log10(element count) − the corporate feed's line loss (conductor + dielectric along the routed path) − the mismatch loss at the port (gainBreakdown), without mutual coupling. Estimates, not measurements.";
 
 /** The document, or null for a design that is not an array. */
 export function buildArrayPatternDocument(sized: SizedDesign, meta: ExportMeta): ArrayPatternDocument | null {
@@ -43,9 +50,11 @@ export function buildArrayPatternDocument(sized: SizedDesign, meta: ExportMeta):
 		gratingLobeLimitWavelengths: a.gratingLobeLimitWavelengths,
 		arrayFactorDirectivityDbi: a.factor.arrayFactorDirectivityDbi,
 		gainDbi: a.factor.gainDbi,
+		// absent (and so left out of the JSON) in revisions sized before the gain budget
+		gainBreakdown: a.factor.gainBreakdown as ArrayPatternDocument['gainBreakdown'] | undefined,
 		halfPowerBeamwidthXzDeg: a.factor.halfPowerBeamwidthXzDeg,
 		halfPowerBeamwidthYzDeg: a.factor.halfPowerBeamwidthYzDeg,
-		note: 'Array factor of isotropic elements; gain = element gain estimate + 10·log10(element count), without mutual coupling or feed-network loss. Estimates, not measurements.',
+		note: a.factor.gainBreakdown ? GAIN_BUDGET_NOTE : NOTE_BEFORE_GAIN_BUDGET,
 		pattern: a.factor.pattern
 	};
 }
