@@ -55,6 +55,6 @@ export async function exportRevision(target: ExportTarget, kind: ExportKind, by:
 		? await buildExport(target, kind, buildOpts)
 		: await builtExports.get(`${target.revision.id}\u0000${kind}\u0000${JSON.stringify(notesWaiver ?? null)}`, () => buildExport(target, kind, buildOpts));
 	const { files, sha256 } = built;
-	const record = await recordExport({ target, userId: by.userId, via: by.via, kind, files, sha256, waiver });
+	const record = await recordExport({ target, userId: by.userId, via: by.via, kind, files, sha256, sizeBytes: built.body.byteLength, waiver });
 	return { exportId: record.id, kind, fileName: built.fileName, contentType: built.contentType, body: built.body, sha256, files, waiver, profile: gate.profile, waivedViolations: waiver ? gate.violations : [] };
 }
