@@ -2,7 +2,7 @@
 import type { Artwork } from '$lib/artwork';
 import { layerKeyOf, type FabPolygon, type FabView } from '$lib/formats/readback';
 
-/** How a copper is drawn: the top copper solid, a ground plane hatched underneath, any other copper outlined. */
+/** How a copper is drawn: the top copper solid, a ground plane hatched underneath, any other copper outlined over both. */
 export type FabCopperLook = 'top' | 'ground' | 'other';
 
 export interface FabViewCopper {
@@ -21,8 +21,9 @@ export interface FabViewCopper {
 const copperIndexOf = (key: string): number => Number(/^copper-L(\d+)$/.exec(key)?.[1] ?? NaN);
 
 /**
- * The coppers in drawing order: ground planes first (underneath, so nothing hides below them), then the other
- * coppers from the bottom up, the top copper last. Copper files that match no artwork layer are kept, named by number.
+ * The coppers in drawing order: ground planes first (underneath), then the top copper, then every other copper (a buried
+ * or bottom feed, a driven patch under a parasitic one) from the bottom up, drawn last as outlines so that what lies
+ * under the top copper still shows. Copper files that match no artwork layer are kept, named by number.
  */
 export function fabViewCoppers(artwork: Artwork, view: FabView): FabViewCopper[] {
 	const coppers: FabViewCopper[] = [];
@@ -41,6 +42,6 @@ export function fabViewCoppers(artwork: Artwork, view: FabView): FabViewCopper[]
 		if (Number.isNaN(index) || seen.has(image.key)) continue;
 		coppers.push({ key: image.key, copperIndex: index, name: `L${index} copper (not in the design)`, look: index === 1 ? 'top' : 'other', fileName: image.fileName, areaMm2: image.areaMm2, polygons: image.polygons });
 	}
-	const rank = (c: FabViewCopper) => (c.look === 'ground' ? 0 : 1);
+	const rank = (c: FabViewCopper) => ({ ground: 0, top: 1, other: 2 })[c.look];
 	return coppers.sort((a, b) => rank(a) - rank(b) || b.copperIndex - a.copperIndex);
 }

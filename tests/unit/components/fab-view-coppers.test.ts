@@ -26,11 +26,11 @@ describe('fabViewCoppers', () => {
 	it('names all three coppers of an aperture-coupled board, the ground as the inner layer 2', () => {
 		const artwork = artworkOf(layeredDocument({ feed: 'aperture-coupled', stack: [...threeCopperStack] }));
 		const coppers = fabViewCoppers(artwork, viewOf(artwork));
-		// Drawing order: the ground plane underneath, then the feed on L3, the patch on L1 last.
+		// Drawing order: the ground plane underneath, the patch on L1, then the L3 feed outlined over it (it runs under the patch).
 		expect(coppers.map((c) => [c.key, c.name, c.look])).toEqual([
 			['copper-L2', 'L2 Inner copper (layer 2) (ground)', 'ground'],
-			['copper-L3', 'L3 Bottom copper (feed)', 'other'],
-			['copper-L1', 'L1 Top copper (patch)', 'top']
+			['copper-L1', 'L1 Top copper (patch)', 'top'],
+			['copper-L3', 'L3 Bottom copper (feed)', 'other']
 		]);
 		for (const c of coppers) {
 			expect(c.fileName).toMatch(/\.gbr$/);
