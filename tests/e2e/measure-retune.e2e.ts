@@ -1,5 +1,5 @@
-// Journey: an editor uploads a measured S11 file, sees the plot with its resonance, confirms the retune and
-// lands on a new revision that names the measurement; a malformed file shows its line-numbered error and changes nothing;
+// Journey: an editor uploads a measured S11 file (the picker empties once it is stored), sees the plot with its resonance,
+// confirms the retune and lands on the new revision's own page, which names the measurement (its upload form empty); a malformed file shows its line-numbered error and changes nothing;
 // a 150 000-point file opens with a plot, and the editor deletes it after confirming.
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -52,6 +52,8 @@ test('upload → plot with the resonance → confirm the retune → a new revisi
 
 	const plot = page.getByTestId('s11-plot');
 	await expect(plot).toBeVisible();
+	// Stored: the picker no longer holds the file (the page stays, so the browser would keep it).
+	await expect(page.getByLabel('Touchstone file')).toHaveValue('');
 	await expect(page.getByTestId('s11-resonance')).toContainText('2.410 GHz');
 	await expect(page.getByTestId('s11-band')).toHaveCount(1);
 	await expect(page.getByTestId('resonance')).toHaveText(/^2\.410\d GHz$/);
@@ -62,8 +64,17 @@ test('upload → plot with the resonance → confirm the retune → a new revisi
 	const apparent = Number(await page.getByTestId('apparent-er').textContent());
 	expect(apparent).toBeGreaterThan(3.55);
 	await page.getByRole('button', { name: 'Create a retuned revision from A' }).click();
-	await page.waitForURL(`**/designs/${designId}/r/B/measurements`);
+	// The new revision's page, not its (empty) measurements page.
+	await page.waitForURL((url) => url.pathname === `/designs/${designId}/r/B`);
+	await expect(page.getByRole('heading', { level: 1 })).toContainText('rev B');
 	await expect(page.getByTestId('retuned-from')).toContainText('bench-2g4.s1p');
+	await expect(page.getByTestId('retuned-from')).toContainText('of A');
+	await page.screenshot({ path: '/work/shots/exportlog-retuned-revision.png', fullPage: true });
+	// B's measurements: nothing uploaded yet, and the picker is empty.
+	await page.getByRole('link', { name: 'Measured S11 and retune' }).click();
+	await page.waitForURL((url) => url.pathname === `/designs/${designId}/r/B/measurements`);
+	await expect(page.getByText('No measurements of this revision yet.')).toBeVisible();
+	await expect(page.getByLabel('Touchstone file')).toHaveValue('');
 	await expect(page.getByTestId('retuned-from')).toContainText('of revision A');
 
 	const b = await getDb().selectFrom('revision').select(['parent_id', 'retuned_from_measurement_id', 'input']).where('design_id', '=', designId).where('label', '=', 'B').executeTakeFirstOrThrow();

@@ -136,7 +136,14 @@ export const exportRecordSchema = z
 		via: z.enum(exportVias),
 		user: z.object({ displayName: z.string() }),
 		files: z.array(exportedFileSchema),
-		sizeBytes: z.number().int().meta({ description: 'Sum of the file sizes' }),
+		sizeBytes: z
+			.number()
+			.int()
+			.nullable()
+			.meta({
+				description:
+					'Length in bytes of what sha256 covers: the zip for a bundle or a several-file format, the file itself otherwise. null for a zip downloaded before Fringefield stored that length'
+			}),
 		sha256: z.string().meta({ description: 'sha256 of the delivered bytes (the zip for a bundle)' }),
 		waiver: z
 			.string()

@@ -100,7 +100,7 @@ describe('the security log', () => {
 		const tokenRow = await db.selectFrom('api_token').select('id').where('user_id', '=', ws.viewer.id).where('name', '=', 'audited').executeTakeFirstOrThrow();
 		expect((await action(server.origin, '/settings/tokens?/revoke', { cookie: ws.viewer.sessionId }, { tokenId: tokenRow.id })).type).toBe('success');
 		const target = { design: { id: ws.a.designId, teamId: ws.a.teamId }, revision: { id: ws.a.revisionId } } as unknown as ExportTarget;
-		await recordExport({ target, userId: ws.editor.id, via: 'api', kind: 'bundle', files: [], sha256: '0'.repeat(64), waiver: 'Ring below minimum accepted by the fab' });
+		await recordExport({ target, userId: ws.editor.id, via: 'api', kind: 'bundle', files: [], sha256: '0'.repeat(64), sizeBytes: 0, waiver: 'Ring below minimum accepted by the fab' });
 
 		const events = await auditQueries.listAuditEventsByTeam(db, ws.a.teamId, 50);
 		const kinds = events.map((e) => `${e.kind} by ${e.actor_user_id}`);

@@ -23,6 +23,8 @@ export interface ExportRecordTable {
 	files: ColumnType<ExportedFile[], string, never>;
 	/** sha256 of the bytes delivered (the zip for a bundle). */
 	sha256: string;
+	/** Length of the bytes sha256 covers (migration 2026-12-02T0945); NULL for zips recorded before it. */
+	size_bytes: ColumnType<number | null, number | null | undefined, never>;
 	waiver: string | null;
 	created_at: ColumnType<Date, Date | string | undefined, never>;
 }

@@ -34,7 +34,8 @@ export interface ExportLogRow {
 	via: ExportVia;
 	user_display_name: string;
 	files: ExportedFile[];
-	size_bytes: string | number;
+	/** Length of the delivered bytes (what sha256 covers); null for a zip recorded before the length was stored. */
+	size_bytes: number | null;
 	sha256: string;
 	/** The reason given when the export went out despite design-rule violations; null when it was clean. */
 	waiver: string | null;
@@ -74,7 +75,6 @@ export async function listExportsByTeam(db: Kysely<Database>, teamId: string, qu
 
 	const totalRow = await base.select((eb) => eb.fn.countAll<string>().as('n')).executeTakeFirstOrThrow();
 
-	const sizeBytes = sql<string>`(select coalesce(sum((f->>'sizeBytes')::bigint), 0) from jsonb_array_elements(e.files) as f)`;
 	const sortColumn = {
 		createdAt: sql`e.created_at`,
 		design: sql`lower(d.name)`,
@@ -82,9 +82,10 @@ export async function listExportsByTeam(db: Kysely<Database>, teamId: string, qu
 		kind: sql`e.kind`,
 		via: sql`e.via`,
 		user: sql`lower(u.display_name)`,
-		sizeBytes
+		// Unknown sizes (old zips) sort after every known one, in both directions.
+		sizeBytes: sql`e.size_bytes`
 	}[query.sort];
-	const direction = query.order === 'asc' ? sql`asc` : sql`desc`;
+	const direction = query.order === 'asc' ? sql`asc nulls last` : sql`desc nulls last`;
 
 	const rows = await base
 		.leftJoinLateral(
@@ -118,11 +119,11 @@ export async function listExportsByTeam(db: Kysely<Database>, teamId: string, qu
 			'u.display_name as user_display_name',
 			'e.files',
 			'e.sha256',
+			'e.size_bytes',
 			'e.waiver',
 			'p.id as earlier_id',
 			'p.created_at as earlier_created_at'
 		])
-		.select(sizeBytes.as('size_bytes'))
 		.select(sql<boolean | null>`case when p.id is null then null else (p.sha256 = e.sha256 and p.files = e.files) end`.as('earlier_matches'))
 		.orderBy(sql`${sortColumn} ${direction}`)
 		.orderBy(sql`e.created_at ${direction}`)

@@ -19,7 +19,7 @@ export function toExportLogEntry(row: exportQueries.ExportLogRow): ExportLogEntr
 		via: row.via,
 		user: { displayName: row.user_display_name },
 		files: row.files,
-		sizeBytes: Number(row.size_bytes),
+		sizeBytes: row.size_bytes === null ? null : Number(row.size_bytes),
 		sha256: row.sha256,
 		waiver: row.waiver,
 		earlier: row.earlier_id && row.earlier_created_at ? { exportId: row.earlier_id, createdAt: row.earlier_created_at.toISOString(), matches: row.earlier_matches === true } : null

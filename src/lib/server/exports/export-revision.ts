@@ -64,6 +64,6 @@ export async function exportRevision(target: ExportTarget, kind: ExportKind, by:
 			error(404, `Revision ${exportMetaOf(target).revisionLabel} has no ${kind} files (the design has nothing of that kind)`);
 	}
 	const { files, sha256, waiver } = outcome;
-	const record = await recordExport({ target, userId: by.userId, via: by.via, kind, files, sha256, waiver });
+	const record = await recordExport({ target, userId: by.userId, via: by.via, kind, files, sha256, sizeBytes: outcome.body.byteLength, waiver });
 	return { exportId: record.id, kind, fileName: outcome.fileName, contentType: outcome.contentType, body: outcome.body, sha256, files, waiver, profile, waivedViolations: waiver ? outcome.violations : [] };
 }

@@ -1,4 +1,4 @@
-// Writes the ONE export record of a download: who, which revision, what, each file's name/size/sha256, the delivered bytes' sha256, from where.
+// Writes the ONE export record of a download: who, which revision, what, each file's name/size/sha256, the delivered bytes' sha256 and length, from where.
 import { randomUUID } from 'node:crypto';
 import { getDb } from '../db';
 import * as exportQueries from '../db/export.queries';
@@ -16,6 +16,8 @@ export interface ExportRecordInput {
 	sweepPlanId?: string | null;
 	files: ExportedFile[];
 	sha256: string;
+	/** Length of the delivered bytes (the ones sha256 covers). */
+	sizeBytes: number;
 	/** Why design-rule violations were accepted; null/absent for a clean design. */
 	waiver?: string | null;
 }
@@ -36,6 +38,7 @@ export async function recordExport(input: ExportRecordInput): Promise<{ id: stri
 				sweep_plan_id: input.sweepPlanId ?? null,
 				files: input.files,
 				sha256: input.sha256,
+				size_bytes: input.sizeBytes,
 				waiver: input.waiver ?? null
 			});
 			if (input.waiver) {

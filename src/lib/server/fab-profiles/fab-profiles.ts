@@ -62,6 +62,38 @@ export async function revisionFabProfile(db: Kysely<Database>, revisionId: strin
 
 /** Which of the team's profiles has these values (to preselect the parent's pick in a form); the built-in when none does. */
 export function matchingFabProfileId(profiles: readonly TeamFabProfile[], profile: FabProfile): string {
-	const same = (a: FabProfile, b: FabProfile) => JSON.stringify(Object.entries(a).sort()) === JSON.stringify(Object.entries(b).sort());
-	return profiles.find((p) => same(p.profile, profile))?.id ?? BUILT_IN_FAB_PROFILE_ID;
+	return profiles.find((p) => sameFabProfile(p.profile, profile))?.id ?? BUILT_IN_FAB_PROFILE_ID;
+}
+
+/** The same values, whatever the key order. */
+function sameFabProfile(a: FabProfile, b: FabProfile): boolean {
+	return JSON.stringify(Object.entries(a).sort()) === JSON.stringify(Object.entries(b).sort());
+}
+
+export interface RevisionFabCheck {
+	/** The profile the page checks against: the recorded one, or the one ?profile= names. */
+	profile: FabProfile;
+	/** The revision's own profile, which its downloads (gate, fab notes) always use. */
+	recorded: FabProfile;
+	/** False for revisions older than the gate (the built-in stands in). */
+	recordedStored: boolean;
+	/** True when the page checks against values other than the recorded ones. */
+	switched: boolean;
+	/** The team's profiles to switch to, the built-in first. */
+	choices: { id: string; name: string }[];
+	/** The chosen profile's id; '' for the recorded one. */
+	chosenId: string;
+}
+
+/**
+ * What the revision page checks the revision against: its recorded profile, or, for a look without saving anything,
+ * one of the team's others named by id (`?profile=`). An id that is not the built-in or one of the team's is an InputError.
+ */
+export async function revisionFabCheck(db: Kysely<Database>, opts: { teamId: string; revisionId: string; profileId: string | null }): Promise<RevisionFabCheck> {
+	const [{ profile: recorded, recorded: recordedStored }, profiles] = await Promise.all([revisionFabProfile(db, opts.revisionId), listFabProfiles(db, opts.teamId)]);
+	const choices = profiles.map((p) => ({ id: p.id, name: p.profile.name }));
+	if (!opts.profileId) return { profile: recorded, recorded, recordedStored, switched: false, choices, chosenId: '' };
+	const chosen = profiles.find((p) => p.id === opts.profileId);
+	if (!chosen) throw new InputError([{ path: 'profile', value: opts.profileId, message: 'must be the built-in fab profile or one of the team’s fab profiles' }]);
+	return { profile: chosen.profile, recorded, recordedStored, switched: !sameFabProfile(chosen.profile, recorded), choices, chosenId: chosen.id };
 }

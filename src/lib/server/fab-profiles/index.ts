@@ -6,7 +6,9 @@ export {
 	listFabProfiles,
 	matchingFabProfileId,
 	resolveFabProfileChoice,
+	revisionFabCheck,
 	revisionFabProfile,
 	type RecordedFabProfile,
+	type RevisionFabCheck,
 	type TeamFabProfile
 } from './fab-profiles';

@@ -27,7 +27,8 @@ export async function exportSweepPlan(opts: { design: Design; revision: Revision
 		kind: 'sweep-plan',
 		sweepPlanId: opts.plan.id,
 		files: [{ name: file.fileName, sizeBytes: file.sizeBytes, sha256: file.sha256 }],
-		sha256: file.sha256
+		sha256: file.sha256,
+		sizeBytes: file.sizeBytes
 	});
 	return { exportId: record.id, fileName: file.fileName, path: file.path, sizeBytes: file.sizeBytes, sha256: file.sha256, pointCount: file.pointCount };
 }

@@ -1,4 +1,5 @@
-// The editor: starts from a parent revision; saving makes a new revision from it and goes there.
+// The editor: starts from exactly the revision named by ?from= (never a guess: without it, the design's history to pick
+// from); saving makes a new revision from it and goes there.
 import { error, fail, redirect } from '@sveltejs/kit';
 import { documentFromFormValues, fieldIssues, formValuesFromFormData } from '$lib/design';
 import { getDb } from '$lib/server/db';
@@ -11,7 +12,8 @@ import type { Actions, PageServerLoad } from './$types';
 export const load: PageServerLoad = async (event) => {
 	const { design } = await requireDesign(event, event.params.designId, 'revision.create');
 	const found = await findDesignWithRevisions(getDb(), design.id);
-	const from = event.url.searchParams.get('from') ?? found?.revisions.at(-1)?.label;
+	const from = event.url.searchParams.get('from');
+	if (from === null) redirect(303, `/designs/${design.id}#history-heading`);
 	const parent = found?.revisions.find((r) => r.label === from);
 	if (!parent) error(404, 'Revision not found');
 	const laminates = await listLaminates(getDb(), design.teamId);

@@ -1,12 +1,13 @@
-// One revision: its stored input and results (the page draws the preview and the DXF from them), and its Field check
-// panel: start a check or Homing, cancel one, make a revision from a Homing study's tuned input.
+// One revision: its stored input and results (the page draws the preview and the DXF from them), the fab profile it is
+// checked against (its recorded one, or ?profile=<id> of the team's others, without saving anything), and its Field
+// check panel: start a check or Homing, cancel one, make a revision from a Homing study's tuned input.
 import { error, fail, isHttpError, redirect } from '@sveltejs/kit';
 import { getDb } from '$lib/server/db';
 import { findDesignWithRevisions } from '$lib/server/designs';
 import { requireDesign } from '$lib/server/designs/design-access';
-import { revisionFabProfile } from '$lib/server/fab-profiles';
+import { revisionFabCheck } from '$lib/server/fab-profiles';
 import { cancelFieldCheck, loadFieldCheckPanel, requireFieldCheck, reviseFromHoming, startFieldCheck } from '$lib/server/field-checks';
-import { requireRevision } from '$lib/server/measurements';
+import { findRetuneSource, requireRevision } from '$lib/server/measurements';
 import { InputError, parseWith } from '$lib/schemas';
 import { startFieldCheckBodySchema } from '$lib/schemas/api';
 import { can } from '$lib/server/access';
@@ -18,13 +19,21 @@ export const load: PageServerLoad = async (event) => {
 	const revision = found?.revisions.find((r) => r.label === event.params.label);
 	if (!found || !revision) error(404, 'Revision not found');
 	const children = found.revisions.filter((r) => r.parentId === revision.id).map((r) => r.label);
+	let fabCheck;
+	try {
+		fabCheck = await revisionFabCheck(getDb(), { teamId: design.teamId, revisionId: revision.id, profileId: event.url.searchParams.get('profile') });
+	} catch (err) {
+		if (err instanceof InputError) error(400, 'The fab profile named in the address is not one of the team’s fab profiles; choose one from the list on the revision page.');
+		throw err;
+	}
 	return {
 		design,
 		revision,
 		children,
 		labels: found.revisions.map((r) => r.label),
 		canEdit,
-		fabCheck: await revisionFabProfile(getDb(), revision.id),
+		fabCheck,
+		retunedFrom: await findRetuneSource(getDb(), revision.id),
 		fieldCheck: { ...(await loadFieldCheckPanel(getDb(), revision, event.url.searchParams.get('check'))), canRun: can(role, 'field-check.start') }
 	};
 };

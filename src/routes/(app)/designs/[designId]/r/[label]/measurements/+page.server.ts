@@ -83,7 +83,8 @@ export const actions: Actions = {
 			if (err instanceof InputError) return fail(422, { retune: { message: err.first.message } });
 			throw err;
 		}
-		redirect(303, `/designs/${design.id}/r/${label}/measurements`);
+		// The new revision's own page: its header names the measurement it was retuned from.
+		redirect(303, `/designs/${design.id}/r/${label}`);
 	},
 	delete: async ({ locals, params, request }) => {
 		const { design, revision } = await measurements.requireRevision(locals.identity, params.designId, params.label, 'measurement.delete');
