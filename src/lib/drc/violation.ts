@@ -2,9 +2,9 @@
 import type { Point } from '../geometry';
 
 /** Our rule names. Stable: the UI, the API's 422 body and waivers refer to them. */
-export type DrcRuleId = 'trace-width' | 'copper-spacing' | 'drill-size' | 'annular-ring' | 'edge-clearance' | 'slot-width';
+export type DrcRuleId = 'trace-width' | 'copper-spacing' | 'drill-size' | 'annular-ring' | 'edge-clearance' | 'slot-width' | 'stack-build';
 
-export const DRC_RULE_IDS: readonly DrcRuleId[] = ['trace-width', 'copper-spacing', 'drill-size', 'annular-ring', 'edge-clearance', 'slot-width'];
+export const DRC_RULE_IDS: readonly DrcRuleId[] = ['trace-width', 'copper-spacing', 'drill-size', 'annular-ring', 'edge-clearance', 'slot-width', 'stack-build'];
 
 export interface Violation {
 	readonly ruleId: DrcRuleId;
@@ -14,9 +14,9 @@ export interface Violation {
 	readonly shapeIds: readonly string[];
 	/** Where to draw the marker: board coordinates in mm. */
 	readonly location: { readonly xMm: number; readonly yMm: number };
-	/** What the artwork has. */
+	/** What the artwork has (0 for 'stack-build', which judges the stack, not a length). */
 	readonly measuredMm: number;
-	/** What the profile asks for at least. */
+	/** What the profile asks for at least (0 for 'stack-build'). */
 	readonly requiredMm: number;
 	/** One sentence for humans. */
 	readonly message: string;

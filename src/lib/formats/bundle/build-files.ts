@@ -12,6 +12,7 @@ import { toStep } from '../step';
 import { toSvg, type SvgWindow } from '../svg';
 import { buildSweepDocument, serializeSweep } from '../sweep';
 import { buildArrayPatternDocument, serializeArrayPattern } from '../array-pattern';
+import { builtInFabProfileFor, type FabProfile } from '../../schemas/fab-profile';
 import { exportFormats, type ExportFormat } from './export-formats';
 import { exportFileName } from './file-names';
 
@@ -20,6 +21,8 @@ export interface BuildFilesEnvironment {
 	readonly svgWindow?: SvgWindow;
 	/** Waived design-rule violations, printed in the fab notes' cautions (none: the notes are as before). */
 	readonly waiver?: FabNotesWaiver;
+	/** The fab profile the design was checked against, named in the fab notes with its figures; default: the built-in that can build the stack. */
+	readonly profile?: FabProfile;
 }
 
 const encoder = new TextEncoder();
@@ -55,7 +58,8 @@ export function buildFiles(sized: SizedDesign, meta: ExportMeta, formats: readon
 	if (want('notes')) {
 		const notesName = exportFileName(meta, 'fab-notes', 'txt');
 		const names = [...files.map((f) => f.name), notesName, manifestName];
-		files.push(text(notesName, buildFabNotes(artwork, meta, { fileNames: names, warnings: sized.warnings.map((w) => w.message), solderMask: sized.input.solderMask, ...(env.waiver ? { waiver: env.waiver } : {}) })));
+		const profile = env.profile ?? builtInFabProfileFor(artwork.metadata.copperLayerCount);
+		files.push(text(notesName, buildFabNotes(artwork, meta, { fileNames: names, solderMask: sized.input.solderMask, profile, input: sized.input, ...(env.waiver ? { waiver: env.waiver } : {}) })));
 	}
 	files.push(text(manifestName, serializeManifest(buildManifest(files, meta))));
 	return files;

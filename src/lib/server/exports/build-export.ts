@@ -4,6 +4,7 @@ import { error } from '@sveltejs/kit';
 import { createExportMeta, type ExportMeta } from '$lib/formats/export-meta';
 import type { FabNotesWaiver } from '$lib/formats/fab-notes';
 import type { SizedDesign } from '$lib/rf';
+import { builtInFabProfileFor, copperLayerCountOf, type FabProfile } from '$lib/schemas';
 import type { ExportKind } from '$lib/schemas/api';
 import type { ExportedFile } from '../db/export-record.table';
 import { runBudgetedWork } from '../work';
@@ -39,6 +40,8 @@ export function exportMetaOf(target: ExportTarget): ExportMeta {
 }
 
 export interface BuildExportOptions {
+	/** The fab profile the revision recorded (the gate's), named in the fab notes with its figures; default: the built-in that can build the stack. */
+	profile?: FabProfile;
 	/** Waived design-rule violations, printed in the fab notes. */
 	waiver?: FabNotesWaiver;
 	deps?: ExportDependencies;
@@ -47,7 +50,9 @@ export interface BuildExportOptions {
 export async function buildExport(target: ExportTarget, kind: ExportKind, opts: BuildExportOptions = {}): Promise<BuiltExport> {
 	const meta = exportMetaOf(target);
 	// The sized design stored with the revision: what the revision is, whatever later engines compute.
-	const input: ExportBuildInput = { sized: target.revision.results as SizedDesign, meta, kind, ...(opts.waiver ? { waiver: opts.waiver } : {}) };
+	const sized = target.revision.results as SizedDesign;
+	const profile = opts.profile ?? builtInFabProfileFor(copperLayerCountOf(sized.input));
+	const input: ExportBuildInput = { sized, meta, kind, profile, ...(opts.waiver ? { waiver: opts.waiver } : {}) };
 	// The tests' corruption hook is a function, which cannot cross to a thread: those builds run here.
 	const outcome = opts.deps?.corruptFiles
 		? await (await import('./export-work')).buildExportBytes(input, opts.deps.corruptFiles)

@@ -49,7 +49,7 @@ export async function exportRevision(target: ExportTarget, kind: ExportKind, by:
 	if (gate.violations.length > 0 && !opts.waiver) throw new ExportRefusedError(gate.violations, gate.profile);
 	const waiver = gate.violations.length > 0 && opts.waiver ? opts.waiver : null;
 	const notesWaiver = waiver ? { reason: waiver, profileName: gate.profile.name, violations: gate.violations.map((v) => v.message) } : undefined;
-	const buildOpts = { waiver: notesWaiver, deps: opts.deps };
+	const buildOpts = { profile: gate.profile, waiver: notesWaiver, deps: opts.deps };
 	// Test hooks change the bytes on purpose: such builds are never shared.
 	const built = opts.deps
 		? await buildExport(target, kind, buildOpts)

@@ -23,6 +23,8 @@ export interface ExportBuildInput {
 	sized: SizedDesign;
 	meta: ExportMeta;
 	kind: ExportKind;
+	/** The fab profile the revision recorded (its gate's): named in the fab notes with its figures. */
+	profile: FabProfile;
 	/** Waived design-rule violations, printed in the fab notes. */
 	waiver?: FabNotesWaiver;
 }
@@ -54,7 +56,7 @@ const hashed = (files: readonly ExportFile[]): ExportedFile[] => files.map((f) =
 export async function buildExportBytes(input: ExportBuildInput, corruptFiles?: (files: ExportFile[]) => ExportFile[]): Promise<ExportBuildOutcome> {
 	const { sized, meta, kind } = input;
 	const formats: readonly ExportFormat[] = kind === 'bundle' ? exportFormats : [kind];
-	const env = { ...(formats.includes('svg') ? { svgWindow: createSVGWindow() as unknown as SvgWindow } : {}), ...(input.waiver ? { waiver: input.waiver } : {}) };
+	const env = { ...(formats.includes('svg') ? { svgWindow: createSVGWindow() as unknown as SvgWindow } : {}), profile: input.profile, ...(input.waiver ? { waiver: input.waiver } : {}) };
 	const written = buildFiles(sized, meta, formats, env);
 	const files = corruptFiles ? corruptFiles(written) : written;
 	if (fabKinds.includes(kind)) {

@@ -7,7 +7,7 @@ import { requireDesign } from '$lib/server/designs/design-access';
 import { revisionFabProfile } from '$lib/server/fab-profiles';
 import { cancelFieldCheck, loadFieldCheckPanel, requireFieldCheck, reviseFromHoming, startFieldCheck } from '$lib/server/field-checks';
 import { requireRevision } from '$lib/server/measurements';
-import { InputError, parseWith } from '$lib/schemas';
+import { copperLayerCountOf, InputError, parseWith } from '$lib/schemas';
 import { startFieldCheckBodySchema } from '$lib/schemas/api';
 import { can } from '$lib/server/access';
 import type { Actions, PageServerLoad } from './$types';
@@ -24,7 +24,7 @@ export const load: PageServerLoad = async (event) => {
 		children,
 		labels: found.revisions.map((r) => r.label),
 		canEdit,
-		fabCheck: await revisionFabProfile(getDb(), revision.id),
+		fabCheck: await revisionFabProfile(getDb(), revision.id, copperLayerCountOf(revision.input)),
 		fieldCheck: { ...(await loadFieldCheckPanel(getDb(), revision, event.url.searchParams.get('check'))), canRun: can(role, 'field-check.start') }
 	};
 };
