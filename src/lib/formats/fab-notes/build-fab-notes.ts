@@ -70,7 +70,7 @@ export function scientific(value: number): string {
 	return exponent === 0 ? String(mantissa) : `${mantissa} × 10${sup}`;
 }
 
-/** Where each copper layer sits: "top side", "inner 1", "bottom side". */
+/** Where each copper layer sits: "top side", "inner layer 1", "bottom side". */
 function copperPlaceOf(index: number, count: number): string {
 	if (index === 0) return 'top side';
 	if (index === count - 1) return 'bottom side';
@@ -85,8 +85,9 @@ export function layerCountWords(copperCount: number): string {
 	return `${copperCount} copper layers (top side, ${inner} inner layer${inner === 1 ? '' : 's'}, bottom side)`;
 }
 
-/** εr as the laminate states it, with its ± when stated. */
-const statedPermittivity = (l: OrderedLaminate) => `εr ${l.relativePermittivity}${l.relativePermittivityTolerance !== undefined ? ` ± ${l.relativePermittivityTolerance}` : ''}`;
+/** εr (with its ±) and tanδ as the laminate states them; nothing it does not state. */
+const statedValues = (l: OrderedLaminate) =>
+	`εr ${l.relativePermittivity}${l.relativePermittivityTolerance !== undefined ? ` ± ${l.relativePermittivityTolerance}` : ''}${l.lossTangent !== undefined ? `, tanδ ${l.lossTangent}` : ''}`;
 
 /** Replaces every {{key}}; a key without a value is a programming error, not input. */
 export function fillTemplate(template: string, values: Readonly<Record<string, string>>): string {
@@ -107,9 +108,7 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 	// Without an explicit stack the one dielectric is the laminate that is bought: its stated values, never a fitted εr.
 	const ordered = input.stack ? null : orderedLaminateOf(input);
 	const dielectricWords = (l: Extract<Artwork['stack'][number], { kind: 'dielectric' }>) =>
-		ordered
-			? `${statedPermittivity(ordered)}${ordered.lossTangent !== undefined ? `, tanδ ${ordered.lossTangent}` : ''} (as the laminate states)`
-			: `εr ${l.relativePermittivity}, tanδ ${l.lossTangent}`;
+		ordered ? `${statedValues(ordered)} (as the laminate states)` : `εr ${l.relativePermittivity}, tanδ ${l.lossTangent}`;
 	let copperIndex = 0;
 	const stackTable = stack
 		.map((l) =>
@@ -124,7 +123,7 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 	if (ordered) {
 		const core = cores[0];
 		const coreMm = core ? n(core.thicknessMm) : '0';
-		const stated = `${statedPermittivity(ordered)}${ordered.lossTangent !== undefined ? `, tanδ ${ordered.lossTangent}` : ''}`;
+		const stated = statedValues(ordered);
 		const className = laminateClassFor(ordered.relativePermittivity).name;
 		laminateChoice = ordered.name !== undefined ? `${quoteUserText(ordered.name)}, ${coreMm} mm core` : `no product named (${className}), ${coreMm} mm core`;
 		laminateLines.push(
