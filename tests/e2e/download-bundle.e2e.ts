@@ -1,5 +1,6 @@
-// Journey: sign up → make a team → new design → save a revision → download its bundle → the zip holds the expected files;
-// the download shows in the export log, and a re-export of the same revision is marked as matching.
+// Journey: sign up → make a team → add the board house's fab profile → new design → save a revision against it →
+// download its bundle → the zip holds the expected files, and the fab notes carry that profile's name, etch tolerance
+// and finish; the download shows in the export log, and a re-export of the same revision is marked as matching.
 import { createHash } from 'node:crypto';
 import { readFile } from 'node:fs/promises';
 import { expect, test } from '@playwright/test';
@@ -12,8 +13,19 @@ test('a new team’s design downloads as a zip with every file, recorded in the 
 	await makeTeam(page, `Bundle bench ${s}`);
 	const designId = await newDesign(page, `Gate sensor ${s}`);
 
-	// Save: a new revision B from A through the editor.
+	// The board house the designer orders from: its own etch tolerance and finish (demo data), added to the team's list.
+	const profileName = `Etch house ${s}`;
+	const chosen = { etchToleranceMm: '0.035', finish: 'immersion silver' };
+	await page.goto('/fab-profiles');
+	await page.locator('input[name="name"]').fill(profileName);
+	await page.locator('input[name="etchToleranceMm"]').fill(chosen.etchToleranceMm);
+	await page.locator('select[name="finish"]').selectOption(chosen.finish);
+	await page.getByRole('button', { name: 'Add profile' }).click();
+	await expect(page.getByRole('status')).toContainText(`Added ${profileName}`);
+
+	// Save: a new revision B from A through the editor, checked against that profile.
 	await page.goto(`/designs/${designId}/edit?from=A`);
+	await page.getByTestId('fab-profile-select').selectOption({ label: profileName });
 	await page.getByRole('button', { name: 'Save as new revision' }).click();
 	await page.waitForURL(new RegExp(`/designs/${designId}/r/B$`));
 
@@ -27,6 +39,15 @@ test('a new team’s design downloads as a zip with every file, recorded in the 
 	const names = Object.keys(zip.files);
 	for (const part of ['copper-top.gbr', 'drawing.dxf', 'drawing.svg', 'design.sweep.json', 'fab-notes.txt', 'manifest.json']) expect(names).toContain(`${slug}-B.${part}`);
 	expect(names.some((n) => /\.gbr$/.test(n) && n !== `${slug}-B.copper-top.gbr`)).toBe(true);
+	// The fab notes name the chosen profile and print its etch tolerance and finish (never a figure of their own).
+	const notes = await zip.file(`${slug}-B.fab-notes.txt`)!.async('string');
+	expect(notes).toContain(`Fab profile: "${profileName}".`);
+	expect(notes).toContain(`Etched copper edges: ± ${chosen.etchToleranceMm} mm`);
+	expect(notes).toContain(`Hold etched copper edges within ± ${chosen.etchToleranceMm} mm`);
+	expect(notes).toContain(`[ ] Finish: ${chosen.finish}`);
+	expect(notes).not.toMatch(/±\s?0\.025 mm/);
+	expect(notes.indexOf('ORDER CHECKLIST')).toBeLessThan(notes.indexOf('1. BOARD'));
+
 	// The manifest lists every other file with its sha256 (recomputed here with node:crypto).
 	const manifest = JSON.parse(await zip.file(`${slug}-B.manifest.json`)!.async('string'));
 	const listed = JSON.stringify(manifest);

@@ -3,7 +3,7 @@ import { readFileSync } from 'node:fs';
 import { gate, prepare } from '../../lib/design';
 import { GeometryError } from '../../lib/geometry';
 import { InputError, formatIssue, parseDesignInput } from '../../lib/schemas';
-import { parseFabProfile, STANDARD_QUICK_TURN_PROFILE } from '../../lib/schemas/fab-profile';
+import { builtInFabProfileFor, parseFabProfile, STANDARD_MULTILAYER_PROFILE, STANDARD_QUICK_TURN_PROFILE } from '../../lib/schemas/fab-profile';
 import { UsageError } from '../usage-error';
 
 export const summary = 'check a design against a fab profile (trace, spacing, drill, ring, edge, notch); prints the violations as JSON';
@@ -13,13 +13,15 @@ export const help = `Usage: npm run cli -- check design.json [--profile profile.
 Sizes the design, builds its artwork and checks it against a fab capability profile. Prints ONE
 JSON object: \`design\` (its name), \`profile\` (the profile's name and every value it was checked
 against), \`clean\` and \`violations\`, each with ruleId (trace-width, copper-spacing, drill-size,
-annular-ring, edge-clearance, slot-width), layerId, shapeIds, location {xMm, yMm}, measuredMm,
+annular-ring, edge-clearance, slot-width, stack-build), layerId, shapeIds, location {xMm, yMm}, measuredMm,
 requiredMm and a message.
 
   --profile FILE  a fab profile JSON (name, minTraceWidthMm, minSpacingMm, minDrillMm,
                   minAnnularRingMm, copperToEdgeMm, minSlotWidthMm, etchToleranceMm,
-                  platedDrillToleranceMm, nonPlatedDrillToleranceMm); default: the built-in
-                  "${STANDARD_QUICK_TURN_PROFILE.name}" profile
+                  platedDrillToleranceMm, nonPlatedDrillToleranceMm; optional: maxCopperLayers,
+                  mixedCores, boardThicknessTolerancePercent, finish); default: the built-in
+                  "${STANDARD_QUICK_TURN_PROFILE.name}" profile, or "${STANDARD_MULTILAYER_PROFILE.name}"
+                  for a stack of more than two coppers
 
 Exit codes: 0 clean; 3 violations (the list is still printed on stdout); 2 bad input, with one line
 on stderr naming the field, the value and the allowed range.`;
@@ -60,8 +62,9 @@ export async function run(argv: string[]): Promise<number> {
 	try {
 		const args = parseArgs(argv);
 		const input = parseDesignInput(readJson(args.design));
-		const profile = args.profile ? parseFabProfile(readJson(args.profile)) : STANDARD_QUICK_TURN_PROFILE;
-		const violations = gate(prepare(input), profile);
+		const prepared = prepare(input);
+		const profile = args.profile ? parseFabProfile(readJson(args.profile)) : builtInFabProfileFor(prepared.artwork.metadata.copperLayerCount);
+		const violations = gate(prepared, profile);
 		process.stdout.write(`${JSON.stringify({ design: input.name, profile, clean: violations.length === 0, violations }, null, 2)}\n`);
 		return violations.length === 0 ? 0 : 3;
 	} catch (err) {

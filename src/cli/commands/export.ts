@@ -11,7 +11,7 @@ import { hashFiles, type ExportFile } from '../../lib/formats/manifest';
 import { parseFormatList } from '../../lib/formats/parse-format-list';
 import { GeometryError } from '../../lib/geometry';
 import { InputError, formatIssue, parseDesignInput, WAIVER_MAX_CHARS, WAIVER_MIN_CHARS, waiverReasonSchema } from '../../lib/schemas';
-import { parseFabProfile, STANDARD_QUICK_TURN_PROFILE } from '../../lib/schemas/fab-profile';
+import { builtInFabProfileFor, parseFabProfile, STANDARD_MULTILAYER_PROFILE, STANDARD_QUICK_TURN_PROFILE } from '../../lib/schemas/fab-profile';
 import { UsageError } from '../usage-error';
 
 export const summary = 'write Gerber, drill, DXF, SVG, sweep JSON and fab notes for a design, or one zip of them';
@@ -32,8 +32,9 @@ Gerber and drill file is also read back (@tracespace/parser) and compared with t
   --formats LIST    comma-separated, from: ${formatIds.join(', ')} (default: ${bundleFormatIds.join(',')}; step only when named)
   --revision LABEL  revision label used in file names and headers (default A)
   --date DATE       revision date written into the files (default 2000-01-01; no clock is read)
-  --profile FILE    a fab profile JSON (see \`check --help\`); default: the built-in
-                    "${STANDARD_QUICK_TURN_PROFILE.name}" profile
+  --profile FILE    a fab profile JSON (see \`check --help\`); its name and figures go into the fab
+                    notes; default: the built-in "${STANDARD_QUICK_TURN_PROFILE.name}" profile, or
+                    "${STANDARD_MULTILAYER_PROFILE.name}" for a stack of more than two coppers
   --waive REASON    export despite design-rule violations, for this reason (${WAIVER_MIN_CHARS}–${WAIVER_MAX_CHARS} characters)
 
 Exit codes: 0 ok; 2 bad input (one line naming the field, the value and the allowed range);
@@ -104,10 +105,10 @@ export async function run(argv: string[], deps: ExportCommandDependencies = {}):
 		const raw = readJson(args.file, 'design file');
 		const formats = parseFormatList(args.formats, '--formats');
 		const waive = parseWaive(args.waive);
-		const profile = args.profile ? parseFabProfile(readJson(args.profile, 'fab profile')) : STANDARD_QUICK_TURN_PROFILE;
 		const input = parseDesignInput(raw);
 		const meta = createExportMeta({ designName: input.name, revisionLabel: args.revision, revisionDate: args.date });
 		const prepared = prepare(input);
+		const profile = args.profile ? parseFabProfile(readJson(args.profile, 'fab profile')) : builtInFabProfileFor(prepared.artwork.metadata.copperLayerCount);
 		const violations = gate(prepared, profile);
 		if (violations.length > 0 && waive === null) {
 			process.stdout.write(`${JSON.stringify({ design: input.name, profile, clean: false, violations }, null, 2)}\n`);
@@ -115,7 +116,7 @@ export async function run(argv: string[], deps: ExportCommandDependencies = {}):
 			return 3;
 		}
 		const waiver = violations.length > 0 && waive ? { reason: waive, profileName: profile.name, violations: violations.map((v) => v.message) } : undefined;
-		const written = await writeFiles(prepared, formats, meta, waiver ? { waiver } : {});
+		const written = await writeFiles(prepared, formats, meta, { profile, ...(waiver ? { waiver } : {}) });
 		const files = deps.corruptFiles ? await hashFiles(deps.corruptFiles(written)) : written;
 		if (holdsFabFiles(files)) {
 			// judged with the complete Gerber + drill set, the delivered files taking the place of their twins

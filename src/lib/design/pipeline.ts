@@ -48,6 +48,8 @@ export function gate(prepared: PreparedDesign, profile: FabProfile): Violation[]
 export interface WriteOptions {
 	/** Waived design-rule violations, printed in the fab notes (none: the notes are as without a waiver). */
 	readonly waiver?: FabNotesWaiver;
+	/** The fab profile the design was checked against, named in the fab notes (none: the built-in that can build the stack). */
+	readonly profile?: FabProfile;
 }
 
 /**
@@ -59,7 +61,7 @@ export async function writeFiles(prepared: PreparedDesign, formats: readonly For
 	const files: ExportFile[] = [];
 	for (const format of writeOrder.map(formatEntry)) {
 		if (!formats.includes(format.id) || !format.appliesTo(prepared.artwork)) continue;
-		const context = { earlierFileNames: files.map((f) => f.name), manifestName, ...(options.waiver ? { waiver: options.waiver } : {}) };
+		const context = { earlierFileNames: files.map((f) => f.name), manifestName, ...(options.waiver ? { waiver: options.waiver } : {}), ...(options.profile ? { profile: options.profile } : {}) };
 		for (const file of format.write(prepared, meta, context)) files.push(file);
 	}
 	const hashed = await hashFiles(files);

@@ -5,12 +5,14 @@ import { checkCopperSpacing } from './check-copper-spacing';
 import { checkAnnularRing, checkDrillSize } from './check-drills';
 import { checkEdgeClearance } from './check-edge-clearance';
 import { checkSlotWidth } from './check-slot-width';
+import { checkStackBuild } from './check-stack-build';
 import { checkTraceWidth } from './check-trace-width';
 import type { Violation } from './violation';
 
 /** Every violation of the profile, grouped by rule in a fixed order; empty when the artwork is buildable. */
 export function checkArtwork(artwork: Artwork, profile: FabProfile): Violation[] {
 	return [
+		...checkStackBuild(artwork, profile),
 		...checkTraceWidth(artwork, profile),
 		...checkCopperSpacing(artwork, profile),
 		...checkDrillSize(artwork, profile),

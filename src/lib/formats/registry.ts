@@ -3,6 +3,7 @@
 import type { Artwork } from '../artwork';
 import type { SizedDesign } from '../rf';
 import type { DesignInput } from '../schemas';
+import { builtInFabProfileFor, type FabProfile } from '../schemas/fab-profile';
 import { buildArrayPatternDocument, serializeArrayPattern } from './array-pattern';
 import { exportFileName } from './bundle/file-names';
 import { toDxf } from './dxf';
@@ -34,6 +35,8 @@ export interface FormatWriteContext {
 	readonly manifestName: string;
 	/** Waived design-rule violations, printed in the fab notes' cautions. */
 	readonly waiver?: FabNotesWaiver;
+	/** The fab profile the design was checked against (the fab notes name it and take their figures from it). */
+	readonly profile?: FabProfile;
 }
 
 export interface FormatEntry {
@@ -137,7 +140,9 @@ const entries: { readonly [K in FormatId]: FormatEntry & { readonly id: K } } = 
 		write: ({ sized, artwork }, meta, context) => {
 			const name = exportFileName(meta, 'fab-notes', 'txt');
 			const fileNames = [...context.earlierFileNames, name, context.manifestName];
-			const extras = { fileNames, warnings: sized.warnings.map((w) => w.message), solderMask: sized.input.solderMask, ...(context.waiver ? { waiver: context.waiver } : {}) };
+			// the profile the design was checked against, named with its figures; without one, the built-in that can build the stack
+			const profile = context.profile ?? builtInFabProfileFor(artwork.metadata.copperLayerCount);
+			const extras = { fileNames, solderMask: sized.input.solderMask, profile, input: sized.input, ...(context.waiver ? { waiver: context.waiver } : {}) };
 			return [textFile(name, buildFabNotes(artwork, meta, extras))];
 		}
 	}

@@ -8,7 +8,7 @@
 // at the target. The substrate height is held as designed: one resonance cannot separate an εr error from
 // a thickness error, and εr dominates (f ∝ 1/√εreff), so the whole shift is booked to an "apparent" εr.
 // (Imports come from the defining files, not ./index, so that index can re-export this module.)
-import { InputError, parseDesignInput, type DesignInput } from '../schemas';
+import { InputError, orderedLaminateOf, parseDesignInput, type DesignInput } from '../schemas';
 import { requirePositive } from './guard';
 import { resonantFrequencyHz } from './resonant-frequency';
 import type { SizedDesign, SizedPatch } from './sized-design';
@@ -152,6 +152,8 @@ export function proposeRetune(design: unknown, measuredFrequencyHz: number, opti
 	const holdWidth = options.holdWidth === true && built.patch.kind === 'rectangular';
 	const proposedDocument = {
 		...original,
+		// the board is still built on the laminate that was bought; the apparent εr below is a model value
+		laminate: orderedLaminateOf(original),
 		substrate: { ...original.substrate, relativePermittivity: apparentEr },
 		...(holdWidth && built.patch.kind === 'rectangular' ? { patchWidthMm: built.patch.widthMm } : {})
 	};

@@ -83,6 +83,25 @@ export const substrateSchema = z.strictObject({
 	heightToleranceMm: bounded(0, 10).default(0)
 });
 
+/**
+ * The laminate as it is bought: its name and the values its datasheet (or, for a built-in material
+ * class, the class) states. The substrate holds the values the sizing uses; they are the laminate's
+ * unless the substrate's εr is a fitted model value, such as a retune's apparent εr back-solved from
+ * a measured board. The fab notes order this laminate, never a fitted value. Absent: the substrate
+ * values are the laminate's, and it has no recorded name.
+ */
+export const orderedLaminateSchema = z.strictObject({
+	/** The product's name as the team's laminate library has it; absent: no product named (the εr's material class applies). */
+	name: z.string().trim().min(1, { error: 'must not be empty' }).max(80, { error: 'at most 80 characters' }).superRefine(plainText('name')).optional(),
+	/** εr as the datasheet (or class) states it. */
+	relativePermittivity: bounded(1, 30, { exclusiveMin: true }),
+	/** ± on εr as the datasheet states it; absent: not stated. */
+	relativePermittivityTolerance: bounded(0, 5).optional(),
+	/** tanδ as the datasheet states it; absent: not stated. */
+	lossTangent: bounded(0, 1, { exclusiveMax: true }).optional()
+});
+export type OrderedLaminate = z.output<typeof orderedLaminateSchema>;
+
 export const insetOptionsSchema = z.strictObject({
 	/** Gap between the feed line and the patch on each side of the inset notch. */
 	notchGapMm: bounded(0.01, 20).optional()
@@ -222,6 +241,8 @@ const designInputObject = z.strictObject({
 	shape: z.enum(patchShapes).default('rectangular'),
 	feed: z.enum(allFeedKinds).default('inset'),
 	substrate: substrateSchema,
+	/** The laminate that is bought, when it is named or the substrate's εr is a fitted value (see orderedLaminateSchema). */
+	laminate: orderedLaminateSchema.optional(),
 	/** Input resistance the feed point should present (usually the line's Z0). */
 	targetImpedanceOhm: bounded(10, 200).default(50),
 	/** Characteristic impedance of the feed line from the board edge. */
@@ -300,6 +321,11 @@ type RefineContext = z.core.$RefinementCtx<ParsedDocument>;
 /** How many copper layers a document's feed and parasitic patch need. */
 export function requiredCopperCount(d: Pick<ParsedDocument, 'feed' | 'parasitic'>): number {
 	return (layeredFeedKinds as readonly string[]).includes(d.feed) || d.parasitic ? 3 : 2;
+}
+
+/** How many copper layers a validated document's board has: its explicit stack's, else what its feed needs. */
+export function copperLayerCountOf(d: Pick<ParsedDocument, 'feed' | 'parasitic' | 'stack'>): number {
+	return d.stack ? d.stack.filter((l) => l.kind === 'copper').length : requiredCopperCount(d);
 }
 
 /** Which overrides apply to which shapes and feeds. */

@@ -3,6 +3,13 @@ import { z } from 'zod';
 import { parseWith } from './input-error';
 import { plainText } from './plain-text';
 
+/**
+ * Surface finishes a board house plates on bare copper (trade names, IPC-4552/4553/4554 families;
+ * from memory). ENIG and immersion silver stay flat and thin; HASL leaves an uneven solder coat.
+ */
+export const fabFinishes = ['ENIG', 'immersion silver', 'immersion tin', 'OSP', 'HASL (lead-free)', 'bare copper'] as const;
+export type FabFinish = (typeof fabFinishes)[number];
+
 /** A finite length in mm within [min, max]; the error message states the allowed range. */
 function lengthMm(min: number, max: number) {
 	const range = `allowed range [${min}, ${max}] mm`;
@@ -38,7 +45,28 @@ export const fabProfileSchema = z
 		/** ± on a plated hole's finished diameter. */
 		platedDrillToleranceMm: lengthMm(0, 1),
 		/** ± on a non-plated hole's diameter. */
-		nonPlatedDrillToleranceMm: lengthMm(0, 1)
+		nonPlatedDrillToleranceMm: lengthMm(0, 1),
+		/**
+		 * The most copper layers the house laminates in this process: 2 for a double-sided service; a
+		 * three-copper stack (two cores bonded with a film) needs a multilayer process. Absent in profiles
+		 * stored before it existed: 2 (the conservative reading of a profile that never said).
+		 */
+		maxCopperLayers: z
+			.number({ error: 'must be a whole number; allowed range [1, 32]' })
+			.int({ error: 'must be a whole number; allowed range [1, 32]' })
+			.gte(1, { error: 'allowed range [1, 32]' })
+			.lte(32, { error: 'allowed range [1, 32]' })
+			.default(2),
+		/** Whether the house bonds cores of different materials (different εr or tanδ) into one board. Absent: false. */
+		mixedCores: z.boolean({ error: 'must be true or false' }).default(false),
+		/** ± on the finished board thickness, in percent of the nominal. Absent: 10 % (common practice, no source). */
+		boardThicknessTolerancePercent: z
+			.number({ error: 'must be a finite number; allowed range [0, 50] %' })
+			.gte(0, { error: 'allowed range [0, 50] %' })
+			.lte(50, { error: 'allowed range [0, 50] %' })
+			.default(10),
+		/** The surface finish ordered from this house (see fabFinishes). Absent: ENIG. */
+		finish: z.enum(fabFinishes, { error: `must be one of: ${fabFinishes.join(', ')}` }).default('ENIG')
 	})
 	.superRefine((p, ctx) => {
 		// A slot is a gap too: a house that cannot hold a 0.15 mm space cannot hold a 0.1 mm notch.
@@ -63,7 +91,8 @@ export type FabProfile = z.output<typeof fabProfileSchema>;
  * - 0.3 mm copper to the routed edge;
  * - 0.2 mm notch/slot: a little wider than the space, because a narrow slot cut into a wide copper
  *   area is etched from both walls and closes first;
- * - ±0.05 mm etch, ±0.075 mm plated and ±0.05 mm non-plated drill diameter.
+ * - ±0.05 mm etch, ±0.075 mm plated and ±0.05 mm non-plated drill diameter;
+ * - two copper layers on one core, no mixed materials; ±10 % finished thickness; ENIG finish.
  */
 export const STANDARD_QUICK_TURN_PROFILE: FabProfile = Object.freeze({
 	name: 'standard quick-turn two-layer',
@@ -75,8 +104,29 @@ export const STANDARD_QUICK_TURN_PROFILE: FabProfile = Object.freeze({
 	minSlotWidthMm: 0.2,
 	etchToleranceMm: 0.05,
 	platedDrillToleranceMm: 0.075,
-	nonPlatedDrillToleranceMm: 0.05
+	nonPlatedDrillToleranceMm: 0.05,
+	maxCopperLayers: 2,
+	mixedCores: false,
+	boardThicknessTolerancePercent: 10,
+	finish: 'ENIG'
 });
+
+/**
+ * The built-in profile for stacks of more than two coppers: the quick-turn minimums (common practice,
+ * no source) in a multilayer process that bonds cores with a film, of one or of different materials
+ * (the usual build of an aperture- or proximity-coupled patch).
+ */
+export const STANDARD_MULTILAYER_PROFILE: FabProfile = Object.freeze({
+	...STANDARD_QUICK_TURN_PROFILE,
+	name: 'standard multilayer, bonded cores',
+	maxCopperLayers: 6,
+	mixedCores: true
+});
+
+/** The built-in profile that can build a stack of `copperLayerCount` coppers: two-layer when it can, else multilayer. */
+export function builtInFabProfileFor(copperLayerCount: number): FabProfile {
+	return copperLayerCount <= STANDARD_QUICK_TURN_PROFILE.maxCopperLayers ? STANDARD_QUICK_TURN_PROFILE : STANDARD_MULTILAYER_PROFILE;
+}
 
 /** Validates a fab profile document or throws InputError (field path, value, allowed range). */
 export function parseFabProfile(raw: unknown): FabProfile {

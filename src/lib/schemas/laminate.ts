@@ -1,6 +1,6 @@
 // A laminate in a team's library: the substrate values a design copies, validated like the design's own substrate.
 import { z } from 'zod';
-import { substrateSchema } from './design-input';
+import { substrateSchema, type DesignInput, type OrderedLaminate } from './design-input';
 import { plainText } from './plain-text';
 
 const s = substrateSchema.shape;
@@ -64,4 +64,18 @@ export const laminateClasses: readonly LaminateClass[] = [
 /** The material class an εr falls in (the first whose range holds it; [lo, hi) except the last). */
 export function laminateClassFor(relativePermittivity: number): LaminateClass {
 	return laminateClasses.find((c) => relativePermittivity >= c.relativePermittivityRange[0] && relativePermittivity < c.relativePermittivityRange[1]) ?? laminateClasses[laminateClasses.length - 1];
+}
+
+/**
+ * The laminate the design is built on: the one it records, or else its substrate's stated values with no
+ * product named (a retune keeps this while its substrate carries the fitted εr).
+ */
+export function orderedLaminateOf(design: DesignInput): OrderedLaminate {
+	if (design.laminate) return design.laminate;
+	const s = design.substrate;
+	return {
+		relativePermittivity: s.relativePermittivity,
+		...(s.relativePermittivityTolerance > 0 ? { relativePermittivityTolerance: s.relativePermittivityTolerance } : {}),
+		...(s.lossTangent !== undefined ? { lossTangent: s.lossTangent } : {})
+	};
 }

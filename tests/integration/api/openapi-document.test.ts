@@ -39,7 +39,7 @@ describe('openApiDocument', () => {
 		expect(schemas.ExportRefusal.required).toEqual(expect.arrayContaining(['error', 'profile', 'violations']));
 		expect(schemas.ExportRefusal.properties.violations.items.$ref).toBe('#/components/schemas/Violation');
 		// the rule ids of src/lib/drc/violation.ts
-		expect(schemas.Violation.properties.ruleId.enum).toEqual(['trace-width', 'copper-spacing', 'drill-size', 'annular-ring', 'edge-clearance', 'slot-width']);
+		expect(schemas.Violation.properties.ruleId.enum).toEqual(['trace-width', 'copper-spacing', 'drill-size', 'annular-ring', 'edge-clearance', 'slot-width', 'stack-build']);
 		expect(schemas.FabProfile.required).toContain('minTraceWidthMm');
 		expect(download.post.requestBody.content['application/json'].schema.$ref).toBe('#/components/schemas/WaiverBody');
 		expect(schemas.WaiverBody.required).toEqual(['waiver']);

@@ -162,7 +162,7 @@ describe('cli export: the probe model (solid pin or plated barrel) in the drill 
 	it('carries a plated barrel with its plating (default 25 µm) into the drill comment, the notes and the sweep stack', () => {
 		const f = files({ ...goldenDesign, probe: { drillDiameterMm: 1.3, clearanceDiameterMm: 4.1, model: 'plated-barrel' } }, 'barrel');
 		expect(f.drill).toMatch(/^; probe: plated barrel with 25 um copper wall; finished hole 1\.300 mm$/m);
-		expect(f.notes).toContain('   Probe hole: plated barrel, at least 25 µm copper on the hole wall, finished at 1.3 mm (the simulation models this barrel).');
+		expect(f.notes).toContain('   Probe hole: plated barrel, at least 25 µm copper on the hole wall, finished at 1.3 mm.');
 		const stack = f.sweep.points[0].stack;
 		const probe = stack.at(-1);
 		expect(probe).toMatchObject({ kind: 'probe', id: 'probe-drill', model: 'plated-barrel', drillDiameterMm: 1.3, platingThicknessUm: 25, zMm: 0 });
@@ -175,7 +175,7 @@ describe('cli export: the probe model (solid pin or plated barrel) in the drill 
 	it('carries a solid pin, and a stated plating thickness, through the same three files', () => {
 		const pin = files({ ...goldenDesign, probe: { drillDiameterMm: 1.3, clearanceDiameterMm: 4.1, model: 'solid-pin' } }, 'pin');
 		expect(pin.drill).toMatch(/^; probe: solid pin through the 1\.300 mm finished hole$/m);
-		expect(pin.notes).toContain('Probe hole: a solid pin goes through the 1.3 mm finished hole');
+		expect(pin.notes).toContain('Probe hole: finished at 1.3 mm; a solid connector pin is soldered through it after fabrication.');
 		expect(pin.sweep.points[0].stack.at(-1)).toMatchObject({ kind: 'probe', model: 'solid-pin', platingThicknessUm: null });
 		expect(validate(pin.sweep), JSON.stringify(validate.errors)).toBe(true);
 		const thick = files({ ...goldenDesign, probe: { drillDiameterMm: 1.3, clearanceDiameterMm: 4.1, model: 'plated-barrel', platingThicknessUm: 35 } }, 'thick');

@@ -8,6 +8,7 @@ import { addFabProfile, BUILT_IN_FAB_PROFILE_ID, listFabProfiles, matchingFabPro
 import { InputError } from '../../../src/lib/schemas';
 import { STANDARD_QUICK_TURN_PROFILE } from '../../../src/lib/schemas/fab-profile';
 import * as page from '../../../src/routes/(app)/fab-profiles/+page.server';
+import * as tolerancePage from '../../../src/routes/(app)/designs/[designId]/r/[label]/tolerance/+page.server';
 import { call } from '../accounts/helpers/route-event';
 import { createWorkspace, demoInput, identityOf, type Workspace } from '../exports/workspace-fixture';
 
@@ -105,6 +106,14 @@ describe('revision.fab_profile', () => {
 		const saved = await saveRevision(getDb(), { designId: ws.designId, parentLabel: 'A', userId: ws.people.editor.id, raw: demoInput(`Bench patch ${ws.suffix}`), fabProfile: eightMil(`Recorded ${ws.suffix}`) });
 		expect(await revisionFabProfile(getDb(), saved.id)).toEqual({ profile: eightMil(`Recorded ${ws.suffix}`), recorded: true });
 		await expect(sql`update revision set fab_profile = null where id = ${saved.id}`.execute(getDb())).rejects.toThrow(/immutable/);
+	});
+
+	it('gives the tolerance study the etch tolerance of the profile the revision recorded (the one its fab notes print)', async () => {
+		const house = { ...eightMil(`Etch ${ws.suffix}`), etchToleranceMm: 0.035 };
+		const saved = await saveRevision(getDb(), { designId: ws.designId, parentLabel: 'A', userId: ws.people.editor.id, raw: demoInput(`Bench patch ${ws.suffix}`), fabProfile: house });
+		const r = await call(tolerancePage.load as never, { identity: await identityOf(ws, 'viewer', 'session'), path: `/designs/${ws.designId}/r/${saved.label}/tolerance`, params: { designId: ws.designId, label: saved.label } });
+		expect(r.outcome).toBe('ok');
+		expect((r.data as { fabProfile: unknown }).fabProfile).toEqual({ name: house.name, etchToleranceMm: house.etchToleranceMm });
 	});
 
 	it('reads a revision older than the gate (NULL) as the built-in, marked as not recorded', async () => {

@@ -7,7 +7,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb, getDb } from '../../../src/lib/server/db';
 import { saveRevision } from '../../../src/lib/server/designs/save-revision';
 import { exportForRequest, exportRevision, ExportRefusedError, loadExportTarget, ReadBackFailedError, type ExportDependencies } from '../../../src/lib/server/exports';
-import { STANDARD_QUICK_TURN_PROFILE } from '../../../src/lib/schemas/fab-profile';
+import { STANDARD_MULTILAYER_PROFILE, STANDARD_QUICK_TURN_PROFILE } from '../../../src/lib/schemas/fab-profile';
+import { resolveFabProfileChoice } from '../../../src/lib/server/fab-profiles';
+import { layeredDocument, threeCopperStack } from '../../fixtures/designs/layered-cases';
 import type { RequestIdentity, RequestUser } from '../../../src/lib/server/auth/request-identity';
 import * as uiExportRoute from '../../../src/routes/(app)/designs/[designId]/r/[label]/export/[format=format]/+server';
 import * as apiExportRoute from '../../../src/routes/api/v1/designs/[designId]/revisions/[label]/export/[format=format]/+server';
@@ -172,6 +174,39 @@ describe('the design-rule gate', () => {
 		const err = await exportRevision(target, 'svg', { userId: ws.people.owner.id, via: 'ui' }).catch((e) => e);
 		expect(err).toBeInstanceOf(ExportRefusedError);
 		expect((err as ExportRefusedError).violations).toHaveLength(2);
+	});
+});
+
+describe('the gate and a stack of two different cores without a bonding film', () => {
+	/** Aperture-coupled: εr 2.2 core, slot copper, εr 3.55 core, listed with no bonding film between them (demo data). */
+	const twoCores = () => layeredDocument({ name: `Bench patch ${ws.suffix}`, feed: 'aperture-coupled', stack: [threeCopperStack[0], threeCopperStack[1], threeCopperStack[3], threeCopperStack[4], threeCopperStack[5]] });
+
+	it('refuses it against a two-layer profile, saying in words that the house cannot build it', async () => {
+		const label = (await saveRevision(getDb(), { designId: ws.designId, parentLabel: 'A', userId: ws.people.editor.id, raw: twoCores(), note: 'two cores, two-layer house', fabProfile: STANDARD_QUICK_TURN_PROFILE })).label;
+		const res = await api(label, 'bundle', 'owner');
+		expect(res.status).toBe(422);
+		const body = await res.json();
+		expect(body.profile.name).toBe(STANDARD_QUICK_TURN_PROFILE.name);
+		const stack = body.violations.filter((v: { ruleId: string }) => v.ruleId === 'stack-build');
+		expect(stack.map((v: { message: string }) => v.message)).toEqual([
+			expect.stringMatching(/^the stack has 3 copper layers, and its 2 cores are listed with no bonding film between them .*builds at most 2: choose a fab profile of a multilayer process/),
+			expect.stringMatching(/^the stack bonds cores of 2 different materials .*does not build mixed-material boards/)
+		]);
+		expect((await recordsOf(label)).length).toBe(0);
+	});
+
+	it('records the built-in multilayer profile for the built-in choice (and for no choice), which builds it; the notes name it', async () => {
+		const chosen = await resolveFabProfileChoice(getDb(), ws.teamId, 'built-in', twoCores());
+		expect(chosen).toEqual(STANDARD_MULTILAYER_PROFILE);
+		const label = (await saveRevision(getDb(), { designId: ws.designId, parentLabel: 'A', userId: ws.people.editor.id, raw: twoCores(), note: 'two cores, no profile named' })).label;
+		const row = await getDb().selectFrom('revision').select('fab_profile').where('design_id', '=', ws.designId).where('label', '=', label).executeTakeFirstOrThrow();
+		expect(row.fab_profile).toEqual(STANDARD_MULTILAYER_PROFILE);
+		const res = await api(label, 'notes', 'owner');
+		expect(res.status).toBe(200);
+		const notes = await res.text();
+		expect(notes).toContain(`Fab profile: "${STANDARD_MULTILAYER_PROFILE.name}".`);
+		expect(notes).toContain('[ ] Layer count: 3 copper layers (top side, 1 inner layer, bottom side)');
+		expect(notes).toContain('The stack lists no bonding film between its 2 cores');
 	});
 });
 

@@ -87,7 +87,8 @@ const cases: RuleCase[] = [
 
 describe('checkArtwork, one rule at a time', () => {
 	it('covers every rule with at least one crafted case', () => {
-		expect([...new Set(cases.map((c) => c.rule))].sort()).toEqual([...DRC_RULE_IDS].sort());
+		// stack-build judges the stack against the profile's process, not a length: tests/unit/drc/check-stack-build.test.ts
+		expect([...new Set(cases.map((c) => c.rule))].sort()).toEqual(DRC_RULE_IDS.filter((r) => r !== 'stack-build').sort());
 	});
 
 	it.each(cases)('$rule fires alone when the $what is 1 µm under the limit', ({ rule, build, limitMm }) => {

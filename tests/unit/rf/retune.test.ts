@@ -106,3 +106,22 @@ describe('proposeRetune', () => {
 		expect(() => proposeRetune({ frequencyHz: 1 }, 2.4e9)).toThrow(InputError);
 	});
 });
+
+describe('proposeRetune and the laminate that is bought', () => {
+	const base = designs[0].doc;
+
+	it('keeps the designed laminate as the one bought while the substrate carries the apparent εr', () => {
+		const p = proposeRetune(base, 0.95 * size(base).input.frequencyHz);
+		expect(p.input.substrate.relativePermittivity).toBe(p.apparentRelativePermittivity);
+		// the document stated no tanδ: the class value sizing assumes is not the laminate's own statement
+		expect(p.input.laminate).toEqual({ relativePermittivity: p.designRelativePermittivity });
+	});
+
+	it('keeps a named laminate through a retune of a retune', () => {
+		const named = { ...base, laminate: { name: 'Demo laminate 4.4', relativePermittivity: base.substrate.relativePermittivity, relativePermittivityTolerance: 0.1 } };
+		const first = proposeRetune(named, 0.97 * size(named).input.frequencyHz);
+		const second = proposeRetune(first.input, 0.99 * first.input.frequencyHz);
+		expect(second.input.laminate).toEqual(named.laminate);
+		expect(second.input.substrate.relativePermittivity).not.toBe(named.laminate.relativePermittivity);
+	});
+});

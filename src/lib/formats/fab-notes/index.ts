@@ -1,2 +1,2 @@
 // Fab notes: plain text from templates/fab-notes.ts.
-export { buildFabNotes, fillTemplate, OUNCE_COPPER_THICKNESS_UM, type FabNotesExtras, type FabNotesWaiver } from './build-fab-notes';
+export { buildFabNotes, copperWeightOf, fillTemplate, layerCountWords, OUNCE_COPPER_THICKNESS_UM, scientific, type FabNotesExtras, type FabNotesWaiver } from './build-fab-notes';

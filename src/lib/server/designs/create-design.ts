@@ -2,7 +2,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Kysely } from 'kysely';
 import { toDesignSlug } from '../../formats';
-import { parseRevisionNote } from '../../schemas';
+import { builtInFabProfileFor, copperLayerCountOf, parseRevisionNote } from '../../schemas';
 import type { Database } from '../db/database';
 import * as designQueries from '../db/design.queries';
 import { toDesign, type Design } from './design-model';
@@ -46,7 +46,9 @@ export async function createDesign(db: Kysely<Database>, opts: CreateDesignOptio
 					input: JSON.stringify(input),
 					results: JSON.stringify(sized),
 					note,
-					created_by: opts.userId
+					created_by: opts.userId,
+					// the built-in profile that can build the stack (a three-copper first revision needs the multilayer one)
+					fab_profile: JSON.stringify(builtInFabProfileFor(copperLayerCountOf(input)))
 				});
 				const row = await designQueries.findDesignById(trx, id);
 				return { design: toDesign(row!), revisionLabel: label };

@@ -2,7 +2,7 @@
 // so two editors saving from the same parent each get their own revision (a fork), never an overwrite.
 import { randomUUID } from 'node:crypto';
 import type { Kysely } from 'kysely';
-import { InputError, parseRevisionNote } from '../../schemas';
+import { builtInFabProfileFor, copperLayerCountOf, InputError, parseRevisionNote } from '../../schemas';
 import type { FabProfile } from '../../schemas/fab-profile';
 import type { Database } from '../db/database';
 import * as designQueries from '../db/design.queries';
@@ -55,7 +55,8 @@ export async function saveRevision(db: Kysely<Database>, opts: SaveRevisionOptio
 			created_by: opts.userId,
 			...(opts.retunedFromMeasurementId ? { retuned_from_measurement_id: opts.retunedFromMeasurementId } : {}),
 			...(opts.homedFromFieldCheckId ? { homed_from_field_check_id: opts.homedFromFieldCheckId } : {}),
-			...(opts.fabProfile ? { fab_profile: JSON.stringify(opts.fabProfile) } : {})
+			// none chosen (API, Homing): the built-in that can build the stack, recorded so the gate and the notes agree
+			fab_profile: JSON.stringify(opts.fabProfile ?? builtInFabProfileFor(copperLayerCountOf(input)))
 		});
 		return { id, label, parentLabel: parent.label };
 	});

@@ -25,7 +25,14 @@ export async function startDesign(db: Kysely<Database>, opts: { teamId: string; 
 		frequencyHz: hzFromGhz(form.frequencyGHz),
 		shape: form.shape,
 		feed: defaultFeedFor(form.shape),
-		substrate: { ...laminate.properties }
+		substrate: { ...laminate.properties },
+		// named, so the fab notes order this laminate by name with its stated values
+		laminate: {
+			name: laminate.name,
+			relativePermittivity: laminate.properties.relativePermittivity,
+			...(laminate.properties.relativePermittivityTolerance > 0 ? { relativePermittivityTolerance: laminate.properties.relativePermittivityTolerance } : {}),
+			lossTangent: laminate.properties.lossTangent
+		}
 	};
 	try {
 		return await createDesign(db, { teamId: opts.teamId, userId: opts.userId, raw, note: `Started on ${laminate.name}` });

@@ -2,6 +2,7 @@
 // The check runs on a worker thread (a large array takes seconds), within the work budget.
 import type { Violation } from '$lib/drc';
 import type { SizedDesign } from '$lib/rf';
+import { copperLayerCountOf } from '$lib/schemas';
 import type { FabProfile } from '$lib/schemas/fab-profile';
 import { getDb } from '../db';
 import { revisionFabProfile } from '../fab-profiles';
@@ -21,7 +22,7 @@ const reports = createImmutableCache<GateReport>({ maxEntries: 256, maxBytes: Nu
 
 export function checkExportTarget(target: ExportTarget): Promise<GateReport> {
 	return reports.get(target.revision.id, async () => {
-		const { profile, recorded } = await revisionFabProfile(getDb(), target.revision.id);
+		const { profile, recorded } = await revisionFabProfile(getDb(), target.revision.id, copperLayerCountOf((target.revision.results as SizedDesign).input));
 		const { violations } = await runBudgetedWork(
 			{ type: 'gate', sized: target.revision.results as SizedDesign, profile },
 			{ what: `The design-rule check of revision ${target.revision.label}` }

@@ -1,6 +1,8 @@
 // One download: one worker task runs the design-rule gate, builds the revision's bytes (read back before they are
 // offered) and hashes every file and the delivery; then exactly one export record (with the waiver, if one was needed).
 import type { Violation } from '$lib/drc';
+import { copperLayerCountOf } from '$lib/schemas';
+import type { SizedDesign } from '$lib/rf';
 import type { ExportKind } from '$lib/schemas/api';
 import type { FabProfile } from '$lib/schemas/fab-profile';
 import { getDb } from '../db';
@@ -49,7 +51,7 @@ const builtExports = createImmutableCache<ExportBuildReport>({
  * clean revision waives nothing and is not recorded.
  */
 export async function exportRevision(target: ExportTarget, kind: ExportKind, by: { userId: string; via: ExportVia }, opts: ExportOptions = {}): Promise<DeliveredExport> {
-	const { profile } = await revisionFabProfile(getDb(), target.revision.id);
+	const { profile } = await revisionFabProfile(getDb(), target.revision.id, copperLayerCountOf((target.revision.results as SizedDesign).input));
 	const buildOpts = { ...(opts.waiver ? { waiverReason: opts.waiver } : {}), deps: opts.deps };
 	// Test hooks change the bytes on purpose: such builds are never shared.
 	const { outcome } = opts.deps

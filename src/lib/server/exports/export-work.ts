@@ -73,7 +73,7 @@ async function buildPrepared(input: ExportBuildInput, prepared: PreparedDesign, 
 	const waiver = violations.length > 0 && input.waiverReason ? input.waiverReason : null;
 	const notesWaiver: FabNotesWaiver | undefined = waiver ? { reason: waiver, profileName: profile.name, violations: violations.map((v) => v.message) } : undefined;
 	const formats: readonly FormatId[] = kind === 'bundle' ? bundleFormatIds : [kind];
-	const written = await writeFiles(prepared, formats, meta, notesWaiver ? { waiver: notesWaiver } : {});
+	const written = await writeFiles(prepared, formats, meta, { profile, ...(notesWaiver ? { waiver: notesWaiver } : {}) });
 	// test hooks rewrite bytes on purpose: what they return is hashed again
 	const files = corruptFiles ? await hashFiles(corruptFiles(written)) : written;
 	if (holdsFabFiles(files)) {

@@ -1,5 +1,6 @@
 // Retune from a measurement: the proposal (apparent εr, old vs new dimensions), and on confirmation a new revision linked to it.
 import type { Kysely } from 'kysely';
+import { copperLayerCountOf } from '../../schemas/design-input';
 import { proposeRetune, type RetuneProposal } from '../../rf/retune';
 import type { Database } from '../db/database';
 import type { Revision } from '../designs/design-model';
@@ -34,7 +35,7 @@ export async function confirmRetune(
 	const note =
 		`Retuned from measurement ${opts.measurement.fileName} of ${opts.revision.label}: resonance ${megahertz(proposal.measuredFrequencyHz)} ` +
 		`(target ${megahertz(proposal.targetFrequencyHz)}), apparent εr ${proposal.apparentRelativePermittivity} (designed ${proposal.designRelativePermittivity}).`;
-	const parentFab = await revisionFabProfile(db, opts.revision.id);
+	const parentFab = await revisionFabProfile(db, opts.revision.id, copperLayerCountOf(opts.revision.input));
 	const saved = await saveRevision(db, {
 		designId: opts.designId,
 		parentLabel: opts.revision.label,

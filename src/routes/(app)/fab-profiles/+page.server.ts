@@ -10,6 +10,9 @@ import type { Actions, PageServerLoad } from './$types';
 
 const lengthKeys = ['minTraceWidthMm', 'minSpacingMm', 'minDrillMm', 'minAnnularRingMm', 'copperToEdgeMm', 'minSlotWidthMm', 'etchToleranceMm', 'platedDrillToleranceMm', 'nonPlatedDrillToleranceMm'] as const;
 
+/** The process keys beside the lengths: copper layers, mixed cores (a checkbox), thickness ± %, finish. */
+const processKeys = ['maxCopperLayers', 'mixedCores', 'boardThicknessTolerancePercent', 'finish'] as const;
+
 export const load: PageServerLoad = async (event) => {
 	requireUser(event);
 	const { current } = await currentTeam(event.locals.identity, event.cookies);
@@ -24,9 +27,16 @@ export const actions: Actions = {
 		const data = await event.request.formData();
 		const teamId = String(data.get('teamId') ?? '');
 		const { user } = await requireTeamRole(event, teamId, 'fab-profile.write');
-		const values = Object.fromEntries(['name', ...lengthKeys].map((k) => [k, String(data.get(k) ?? '')]));
+		const values = Object.fromEntries(['name', ...lengthKeys, ...processKeys].map((k) => [k, String(data.get(k) ?? '')]));
 		const num = (t: string) => (t.trim() === '' ? undefined : Number(t));
-		const raw = { name: values.name, ...Object.fromEntries(lengthKeys.map((k) => [k, num(values[k])])) };
+		const raw = {
+			name: values.name,
+			...Object.fromEntries(lengthKeys.map((k) => [k, num(values[k])])),
+			maxCopperLayers: num(values.maxCopperLayers),
+			boardThicknessTolerancePercent: num(values.boardThicknessTolerancePercent),
+			mixedCores: values.mixedCores === 'on',
+			...(values.finish ? { finish: values.finish } : {})
+		};
 		try {
 			const added = await addFabProfile(getDb(), { teamId, userId: user.id, raw });
 			return { added: added.profile.name };

@@ -6,7 +6,7 @@ import { getDb } from '$lib/server/db';
 import { findDesignWithRevisions, listLaminates, saveRevision } from '$lib/server/designs';
 import { requireDesign } from '$lib/server/designs/design-access';
 import { listFabProfiles, matchingFabProfileId, resolveFabProfileChoice, revisionFabProfile } from '$lib/server/fab-profiles';
-import { InputError } from '$lib/schemas';
+import { copperLayerCountOf, InputError } from '$lib/schemas';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
@@ -19,7 +19,7 @@ export const load: PageServerLoad = async (event) => {
 	const laminates = await listLaminates(getDb(), design.teamId);
 	// The fab profile the new revision is checked against: the parent's pick unless the form picks another.
 	const fabProfiles = await listFabProfiles(getDb(), design.teamId);
-	const parentFabProfileId = matchingFabProfileId(fabProfiles, (await revisionFabProfile(getDb(), parent.id)).profile);
+	const parentFabProfileId = matchingFabProfileId(fabProfiles, (await revisionFabProfile(getDb(), parent.id, copperLayerCountOf(parent.input))).profile);
 	return { design, parent: { label: parent.label, input: parent.input, results: parent.results }, laminates, fabProfiles, parentFabProfileId };
 };
 
@@ -31,8 +31,9 @@ export const actions: Actions = {
 		const note = String(data.get('note') ?? '');
 		const from = String(data.get('from') ?? '');
 		try {
-			const fabProfile = await resolveFabProfileChoice(getDb(), design.teamId, String(data.get('fabProfileId') ?? '') || null);
-			const saved = await saveRevision(getDb(), { designId: design.id, parentLabel: from, userId: user.id, raw: documentFromFormValues(values), note, fabProfile });
+			const raw = documentFromFormValues(values);
+			const fabProfile = await resolveFabProfileChoice(getDb(), design.teamId, String(data.get('fabProfileId') ?? '') || null, raw);
+			const saved = await saveRevision(getDb(), { designId: design.id, parentLabel: from, userId: user.id, raw, note, fabProfile });
 			redirect(303, `/designs/${design.id}/r/${saved.label}`);
 		} catch (err) {
 			if (err instanceof InputError) return fail(400, { values, note, issues: fieldIssues(err.issues) });

@@ -8,7 +8,7 @@ import { requireDesign } from '$lib/server/designs/design-access';
 import { revisionFabCheck } from '$lib/server/fab-profiles';
 import { cancelFieldCheck, loadFieldCheckPanel, requireFieldCheck, reviseFromHoming, startFieldCheck } from '$lib/server/field-checks';
 import { findRetuneSource, requireRevision } from '$lib/server/measurements';
-import { InputError, parseWith } from '$lib/schemas';
+import { copperLayerCountOf, InputError, parseWith } from '$lib/schemas';
 import { startFieldCheckBodySchema } from '$lib/schemas/api';
 import { can } from '$lib/server/access';
 import type { Actions, PageServerLoad } from './$types';
@@ -21,7 +21,7 @@ export const load: PageServerLoad = async (event) => {
 	const children = found.revisions.filter((r) => r.parentId === revision.id).map((r) => r.label);
 	let fabCheck;
 	try {
-		fabCheck = await revisionFabCheck(getDb(), { teamId: design.teamId, revisionId: revision.id, profileId: event.url.searchParams.get('profile') });
+		fabCheck = await revisionFabCheck(getDb(), { teamId: design.teamId, revisionId: revision.id, profileId: event.url.searchParams.get('profile'), copperLayerCount: copperLayerCountOf(revision.input) });
 	} catch (err) {
 		if (err instanceof InputError) error(400, 'The fab profile named in the address is not one of the team’s fab profiles; choose one from the list on the revision page.');
 		throw err;
