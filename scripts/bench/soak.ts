@@ -8,6 +8,7 @@
 // minute against the lowest of the minute after the warm-up. RSS swings with each garbage collection; its
 // floor is what stays allocated, so a leak shows as a rising floor.
 import { mkdtempSync, rmSync } from 'node:fs';
+import { get as httpGet } from 'node:http';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import pg from 'pg';
@@ -97,10 +98,22 @@ export async function soakRun(opts: { seconds: number; warmupSeconds: number; wo
 		};
 		const arrayPath = `/api/v1/designs/${big.design.id}/revisions/A/export/bundle`;
 		const sweepPath = `/api/v1/designs/${ws.a.designId}/revisions/${ws.a.label}/sweep-plans/${plan.id}/sweep`;
+		// The first build of each may take minutes on a busy machine: longer than fetch waits for response headers
+		// (undici's 300 s), so the warm-up goes through node:http, which waits as long as the server works.
+		const downloadPatiently = (path: string) =>
+			new Promise<boolean>((done, fail) => {
+				const req = httpGet(`${server.origin}${path}`, { headers: { authorization: `Bearer ${ws.editor.token}` } }, (res) => {
+					let bytes = 0;
+					res.on('data', (chunk: Buffer) => (bytes += chunk.byteLength));
+					res.on('end', () => done(res.statusCode === 200 && bytes > 0));
+					res.on('error', fail);
+				});
+				req.on('error', fail);
+			});
 		for (const [which, path] of [['array', arrayPath], ['sweep', sweepPath]] as const) {
 			const t0 = performance.now();
 			console.log(`soak: first ${which} download (built once, before the clock)…`);
-			if (!(await download(path))) throw new Error(`the first ${which} download failed`);
+			if (!(await downloadPatiently(path))) throw new Error(`the first ${which} download failed`);
 			warmupDownloadsMs = { ...warmupDownloadsMs, [which]: performance.now() - t0 };
 		}
 		const steps: Record<Kind, (i: number) => Promise<boolean>> = {
