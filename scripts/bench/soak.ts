@@ -143,9 +143,17 @@ export async function soakRun(opts: { seconds: number; warmupSeconds: number; wo
 		const prober = (async () => {
 			while (performance.now() < end) {
 				const t0 = performance.now();
-				const res = await fetch(`${server.origin}/healthz`);
-				await res.arrayBuffer();
-				healthMs.push(res.ok ? performance.now() - t0 : Number.POSITIVE_INFINITY);
+				try {
+					const res = await fetch(`${server.origin}/healthz`);
+					await res.arrayBuffer();
+					healthMs.push(res.ok ? performance.now() - t0 : Number.POSITIVE_INFINITY);
+				} catch (err) {
+					// no answer at all counts as a failed probe; a server that died says why
+					healthMs.push(Number.POSITIVE_INFINITY);
+					const died = server.process.exitCode !== null || server.process.signalCode !== null;
+					if (errorSamples.length < 5) errorSamples.push(`/healthz: ${(err as Error).message}${died ? `; the server ended (${server.process.exitCode ?? server.process.signalCode}): ${server.log().slice(-2000)}` : ''}`);
+					if (died) break;
+				}
 				await new Promise((r) => setTimeout(r, 250));
 			}
 		})();
