@@ -18,8 +18,11 @@ import { goldenBundle, goldenDesign, goldenMeta } from '../../../fixtures/bundle
  * εeff), the probe 0.69 mm further from the centre (loaded edge resistance), the ground 0.008 mm
  * shorter, the sweep's new derived values, and two new warnings in the fab notes (small ground,
  * probe hole against the connector pin). Checked file by file against the previous build.
+ * Re-recorded for sweep JSON version 2 (issue 17): only design.sweep.json (formatVersion 2, the v2 schema URL, a base
+ * of the applicable fields, each point's solverSetup) and the manifest naming its hash changed; every Gerber, drill,
+ * DXF, SVG and the notes kept their bytes (checked file by file against the previous build).
  */
-const GOLDEN_SHA256 = 'b898aabda1aebab1d08f74831e8a174356d728769f9ce398b487dc8e93c46627';
+const GOLDEN_SHA256 = '12a1ce2a0a4f48c50bc020aa78d25eda888e751518b9ec6d552d34ccb4ddef97';
 const sha = (b: Uint8Array) => createHash('sha256').update(b).digest('hex');
 
 describe('export bundle', () => {
