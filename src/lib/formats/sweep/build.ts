@@ -31,15 +31,22 @@ export function applicableInput(input: DesignInput): DesignInputDocument {
 }
 
 /**
+ * Throws InputError (path "plan.mode") when the plan holds the geometry of a patch whose geometry cannot be held:
+ * truncated-corner and nearly-square patches take no dimension overrides. Saving a plan checks this too.
+ */
+export function checkPlanFitsDesign(base: Pick<DesignInput, 'shape'>, plan: Pick<SweepPlan, 'mode' | 'axes'>): void {
+	if (!holdsGeometry(plan) || base.shape === 'rectangular' || base.shape === 'circular') return;
+	throw new InputError([{ path: 'plan.mode', value: plan.mode ?? 'resize', message: `a ${base.shape} patch cannot hold its geometry (only rectangular and circular patches take dimension overrides); choose "re-size at each point" and no geometry axis` }]);
+}
+
+/**
  * The base with the revision's geometry written in as overrides (patch length and width or radius, inset depth or
  * probe offset) and its ground margin fixed, so a point that changes the material or one dimension keeps the rest.
  * What the base already states wins; the plan's axes are applied on top. Throws InputError for a patch whose
  * geometry cannot be held (truncated-corner and nearly-square patches take no overrides).
  */
 function withHeldGeometry(base: DesignInput, plan: SweepPlan): DesignInput {
-	if (base.shape !== 'rectangular' && base.shape !== 'circular') {
-		throw new InputError([{ path: 'plan.mode', value: plan.mode ?? 'resize', message: `a ${base.shape} patch cannot hold its geometry (only rectangular and circular patches take dimension overrides); use mode "resize"` }]);
-	}
+	checkPlanFitsDesign(base, plan);
 	const sized = size(base);
 	const patch = sized.patch as { lengthMm?: number; widthMm?: number; radiusMm?: number };
 	const feed = sized.feed as { insetDepthMm?: number; offsetYMm?: number };
@@ -99,6 +106,16 @@ function withoutControlCharactersInName(raw: unknown): unknown {
 	if (!raw || typeof raw !== 'object' || Array.isArray(raw)) return raw;
 	const name = (raw as { name?: unknown }).name;
 	return typeof name === 'string' ? { ...raw, name: replaceControlCharacters(name) } : raw;
+}
+
+/**
+ * The design-input document of one point: the base (with the revision's geometry held when the plan says so) and
+ * the point's field values written in. The browser's point preview and the sweep build use this one function.
+ */
+export function sweepPointInput(base: DesignInput, plan: SweepPlan, parameters: Record<string, number>): unknown {
+	let doc: unknown = holdsGeometry(plan) ? withHeldGeometry(base, plan) : base;
+	for (const [field, value] of Object.entries(parameters)) doc = withField(doc, field, value);
+	return doc;
 }
 
 type KnownDesign = { readonly sized: SizedDesign; readonly artwork: Artwork };

@@ -1,6 +1,7 @@
 // The sweep plan: which design-input fields vary, over which values, combined as a grid or zipped.
 import { z } from 'zod';
 import { InputError, parseWith } from '../../schemas';
+import { sweepModes, type SweepMode } from '../../schemas/sweep-plan';
 
 /** Hard limit on points in one sweep document; past it nothing is built. */
 export const MAX_SWEEP_POINTS = 10_000;
@@ -43,15 +44,7 @@ export type SweepableField = (typeof sweepableFields)[number];
  */
 export const geometryFields: readonly SweepableField[] = ['overrides.lengthMm', 'overrides.widthMm', 'overrides.radiusMm', 'overrides.insetDepthMm', 'overrides.probeOffsetMm'];
 
-/**
- * What a material (or any input) change does to the geometry:
- * - `resize`: every point is sized afresh from its inputs (a laminate change gives a re-designed patch);
- * - `hold-geometry`: the revision's patch length, width (or radius), inset depth or probe offset and ground margin are
- *   held and only the material or the other fields vary; the feed line keeps its impedance.
- * A plan without `mode` (every plan stored before it existed) means `resize`.
- */
-export const sweepModes = ['resize', 'hold-geometry'] as const;
-export type SweepMode = (typeof sweepModes)[number];
+export { sweepModes, type SweepMode } from '../../schemas/sweep-plan';
 
 /** True when the plan's points hold the revision's geometry (hold-geometry mode, or any geometry axis). */
 export function holdsGeometry(plan: { mode?: SweepMode; axes: readonly { field: string }[] }): boolean {
@@ -79,7 +72,11 @@ export const sweepPlanSchema = z
 		planVersion: z.literal(1).default(1),
 		/** grid: every combination of the axes; zip: the i-th value of every axis together. */
 		combine: z.enum(['grid', 'zip']).default('grid'),
-		/** resize (absent: the meaning of every plan stored before the field) or hold-geometry; see sweepModes. */
+		/**
+		 * resize: every point sized afresh; hold-geometry: the revision's patch length, width (or radius), inset depth or
+		 * probe offset and ground margin held, only the swept fields vary (the feed line keeps its impedance). Absent:
+		 * resize, the meaning of every plan stored before the field.
+		 */
 		mode: z.enum(sweepModes).optional(),
 		axes: z.array(z.union([rangeAxisSchema, listAxisSchema])).min(1, { error: 'needs at least one axis' }).max(6, { error: 'at most 6 axes' })
 	})
