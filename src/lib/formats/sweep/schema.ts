@@ -5,7 +5,7 @@ import { designInputSchema } from '../../schemas';
 import { sweepPointSchema } from '../../schemas/sweep-point';
 import { SWEEP_FORMAT, SWEEP_FORMAT_VERSION, SWEEP_SCHEMA_PATH } from './document';
 import { MAX_SWEEP_POINTS, sweepPlanSchema } from './plan';
-import sweepV1Schema from './sweep-v1.schema.json';
+import sweepV1Schema from './sweep-v1.schema.json' with { type: 'json' };
 
 function jsonSchemaOf(schema: z.ZodType, io: 'input' | 'output' = 'output'): Record<string, unknown> {
 	const out = z.toJSONSchema(schema, { target: 'draft-2020-12', io, unrepresentable: 'any' }) as Record<string, unknown>;
