@@ -1,5 +1,7 @@
-// Journey: make an API token → fetch a revision's sweep definition with it → it validates against the sweep JSON Schema (ajv);
-// the token reaches only its team, and the fetch is recorded in the export log as coming from the API.
+// Journey: make an API token → fetch a revision's sweep definition with it → it is version 2, validates against the sweep
+// JSON Schema (ajv) and states its port; a version-1 file still validates against /schemas/sweep-v1.json; the token
+// reaches only its team, and the fetch is recorded in the export log as coming from the API.
+import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import Ajv2020 from 'ajv/dist/2020.js';
 import { makeTeam, makeToken, newDesign, signUp, uniqueSuffix } from './helpers/exports';
@@ -25,7 +27,8 @@ test('a personal API token fetches a sweep definition that validates against the
 	const doc = await res.json();
 
 	// ajv (JSON Schema draft 2020-12) against the schema the app publishes at the document's own $schema URL.
-	expect(doc.$schema).toBe('/schemas/sweep-v1.json');
+	expect(doc.$schema).toBe('/schemas/sweep-v2.json');
+	expect(doc.formatVersion).toBe(2);
 	const published = await api.get(doc.$schema);
 	expect(published.status()).toBe(200);
 	const ajv = new Ajv2020({ allErrors: true, strict: false });
@@ -34,6 +37,18 @@ test('a personal API token fetches a sweep definition that validates against the
 	expect(doc.design.revision).toBe('A');
 	// A tampered document fails with a field-level error.
 	expect(validate({ ...doc, formatVersion: 'one' })).toBe(false);
+	// What a solver needs: the inset design's port is its feed line at the board edge, top copper against the ground.
+	expect(doc.points[0].solverSetup.ports).toEqual([expect.objectContaining({ kind: 'edge-line', edge: 'bottom', signalCopper: 'copper-top', returnCopper: 'copper-bottom', referenceImpedanceOhm: 50 })]);
+	expect(doc.points[0].solverSetup.materialsHoldAtHz).toBe(doc.points[0].derived.frequencyHz);
+	expect(doc.base).not.toHaveProperty('handedness');
+
+	// Version 1 stays readable: its schema is still published and validates a file written before version 2.
+	const v1 = await api.get('/schemas/sweep-v1.json');
+	expect(v1.status()).toBe(200);
+	const validateV1 = new Ajv2020({ allErrors: true, strict: false }).compile(await v1.json());
+	const oldFile = JSON.parse(readFileSync(new URL('../fixtures/sweep/v1-inset.json', import.meta.url), 'utf8'));
+	expect(validateV1(oldFile), JSON.stringify(validateV1.errors?.slice(0, 3))).toBe(true);
+	expect(validateV1(doc)).toBe(false);
 
 	// Without the token: 401; the OpenAPI document is public.
 	const anonymous = await playwright.request.newContext({ baseURL });

@@ -64,10 +64,42 @@ test('the count follows the typing, a plan over 10 000 points cannot be saved, a
 	expect(download.suggestedFilename()).toMatch(/-A\.sweep-thickness-and-margin\.sweep\.json$/);
 	const doc = JSON.parse(readFileSync((await download.path())!, 'utf8'));
 	expect(doc.pointCount).toBe(6010);
+	expect(doc.formatVersion).toBe(2);
+	// the default mode: re-size at each point (the plan is stored as plans were before modes)
+	expect(doc.plan).not.toHaveProperty('mode');
 	await expect(saved.getByRole('status')).toContainText('Saved');
 	const records = await getDb().selectFrom('export_record').selectAll().where('design_id', '=', designId).where('kind', '=', 'sweep-plan').execute();
 	expect(records.length).toBe(before + 1);
 	expect(records[records.length - 1].via).toBe('ui');
+});
+
+test('a laminate-spread plan that keeps the revision geometry holds the patch length, where re-sizing changes it', async ({ page }) => {
+	await signIn(page, `/designs/${designId}/r/A/sweeps`);
+	const form = page.getByTestId('sweep-plan-form');
+	await expect(page.getByTestId('point-count')).toHaveText('5');
+	await expect(page.getByTestId('point-geometry-mode')).toHaveText('re-sized at this point');
+	await form.getByLabel("keep this revision's geometry, vary the material").check();
+	await expect(page.getByTestId('point-geometry-mode')).toHaveText("this revision's, held");
+
+	const lengths = async (name: string) => {
+		await page.getByLabel('Plan name').fill(name);
+		await form.getByRole('button', { name: 'Save plan' }).click();
+		const saved = page.getByTestId('saved-plan').filter({ hasText: name });
+		await expect(saved).toContainText('5 points');
+		const downloadPromise = page.waitForEvent('download', { timeout: 60_000 });
+		await saved.getByRole('link', { name: 'Download sweep JSON' }).click();
+		const doc = JSON.parse(readFileSync((await (await downloadPromise).path())!, 'utf8'));
+		return { saved, doc, lengths: doc.points.map((p: { derived: { patch: { lengthMm: number } } }) => p.derived.patch.lengthMm) as number[] };
+	};
+	const held = await lengths('Laminate spread held');
+	await expect(held.saved).toContainText('geometry held');
+	expect(held.doc.plan.mode).toBe('hold-geometry');
+	expect(new Set(held.lengths).size).toBe(1);
+
+	await form.getByLabel('re-size at each point').check();
+	const resized = await lengths('Laminate spread re-sized');
+	await expect(resized.saved).toContainText('re-sized at each point');
+	expect(new Set(resized.lengths).size).toBe(5);
 });
 
 test('the tolerance study draws the spread with the usable band and the share of boards in it', async ({ page }) => {

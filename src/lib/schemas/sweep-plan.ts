@@ -3,6 +3,14 @@
 import { z } from 'zod';
 import { plainText } from './plain-text';
 
+/**
+ * What a material (or any input) change does to the geometry: `resize` sizes every point afresh (a laminate change
+ * gives a re-designed patch); `hold-geometry` keeps the revision's patch, inset depth or probe offset and ground
+ * margin and varies only the swept fields. A plan without a mode (every plan stored before it existed) means resize.
+ */
+export const sweepModes = ['resize', 'hold-geometry'] as const;
+export type SweepMode = (typeof sweepModes)[number];
+
 /** Rows the form offers (the document allows up to 6 axes; four cover every practical study). */
 export const SWEEP_FORM_AXES = 4;
 
@@ -19,8 +27,9 @@ export interface SweepFieldChoice {
 }
 
 /**
- * The fields an editor picks from. Sized dimensions (patch length, inset depth, feed width, probe offset)
- * are outputs of sizing, so a sweep moves them through the input that sets them.
+ * The fields an editor picks from. Inputs (frequency, laminate, impedances) move what sizing derives from them, or,
+ * in hold-geometry mode, only the material; the geometry rows (patch length, width, radius, inset depth, probe offset)
+ * set that dimension and always hold the rest of the revision's geometry.
  */
 export const sweepFieldChoices: readonly SweepFieldChoice[] = [
 	{ field: 'frequencyHz', label: 'Design frequency', unit: 'GHz', perUnit: 1e9, moves: 'patch length (and width)' },
@@ -34,7 +43,12 @@ export const sweepFieldChoices: readonly SweepFieldChoice[] = [
 	{ field: 'probe.drillDiameterMm', label: 'Probe drill', unit: 'mm', perUnit: 1, moves: 'probe hole' },
 	{ field: 'probe.clearanceDiameterMm', label: 'Probe anti-pad', unit: 'mm', perUnit: 1, moves: 'ground clearance' },
 	{ field: 'substrate.lossTangent', label: 'Loss tangent tanδ', unit: '', perUnit: 1, moves: 'estimates only' },
-	{ field: 'substrate.copperThicknessUm', label: 'Copper thickness', unit: 'µm', perUnit: 1, moves: 'feed width (slightly)' }
+	{ field: 'substrate.copperThicknessUm', label: 'Copper thickness', unit: 'µm', perUnit: 1, moves: 'feed width (slightly)' },
+	{ field: 'overrides.lengthMm', label: 'Patch length L', unit: 'mm', perUnit: 1, moves: 'patch length only (rectangular)' },
+	{ field: 'overrides.widthMm', label: 'Patch width W (geometry)', unit: 'mm', perUnit: 1, moves: 'patch width only (rectangular)' },
+	{ field: 'overrides.radiusMm', label: 'Patch radius', unit: 'mm', perUnit: 1, moves: 'patch radius only (circular)' },
+	{ field: 'overrides.insetDepthMm', label: 'Inset depth y0', unit: 'mm', perUnit: 1, moves: 'inset depth only (inset feed)' },
+	{ field: 'overrides.probeOffsetMm', label: 'Probe offset', unit: 'mm', perUnit: 1, moves: 'probe position only (probe feed)' }
 ];
 
 export function sweepFieldChoice(field: string): SweepFieldChoice | undefined {
@@ -57,6 +71,7 @@ export const sweepAxisDraftSchema = z.object({
 export const sweepPlanDraftSchema = z.object({
 	name: z.string().trim().min(1, { error: 'give the plan a name' }).max(80, { error: 'at most 80 characters' }).superRefine(plainText('name')),
 	combine: z.enum(['grid', 'zip']).default('grid'),
+	mode: z.enum(sweepModes).default('resize'),
 	axes: z.array(sweepAxisDraftSchema).max(SWEEP_FORM_AXES)
 });
 export type SweepPlanDraft = z.output<typeof sweepPlanDraftSchema>;
@@ -75,6 +90,7 @@ export function sweepDraftFromFields(get: (name: string) => unknown): unknown {
 	return {
 		name: str('name') ?? '',
 		combine: str('combine') || undefined,
+		mode: str('mode') || undefined,
 		axes: Array.from({ length: SWEEP_FORM_AXES }, (_, i) => ({
 			field: str(`axes.${i}.field`),
 			mode: str(`axes.${i}.mode`) || undefined,
@@ -101,7 +117,7 @@ function toStored(value: number, perUnit: number): number {
  * The sweep-plan document a draft describes (not yet validated: formats/sweep's parseSweepPlan does that),
  * and for each of its axes the form row it came from. Rows without a field are left out.
  */
-export function sweepPlanFromDraft(draft: SweepPlanDraft): { plan: { planVersion: 1; combine: 'grid' | 'zip'; axes: Record<string, unknown>[] }; rows: number[] } {
+export function sweepPlanFromDraft(draft: SweepPlanDraft): { plan: { planVersion: 1; combine: 'grid' | 'zip'; mode?: SweepMode; axes: Record<string, unknown>[] }; rows: number[] } {
 	const rows: number[] = [];
 	const axes: Record<string, unknown>[] = [];
 	draft.axes.forEach((a, row) => {
@@ -115,11 +131,12 @@ export function sweepPlanFromDraft(draft: SweepPlanDraft): { plan: { planVersion
 			axes.push({ field: a.field, from: toStored(number(a.from), perUnit), to: toStored(number(a.to), perUnit), step: toStored(number(a.step), perUnit) });
 		}
 	});
-	return { plan: { planVersion: 1, combine: draft.combine, axes }, rows };
+	// a resize plan is written as plans were before modes (no mode: resize), so its document keeps its bytes
+	return { plan: { planVersion: 1, combine: draft.combine, ...(draft.mode === 'hold-geometry' ? { mode: draft.mode } : {}), axes }, rows };
 }
 
 /** The draft of a saved plan document (the inverse of sweepPlanFromDraft, for "start from this plan"). */
-export function sweepDraftFromPlan(name: string, plan: { combine: 'grid' | 'zip'; axes: readonly ({ field: string } & ({ from: number; to: number; step: number } | { values: readonly number[] }))[] }): SweepPlanDraft {
+export function sweepDraftFromPlan(name: string, plan: { combine: 'grid' | 'zip'; mode?: SweepMode; axes: readonly ({ field: string } & ({ from: number; to: number; step: number } | { values: readonly number[] }))[] }): SweepPlanDraft {
 	const shown = (v: number, perUnit: number) => String(Number((v / perUnit).toPrecision(12)));
 	const axes = plan.axes.slice(0, SWEEP_FORM_AXES).map((a) => {
 		const perUnit = sweepFieldChoice(a.field)?.perUnit ?? 1;
@@ -128,5 +145,5 @@ export function sweepDraftFromPlan(name: string, plan: { combine: 'grid' | 'zip'
 			: { ...emptyAxisDraft(a.field), from: shown(a.from, perUnit), to: shown(a.to, perUnit), step: shown(a.step, perUnit) };
 	});
 	while (axes.length < SWEEP_FORM_AXES) axes.push(emptyAxisDraft());
-	return { name, combine: plan.combine, axes };
+	return { name, combine: plan.combine, mode: plan.mode ?? 'resize', axes };
 }

@@ -28,6 +28,30 @@ describe('cli sweep', () => {
 		const validate = new Ajv2020({ allErrors: true, strict: false }).compile(sweepJsonSchema as object);
 		expect(validate(doc)).toBe(true);
 		expect(doc.pointCount).toBe(3);
+		expect(doc).toMatchObject({ formatVersion: 2, $schema: '/schemas/sweep-v2.json' });
+	});
+
+	it('--mode hold-geometry keeps the radius across an εr sweep that resize changes', () => {
+		const plan = join(dir, 'plan-er.json');
+		writeFileSync(plan, JSON.stringify({ axes: [{ field: 'substrate.relativePermittivity', values: [3.3, 3.8] }] }));
+		const radii = (mode: string) => {
+			const out = join(dir, `sweep-${mode}.json`);
+			const r = cli([design, '--plan', plan, '--out', out, '--mode', mode]);
+			expect(r.code).toBe(0);
+			const doc = JSON.parse(readFileSync(out, 'utf8'));
+			expect(doc.plan.mode).toBe(mode);
+			return doc.points.map((p: { derived: { patch: { radiusMm: number } } }) => p.derived.patch.radiusMm);
+		};
+		const held = radii('hold-geometry');
+		expect(held[0]).toBe(held[1]);
+		const resized = radii('resize');
+		expect(resized[0]).toBeGreaterThan(resized[1]);
+	});
+
+	it('exits 2 naming an unknown --mode', () => {
+		const r = cli([design, '--plan', join(dir, 'plan.json'), '--out', join(dir, 'y.json'), '--mode', 'keep']);
+		expect(r.code).toBe(2);
+		expect(r.err.trim()).toBe('--mode must be one of: resize, hold-geometry; got "keep"');
 	});
 
 	it('exits 2 with one line and writes nothing for a plan over 10 000 points', () => {

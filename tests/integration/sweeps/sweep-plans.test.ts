@@ -45,8 +45,8 @@ afterAll(async () => {
 	await closeDb();
 });
 
-function draft(axes: ReturnType<typeof emptyAxisDraft>[], combine: 'grid' | 'zip' = 'grid') {
-	return { name: 'Bench study', combine, axes };
+function draft(axes: ReturnType<typeof emptyAxisDraft>[], combine: 'grid' | 'zip' = 'grid', mode?: 'resize' | 'hold-geometry') {
+	return { name: 'Bench study', combine, ...(mode ? { mode } : {}), axes };
 }
 const range = (field: string, from: string, to: string, step: string) => ({ ...emptyAxisDraft(field), from, to, step });
 
@@ -108,6 +108,22 @@ describe('saving a sweep plan', () => {
 		expect(row!.point_count).toBe(10_000);
 		expect((row!.plan as { axes: { from?: number }[] }).axes[0].from).toBe(2.4e9);
 	});
+
+	it('stores the mode of a hold-geometry plan, and a resize plan as plans were stored before modes (no mode)', async () => {
+		const held = await saveSweepPlan(db, { revisionId, userId: team.users.editor.id, draft: draft([range('substrate.relativePermittivity', '3.4', '3.6', '0.1')], 'grid', 'hold-geometry') });
+		expect((await sweepPlanQueries.findSweepPlanByRevisionAndId(db, revisionId, held.id))!.plan).toMatchObject({ mode: 'hold-geometry' });
+		const resized = await saveSweepPlan(db, { revisionId, userId: team.users.editor.id, draft: draft([range('substrate.relativePermittivity', '3.4', '3.6', '0.1')], 'grid', 'resize') });
+		expect((await sweepPlanQueries.findSweepPlanByRevisionAndId(db, revisionId, resized.id))!.plan).not.toHaveProperty('mode');
+	});
+
+	it('refuses a hold-geometry plan on a truncated-corner patch beside the mode, and stores nothing', async () => {
+		const before = await sweepPlanQueries.countSweepPlansByRevision(db, revisionId);
+		const err = await refusal(
+			saveSweepPlan(db, { revisionId, userId: team.users.editor.id, base: { shape: 'truncated-corner' }, draft: draft([range('substrate.relativePermittivity', '3.4', '3.6', '0.1')], 'grid', 'hold-geometry') })
+		);
+		expect(err.first.path).toBe('mode');
+		expect(await sweepPlanQueries.countSweepPlansByRevision(db, revisionId)).toBe(before);
+	});
 });
 
 describe('exporting a sweep plan', () => {
@@ -127,6 +143,7 @@ describe('exporting a sweep plan', () => {
 		// ajv (JSON Schema 2020-12) checks the document against the schema the formats room publishes.
 		const validate = new Ajv2020({ strict: false, allErrors: true }).compile(sweepJsonSchema);
 		expect(validate(doc), JSON.stringify(validate.errors?.slice(0, 3))).toBe(true);
+		expect(doc).toMatchObject({ $schema: '/schemas/sweep-v2.json', formatVersion: 2 });
 
 		const records = await exportsOf('sweep-plan');
 		expect(records.length).toBe(before + 1);

@@ -2,11 +2,64 @@
 import { buildArtwork, type Artwork, type StackLayer } from '../../artwork';
 import { GeometryError } from '../../geometry';
 import { size, type SizedDesign } from '../../rf';
-import { InputError, parseDesignInput } from '../../schemas';
+import { InputError, parseDesignInput, type DesignInput, type DesignInputDocument } from '../../schemas';
 import { replaceControlCharacters } from '../../schemas/plain-text';
 import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
 import { SWEEP_FORMAT, SWEEP_FORMAT_VERSION, SWEEP_SCHEMA_PATH, type SweepDocument, type SweepPoint, type SweepProbeEntry } from './document';
-import { axisValues, parseSweepPlan, type SweepPlan } from './plan';
+import { axisValues, holdsGeometry, parseSweepPlan, type SweepPlan } from './plan';
+import { solverSetupOf } from './solver-setup';
+
+/** Shapes whose polarisation is circular: only they take a handedness. */
+const CIRCULARLY_POLARISED = ['truncated-corner', 'nearly-square'];
+
+/**
+ * The design input with only what applies to its shape and feed: no handedness on a linearly polarised patch, no
+ * probe sizes without a probe, no inset, slot or proximity options for another feed, no feed-line impedance without a
+ * line. What is left sizes to the same design.
+ */
+export function applicableInput(input: DesignInput): DesignInputDocument {
+	const { handedness, probe, inset, slot, proximity, feedLineImpedanceOhm, ...rest } = input;
+	return {
+		...rest,
+		...(input.feed !== 'probe' ? { feedLineImpedanceOhm } : {}),
+		...(input.feed === 'inset' ? { inset } : {}),
+		...(input.feed === 'probe' ? { probe } : {}),
+		...(CIRCULARLY_POLARISED.includes(input.shape) ? { handedness } : {}),
+		...(slot && input.feed === 'aperture-coupled' ? { slot } : {}),
+		...(proximity && input.feed === 'proximity-coupled' ? { proximity } : {})
+	};
+}
+
+/**
+ * Throws InputError (path "plan.mode") when the plan holds the geometry of a patch whose geometry cannot be held:
+ * truncated-corner and nearly-square patches take no dimension overrides. Saving a plan checks this too.
+ */
+export function checkPlanFitsDesign(base: Pick<DesignInput, 'shape'>, plan: Pick<SweepPlan, 'mode' | 'axes'>): void {
+	if (!holdsGeometry(plan) || base.shape === 'rectangular' || base.shape === 'circular') return;
+	throw new InputError([{ path: 'plan.mode', value: plan.mode ?? 'resize', message: `a ${base.shape} patch cannot hold its geometry (only rectangular and circular patches take dimension overrides); choose "re-size at each point" and no geometry axis` }]);
+}
+
+/**
+ * The base with the revision's geometry written in as overrides (patch length and width or radius, inset depth or
+ * probe offset) and its ground margin fixed, so a point that changes the material or one dimension keeps the rest.
+ * What the base already states wins; the plan's axes are applied on top. Throws InputError for a patch whose
+ * geometry cannot be held (truncated-corner and nearly-square patches take no overrides).
+ */
+function withHeldGeometry(base: DesignInput, plan: SweepPlan): DesignInput {
+	checkPlanFitsDesign(base, plan);
+	const sized = size(base);
+	const patch = sized.patch as { lengthMm?: number; widthMm?: number; radiusMm?: number };
+	const feed = sized.feed as { insetDepthMm?: number; offsetYMm?: number };
+	const swept = new Set(plan.axes.map((a) => a.field));
+	const held: Record<string, number> = {};
+	if (base.shape === 'rectangular') {
+		held.lengthMm = patch.lengthMm as number;
+		if (base.patchWidthMm === undefined && !swept.has('patchWidthMm')) held.widthMm = patch.widthMm as number;
+	} else held.radiusMm = patch.radiusMm as number;
+	if (base.feed === 'inset' && feed.insetDepthMm !== undefined) held.insetDepthMm = feed.insetDepthMm;
+	if (base.feed === 'probe' && feed.offsetYMm !== undefined) held.probeOffsetMm = feed.offsetYMm;
+	return { ...base, groundMarginMm: base.groundMarginMm ?? sized.ground.marginMm, overrides: { ...held, ...base.overrides } };
+}
 
 /**
  * The stack bottom up (z increasing: the bottom copper at z = 0 first, the top copper last; the
@@ -55,6 +108,16 @@ function withoutControlCharactersInName(raw: unknown): unknown {
 	return typeof name === 'string' ? { ...raw, name: replaceControlCharacters(name) } : raw;
 }
 
+/**
+ * The design-input document of one point: the base (with the revision's geometry held when the plan says so) and
+ * the point's field values written in. The browser's point preview and the sweep build use this one function.
+ */
+export function sweepPointInput(base: DesignInput, plan: SweepPlan, parameters: Record<string, number>): unknown {
+	let doc: unknown = holdsGeometry(plan) ? withHeldGeometry(base, plan) : base;
+	for (const [field, value] of Object.entries(parameters)) doc = withField(doc, field, value);
+	return doc;
+}
+
 type KnownDesign = { readonly sized: SizedDesign; readonly artwork: Artwork };
 
 /** One point of the sweep: sized and drawn, or refused with the reason (a bad point never stops the sweep). */
@@ -76,7 +139,8 @@ function sweepPoint(base: unknown, parameters: Record<string, number>, index: nu
 			board: artwork.board,
 			layers: artwork.layers,
 			drills: artwork.drills,
-			stack: sweepStack(artwork)
+			stack: sweepStack(artwork),
+			solverSetup: solverSetupOf(artwork, sized)
 		};
 	} catch (e) {
 		if (e instanceof InputError) return { index, status: 'refused', parameters, error: { kind: 'input', path: e.first.path, message: e.first.message } };
@@ -90,16 +154,17 @@ function startSweep(baseRaw: unknown, planRaw: unknown, meta: ExportMeta) {
 	const base = parseDesignInput(withoutControlCharactersInName(baseRaw));
 	const plan = parseSweepPlan(planRaw);
 	const combinations = sweepCombinations(plan);
+	const pointBase = holdsGeometry(plan) ? withHeldGeometry(base, plan) : base;
 	const head: Omit<SweepDocument, 'points'> = {
 		$schema: SWEEP_SCHEMA_PATH,
 		format: SWEEP_FORMAT,
 		formatVersion: SWEEP_FORMAT_VERSION,
 		design: { name: meta.designName, slug: meta.designSlug, revision: meta.revisionLabel, revisionDate: meta.revisionDate, software: `${SOFTWARE_NAME} ${meta.softwareVersion}` },
-		base,
+		base: applicableInput(base),
 		plan,
 		pointCount: combinations.length
 	};
-	return { base, combinations, head };
+	return { base: pointBase, combinations, head };
 }
 
 /**

@@ -1,13 +1,18 @@
-// The sweep document's TypeScript shape (version 1); its JSON Schema is generated from src/lib/schemas/sweep-point.ts.
+// The sweep document's TypeScript shape (version 2); its JSON Schema is generated from src/lib/schemas/sweep-point.ts.
+// Version 1 documents (no solver set-up, a base with every default) stay valid against /schemas/sweep-v1.json.
 import type { ArtworkDrill, ArtworkLayer, ArtworkProbe, StackLayer } from '../../artwork';
-import type { DesignInput } from '../../schemas';
+import type { DesignInputDocument } from '../../schemas';
 import type { SizedDesign } from '../../rf';
 import type { SweepPlan } from './plan';
+import type { SolverSetup } from './solver-setup';
 
 export const SWEEP_FORMAT = 'fringefield-sweep';
-export const SWEEP_FORMAT_VERSION = 1;
-/** Where the app publishes the schema (route src/routes/schemas/sweep-v1.json). */
-export const SWEEP_SCHEMA_PATH = '/schemas/sweep-v1.json';
+/** The version every writer writes (CLI, API, downloads). */
+export const SWEEP_FORMAT_VERSION = 2;
+/** Where the app publishes the schema of the version written (route src/routes/schemas/sweep-v2.json). */
+export const SWEEP_SCHEMA_PATH = '/schemas/sweep-v2.json';
+/** Where the app keeps publishing the version-1 schema, so version-1 documents stay readable. */
+export const SWEEP_V1_SCHEMA_PATH = '/schemas/sweep-v1.json';
 
 export type SweepDerived = Omit<SizedDesign, 'input' | 'warnings'>;
 
@@ -33,6 +38,8 @@ export type SweepPoint =
 			readonly drills: readonly ArtworkDrill[];
 			/** The slabs bottom up (z increasing from 0 at the bottom copper's lower face), then (when the design states a probe model) the probe entry. */
 			readonly stack: readonly (StackLayer | SweepProbeEntry)[];
+			/** Ports, frequency window, the frequency the materials hold at, and the dielectric outline. */
+			readonly solverSetup: SolverSetup;
 	  }
 	| {
 			readonly index: number;
@@ -47,7 +54,8 @@ export interface SweepDocument {
 	readonly format: typeof SWEEP_FORMAT;
 	readonly formatVersion: typeof SWEEP_FORMAT_VERSION;
 	readonly design: { name: string; slug: string; revision: string; revisionDate: string; software: string };
-	readonly base: DesignInput;
+	/** The revision's design input with only the fields that apply to its shape and feed (see applicableInput). */
+	readonly base: DesignInputDocument;
 	readonly plan: SweepPlan;
 	readonly pointCount: number;
 	readonly points: readonly SweepPoint[];

@@ -1,5 +1,6 @@
 // Sweep documents: plan, build, serialise, JSON Schema.
 export * from './plan';
 export * from './document';
-export { buildSweepDocument, serializeSweep, sweepCombinations, sweepTextPieces } from './build';
-export { sweepJsonSchema } from './schema';
+export { applicableInput, buildSweepDocument, checkPlanFitsDesign, serializeSweep, sweepCombinations, sweepPointInput, sweepTextPieces } from './build';
+export { sweepJsonSchema, sweepJsonSchemaV1 } from './schema';
+export { FREQUENCY_WINDOW_FRACTION, solverSetupOf, type SolverPort, type SolverSetup } from './solver-setup';

@@ -1,6 +1,7 @@
 // The sweep plan: which design-input fields vary, over which values, combined as a grid or zipped.
 import { z } from 'zod';
 import { InputError, parseWith } from '../../schemas';
+import { sweepModes, type SweepMode } from '../../schemas/sweep-plan';
 
 /** Hard limit on points in one sweep document; past it nothing is built. */
 export const MAX_SWEEP_POINTS = 10_000;
@@ -28,9 +29,27 @@ export const sweepableFields = [
 	'parasitic.sizeRatio',
 	'array.spacingXWavelengths',
 	'array.spacingYWavelengths',
-	'array.scanAngleDeg'
+	'array.scanAngleDeg',
+	'overrides.lengthMm',
+	'overrides.widthMm',
+	'overrides.radiusMm',
+	'overrides.insetDepthMm',
+	'overrides.probeOffsetMm'
 ] as const;
 export type SweepableField = (typeof sweepableFields)[number];
+
+/**
+ * Sweepable fields that are the geometry itself (patch length, width, radius, inset depth, probe offset). A plan
+ * with one of them always holds the rest of the revision's geometry, whatever its `mode`.
+ */
+export const geometryFields: readonly SweepableField[] = ['overrides.lengthMm', 'overrides.widthMm', 'overrides.radiusMm', 'overrides.insetDepthMm', 'overrides.probeOffsetMm'];
+
+export { sweepModes, type SweepMode } from '../../schemas/sweep-plan';
+
+/** True when the plan's points hold the revision's geometry (hold-geometry mode, or any geometry axis). */
+export function holdsGeometry(plan: { mode?: SweepMode; axes: readonly { field: string }[] }): boolean {
+	return plan.mode === 'hold-geometry' || plan.axes.some((a) => (geometryFields as readonly string[]).includes(a.field));
+}
 
 const finite = z.number({ error: 'must be a finite number' }).refine(Number.isFinite, { error: 'must be a finite number' });
 
@@ -53,6 +72,12 @@ export const sweepPlanSchema = z
 		planVersion: z.literal(1).default(1),
 		/** grid: every combination of the axes; zip: the i-th value of every axis together. */
 		combine: z.enum(['grid', 'zip']).default('grid'),
+		/**
+		 * resize: every point sized afresh; hold-geometry: the revision's patch length, width (or radius), inset depth or
+		 * probe offset and ground margin held, only the swept fields vary (the feed line keeps its impedance). Absent:
+		 * resize, the meaning of every plan stored before the field.
+		 */
+		mode: z.enum(sweepModes).optional(),
 		axes: z.array(z.union([rangeAxisSchema, listAxisSchema])).min(1, { error: 'needs at least one axis' }).max(6, { error: 'at most 6 axes' })
 	})
 	.superRefine((p, ctx) => {

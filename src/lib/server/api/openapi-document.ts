@@ -61,7 +61,7 @@ const sweepPlanSummarySchema = z
 	})
 	.meta({ id: 'SweepPlanSummary' });
 const sweepPlanListSchema = z.object({ plans: z.array(sweepPlanSummarySchema) }).meta({ id: 'SweepPlanList' });
-const sweepDocumentSchema = z.looseObject({}).meta({ description: 'Sweep definition, versioned schema of its own (/schemas/sweep-v1.json)' });
+const sweepDocumentSchema = z.looseObject({}).meta({ description: 'Sweep definition, versioned schema of its own (/schemas/sweep-v2.json; documents written before version 2 follow /schemas/sweep-v1.json)' });
 
 function buildRegistry(): OpenAPIRegistry {
 	const registry = new OpenAPIRegistry();

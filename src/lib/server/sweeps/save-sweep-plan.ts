@@ -1,8 +1,8 @@
 // Saves a sweep plan on a revision: the form draft → the plan document, validated and counted by formats/sweep (≤ 10 000 points).
 import { randomUUID } from 'node:crypto';
 import type { Kysely } from 'kysely';
-import { parseSweepPlan, countSweepPoints } from '../../formats/sweep';
-import { InputError, parseWith } from '../../schemas';
+import { checkPlanFitsDesign, parseSweepPlan, countSweepPoints } from '../../formats/sweep';
+import { InputError, parseWith, type DesignInput } from '../../schemas';
 import { sweepPlanDraftSchema, sweepPlanFromDraft } from '../../schemas/sweep-plan';
 import type { Database } from '../db/database';
 import * as sweepPlanQueries from '../db/sweep-plan.queries';
@@ -12,6 +12,8 @@ export interface SaveSweepPlanOptions {
 	userId: string;
 	/** The form's draft (sweepPlanDraftSchema). */
 	draft: unknown;
+	/** The revision's design input: a plan that holds the geometry must fit it. */
+	base?: Pick<DesignInput, 'shape'>;
 }
 
 /**
@@ -24,6 +26,7 @@ export async function saveSweepPlan(db: Kysely<Database>, opts: SaveSweepPlanOpt
 	let plan;
 	try {
 		plan = parseSweepPlan(document);
+		if (opts.base) checkPlanFitsDesign(opts.base, plan);
 	} catch (err) {
 		if (!(err instanceof InputError)) throw err;
 		// "plan.axes.2.from" → the form row that made axis 2.

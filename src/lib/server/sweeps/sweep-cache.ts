@@ -11,8 +11,8 @@ import type { SavedSweepPlan } from './sweep-plan-model';
 import type { SweepFileFacts } from './sweep-work';
 import pkg from '../../../../package.json' with { type: 'json' };
 
-/** Raise when the sweep writer's bytes change, so no file from before is served again. */
-const CACHE_FORMAT = 1;
+/** Raise when the sweep writer's bytes change, so no file from before is served again (2: sweep JSON version 2). */
+const CACHE_FORMAT = 2;
 
 export interface CachedSweepFile extends SweepFileFacts {
 	/** The bytes on disk, complete and never rewritten. */

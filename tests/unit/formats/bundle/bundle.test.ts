@@ -20,8 +20,11 @@ import { goldenBundle, goldenDesign, goldenMeta } from '../../../fixtures/bundle
  * probe hole against the connector pin). Checked file by file against the previous build.
  * Re-recorded for the board-house fab notes (issue 17): an order checklist, the recorded profile named with its
  * figures, no sizing warnings. Only the fab notes and the manifest naming their hash changed (file by file).
+ * Re-recorded for sweep JSON version 2 (issue 17): only design.sweep.json (formatVersion 2, the v2 schema URL, a base
+ * of the applicable fields, each point's solverSetup) and the manifest naming its hash changed; every Gerber, drill,
+ * DXF, SVG and the notes kept their bytes (checked file by file against the previous build).
  */
-const GOLDEN_SHA256 = 'fc55c1dfc95ea352074ab48d503058d99dacf9b12f1ad0844c388a3b239eb705';
+const GOLDEN_SHA256 = '5ffdc93eb2d7be0f52ea65f10b6ed7fe49a26d5cc4449858c92d27d5fb718096';
 const sha = (b: Uint8Array) => createHash('sha256').update(b).digest('hex');
 
 describe('export bundle', () => {

@@ -26,7 +26,7 @@ describe('sweep documents', () => {
 
 	it('fails validation of a tampered document with field-level errors', () => {
 		const doc = JSON.parse(serializeSweep(buildSweepDocument(base, plan, meta)));
-		doc.formatVersion = 2;
+		doc.formatVersion = 1;
 		doc.points[1].layers[0].shapes[0].geometry.region.outer.start = ['a', 0];
 		delete doc.points[2].stack;
 		expect(validate(doc)).toBe(false);

@@ -25,7 +25,7 @@ export const actions: Actions = {
 		const form = await request.formData();
 		const draft = sweepDraftFromFields((k) => form.get(k));
 		try {
-			const saved = await saveSweepPlan(getDb(), { revisionId: revision.id, userId: locals.user!.id, draft });
+			const saved = await saveSweepPlan(getDb(), { revisionId: revision.id, userId: locals.user!.id, draft, base: revision.input });
 			return { saved };
 		} catch (err) {
 			if (err instanceof InputError) return fail(400, { values: draft, issues: err.issues.map((i) => ({ path: i.path, message: i.message })) });
