@@ -102,9 +102,11 @@ runMain(async () => {
 			// the Field check's integration tests run the real engine
 			ensureOpenEms();
 			const vitestReport = join(reports, 'vitest.json');
-			run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`, ...(only?.vitest ?? [])], env);
+			const code = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`, ...(only?.vitest ?? [])], env);
 			const v = readJson(vitestReport);
-			tallies.push(v ? { suite: 'vitest', passed: v.numPassedTests, failed: v.numFailedTests + (v.numRuntimeErrorTestSuites ?? 0) } : { suite: 'vitest', passed: 0, failed: 1 });
+			// a file that does not load, or an unhandled error, fails the run even when no single test failed
+			const failed = v ? v.numFailedTests + (v.numRuntimeErrorTestSuites ?? 0) : 1;
+			tallies.push({ suite: 'vitest', passed: v ? v.numPassedTests : 0, failed: failed === 0 && code !== 0 ? 1 : failed });
 		}
 
 		if (!only || only.e2e.length > 0) {
@@ -116,9 +118,13 @@ runMain(async () => {
 				tallies.push({ suite: 'e2e', passed: 0, failed: 1 });
 			} else {
 				const e2eReport = join(reports, 'e2e.json');
-				run('npx', ['playwright', 'test', '--config', 'tests/e2e/playwright.config.ts', ...(only?.e2e ?? [])], { ...env, CHROMIUM_PATH: chromium, PLAYWRIGHT_JSON_OUTPUT_NAME: e2eReport });
+				const code = run('npx', ['playwright', 'test', '--config', 'tests/e2e/playwright.config.ts', ...(only?.e2e ?? [])], { ...env, CHROMIUM_PATH: chromium, PLAYWRIGHT_JSON_OUTPUT_NAME: e2eReport });
 				const p = readJson(e2eReport);
-				tallies.push(p ? { suite: 'e2e', passed: p.stats.expected + (p.stats.flaky ?? 0), failed: p.stats.unexpected } : { suite: 'e2e', passed: 0, failed: 1 });
+				// errors outside any test (a spec file that does not load, a web server that does not start) fail the run too,
+				// and so does a non-zero exit that the report does not explain
+				const outside = Array.isArray(p?.errors) ? p.errors.length : 0;
+				const failed = p ? p.stats.unexpected + outside : 1;
+				tallies.push({ suite: 'e2e', passed: p ? p.stats.expected + (p.stats.flaky ?? 0) : 0, failed: failed === 0 && code !== 0 ? 1 : failed });
 			}
 		}
 	} finally {
