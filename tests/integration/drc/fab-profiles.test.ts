@@ -113,7 +113,7 @@ describe('revision.fab_profile', () => {
 		const saved = await saveRevision(getDb(), { designId: ws.designId, parentLabel: 'A', userId: ws.people.editor.id, raw: demoInput(`Bench patch ${ws.suffix}`), fabProfile: house });
 		const r = await call(tolerancePage.load as never, { identity: await identityOf(ws, 'viewer', 'session'), path: `/designs/${ws.designId}/r/${saved.label}/tolerance`, params: { designId: ws.designId, label: saved.label } });
 		expect(r.outcome).toBe('ok');
-		expect((r.data as { fabProfile: unknown }).fabProfile).toEqual({ name: house.name, etchToleranceMm: house.etchToleranceMm });
+		expect((r.data as { fabProfile: unknown }).fabProfile).toMatchObject({ name: house.name, etchToleranceMm: house.etchToleranceMm, switched: false });
 	});
 
 	it('reads a revision older than the gate (NULL) as the built-in, marked as not recorded', async () => {
