@@ -9,7 +9,7 @@ import { buildBundle, buildSweepDocument, exportFileName, formatRegistry, serial
 import { checkReadBack, isFabFileName } from '../../src/lib/formats/readback';
 import type { SizedDesign } from '../../src/lib/rf';
 import type { FabProfile } from '../../src/lib/schemas/fab-profile';
-import { sha256Hex as legacySha256Hex } from './legacy-sha256';
+import { legacySha256Hex } from './legacy-sha256';
 
 const encoder = new TextEncoder();
 

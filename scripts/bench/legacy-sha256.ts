@@ -8,7 +8,7 @@ const K = new Uint32Array([
 ]);
 
 /** Lowercase hex SHA-256 digest of the bytes. */
-export function sha256Hex(data: Uint8Array): string {
+export function legacySha256Hex(data: Uint8Array): string {
 	const bitLength = data.length * 8;
 	const padded = new Uint8Array(((data.length + 9 + 63) >> 6) << 6);
 	padded.set(data);

@@ -38,8 +38,13 @@ test('a form posted from another site is refused with 403', async ({ page }) => 
 
 test('the app refuses to be shown in another site\'s frame', async ({ page }) => {
 	await page.route('http://elsewhere.test/**', (route) => route.fulfill({ contentType: 'text/html', body: `<iframe name="app" src="${baseURL}/signin" width="600" height="400"></iframe>` }));
+	// What the browser is told: the sign-in page refuses every frame ancestor.
+	const answer = await page.request.get(`${baseURL}/signin`);
+	expect(answer.headers()['x-frame-options']).toBe('DENY');
+	expect(answer.headers()['content-security-policy']).toContain("frame-ancestors 'none'");
 	await page.goto('http://elsewhere.test/');
-	await page.waitForTimeout(1000);
+	// Wait until the frame has left about:blank (our page, or the browser's refusal in its place), then look inside.
+	await expect.poll(() => page.frame({ name: 'app' })?.url() ?? 'about:blank', { timeout: 10_000 }).not.toBe('about:blank');
 	const frame = page.frame({ name: 'app' });
 	// frame-ancestors 'none' (and X-Frame-Options DENY): the frame never holds our sign-in form.
 	const hasForm = frame ? await frame.locator('input[name="email"]').count().catch(() => 0) : 0;

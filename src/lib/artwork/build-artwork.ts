@@ -1,5 +1,6 @@
 // A sized design → its Artwork: top copper, ground with clearance, profile, optional masks, drills and the stack.
 import { GeometryError, createRectangleContour, type Point } from '../geometry';
+import { isLayeredFeed } from '../rf/feed-kinds';
 import type { SizedDesign } from '../rf/sized-design';
 import { buildDimensions } from './build-dimensions';
 import { buildLayeredStack, buildStack } from './build-stack';
@@ -84,5 +85,5 @@ function drawArtwork(sized: SizedDesign): Artwork {
 
 /** Layered feeds, a parasitic patch and arrays take the extended builder; a two-copper stack stays here. */
 export function needsExtendedArtwork(sized: SizedDesign): boolean {
-	return sized.array !== undefined || sized.parasitic !== undefined || sized.feed.kind === 'aperture-coupled' || sized.feed.kind === 'proximity-coupled';
+	return sized.array !== undefined || sized.parasitic !== undefined || isLayeredFeed(sized.feed);
 }

@@ -1,5 +1,6 @@
 // The main sizes a drawing dimensions: patch W and L (or D), inset depth, feed width, ground size.
 import type { Point } from '../geometry';
+import { feedLineOf } from '../rf/feed-kinds';
 import type { SizedDesign } from '../rf/sized-design';
 import { patchHalfSizes } from './patch-polygon';
 import type { ArtworkDimension } from './types';
@@ -21,9 +22,10 @@ export function buildDimensions(sized: SizedDesign, center: Point, patchEdgeYMm:
 		const x = cx - feed.line.widthMm / 2 - feed.notchGapMm;
 		dims.push({ id: 'inset-depth', label: 'y0', from: [x, patchEdgeYMm], to: [x, patchEdgeYMm + feed.insetDepthMm], valueMm: feed.insetDepthMm, side: 'left' });
 	}
-	if (feed.kind !== 'probe') {
-		const half = feed.line.widthMm / 2;
-		dims.push({ id: 'feed-width', label: 'Wf', from: [cx - half, 0], to: [cx + half, 0], valueMm: feed.line.widthMm, side: 'below' });
+	const line = feedLineOf(feed);
+	if (line) {
+		const half = line.widthMm / 2;
+		dims.push({ id: 'feed-width', label: 'Wf', from: [cx - half, 0], to: [cx + half, 0], valueMm: line.widthMm, side: 'below' });
 	}
 	dims.push({ id: 'ground-width', label: 'Wg', from: [0, 0], to: [gw, 0], valueMm: gw, side: 'below' });
 	dims.push({ id: 'ground-length', label: 'Lg', from: [0, 0], to: [0, gl], valueMm: gl, side: 'left' });

@@ -1,6 +1,7 @@
 // One element in its own frame: its copper on each layer, with its feed line starting at the feed point (0, 0) and running up (+y).
 import { createCircleContour, createPolygonContour, createRectangleContour, boundsOfPoints, contourBounds, emptyBounds, mergeBounds, type Bounds, type Point, type Region } from '../geometry';
-import type { SizedDesign, SizedPatch } from '../rf/sized-design';
+import { isLayeredFeed } from '../rf/feed-kinds';
+import type { SizedDesign, SizedFeed, SizedPatch } from '../rf/sized-design';
 import { patchHalfSizes, patchPolygon } from './patch-polygon';
 import { buildTopCopper } from './build-top-copper';
 import type { ArtworkShape } from './types';
@@ -34,10 +35,37 @@ export interface BuiltElement {
 	readonly patchEdgeYMm: number;
 }
 
+/** How far the feed's printed parts reach below the patch before the line of the array run starts. */
+function feedRoomBelowPatchMm(feed: SizedFeed): number {
+	switch (feed.kind) {
+		case 'quarter-wave':
+			return feed.transformer.lengthMm;
+		case 'edge':
+		case 'inset':
+		case 'probe':
+		case 'aperture-coupled':
+		case 'proximity-coupled':
+			return 0;
+		default:
+			return feed satisfies never;
+	}
+}
+
 export function layerRolesOf(sized: SizedDesign): LayerRoles {
-	if (sized.feed.kind === 'aperture-coupled') return { topIndex: 0, groundIndex: 1, feedIndex: 2, copperCount: 3 };
-	if (sized.feed.kind === 'proximity-coupled' || sized.parasitic) return { topIndex: 0, feedIndex: 1, groundIndex: 2, copperCount: 3 };
-	return { topIndex: 0, feedIndex: 0, groundIndex: 1, copperCount: 2 };
+	const aboveGround = { topIndex: 0, feedIndex: 1, groundIndex: 2, copperCount: 3 };
+	switch (sized.feed.kind) {
+		case 'aperture-coupled':
+			return { topIndex: 0, groundIndex: 1, feedIndex: 2, copperCount: 3 }; // the slotted ground between patch and line
+		case 'proximity-coupled':
+			return aboveGround; // the line buried between patch and ground
+		case 'edge':
+		case 'inset':
+		case 'quarter-wave':
+		case 'probe':
+			return sized.parasitic ? aboveGround : { topIndex: 0, feedIndex: 0, groundIndex: 1, copperCount: 2 };
+		default:
+			return sized.feed satisfies never;
+	}
 }
 
 const region = (id: string, role: ArtworkShape['role'], r: Region, polarity: ArtworkShape['polarity'] = 'dark'): ArtworkShape => ({ id, role, polarity, geometry: { kind: 'region', region: r } });
@@ -74,20 +102,26 @@ export function buildElement(sized: SizedDesign, runMm: number): BuiltElement {
 	const feed = sized.feed;
 	const hy = halfY(sized.patch);
 	let center: Point;
-	if (feed.kind === 'aperture-coupled' || feed.kind === 'proximity-coupled') {
+	if (isLayeredFeed(feed)) {
 		center = [0, runMm + hy];
 		shapes[roles.topIndex].push(region('patch', 'patch', patchRegion(sized.patch, center)));
 		const half = feed.line.widthMm / 2;
-		if (feed.kind === 'aperture-coupled') {
-			const slotY = center[1];
-			shapes[roles.feedIndex].push(region('feed-line', 'feed-line', rect(-half, 0, half, slotY)));
-			if (feed.stubLengthMm > 0) shapes[roles.feedIndex].push(region('tuning-stub', 'tuning-stub', rect(-half, slotY, half, slotY + feed.stubLengthMm)));
-			groundCuts.push(region('coupling-slot', 'coupling-slot', rect(-feed.slotLengthMm / 2, slotY - feed.slotWidthMm / 2, feed.slotLengthMm / 2, slotY + feed.slotWidthMm / 2), 'clear'));
-		} else {
-			shapes[roles.feedIndex].push(region('feed-line', 'feed-line', rect(-half, 0, half, runMm + feed.overlapMm)));
+		switch (feed.kind) {
+			case 'aperture-coupled': {
+				const slotY = center[1];
+				shapes[roles.feedIndex].push(region('feed-line', 'feed-line', rect(-half, 0, half, slotY)));
+				if (feed.stubLengthMm > 0) shapes[roles.feedIndex].push(region('tuning-stub', 'tuning-stub', rect(-half, slotY, half, slotY + feed.stubLengthMm)));
+				groundCuts.push(region('coupling-slot', 'coupling-slot', rect(-feed.slotLengthMm / 2, slotY - feed.slotWidthMm / 2, feed.slotLengthMm / 2, slotY + feed.slotWidthMm / 2), 'clear'));
+				break;
+			}
+			case 'proximity-coupled':
+				shapes[roles.feedIndex].push(region('feed-line', 'feed-line', rect(-half, 0, half, runMm + feed.overlapMm)));
+				break;
+			default:
+				return feed satisfies never;
 		}
 	} else {
-		const below = hy + (feed.kind === 'quarter-wave' ? feed.transformer.lengthMm : 0);
+		const below = hy + feedRoomBelowPatchMm(feed);
 		center = [0, runMm + below];
 		const top = buildTopCopper(sized, center);
 		for (const s of top.shapes) shapes[roles.feedIndex].push(s);

@@ -1,5 +1,6 @@
 // Artwork for layered designs (three coppers) and arrays: elements placed on a grid, the corporate feed, the ground, the stack.
 import { GeometryError, createRectangleContour, emptyBounds, mergeBounds, type Bounds, type Point } from '../geometry';
+import { feedLineOf } from '../rf/feed-kinds';
 import type { SizedDesign } from '../rf/sized-design';
 import { buildElement, layerRolesOf, shapeBounds, type BuiltElement } from './build-element';
 import { buildLayeredStack, copperLayerIds } from './build-stack';
@@ -201,10 +202,11 @@ function dimensionsOf(sized: SizedDesign, element: BuiltElement, center: Point, 
 		dims.push({ id: 'patch-width', label: 'W', from: [cx - hx, cy + hy], to: [cx + hx, cy + hy], valueMm: 2 * hx, side: 'above' });
 		dims.push({ id: 'patch-length', label: 'L', from: [cx + hx, cy - hy], to: [cx + hx, cy + hy], valueMm: 2 * hy, side: 'right' });
 	}
-	if (sized.feed.kind !== 'probe') {
-		const half = sized.feed.line.widthMm / 2;
+	const line = feedLineOf(sized.feed);
+	if (line) {
+		const half = line.widthMm / 2;
 		const fy = shapeBounds(element.shapes[feedIndex]).minYMm + offY;
-		dims.push({ id: 'feed-width', label: 'Wf', from: [cx - half, fy], to: [cx + half, fy], valueMm: sized.feed.line.widthMm, side: 'below' });
+		dims.push({ id: 'feed-width', label: 'Wf', from: [cx - half, fy], to: [cx + half, fy], valueMm: line.widthMm, side: 'below' });
 	}
 	void offX;
 	dims.push({ id: 'ground-width', label: 'Wg', from: [0, 0], to: [gw, 0], valueMm: gw, side: 'below' });

@@ -119,6 +119,12 @@ export function buildTopCopper(sized: SizedDesign, center: Point): TopCopper {
 			shapes.push({ id: 'probe-pad', role: 'probe-pad', polarity: 'dark', geometry: { kind: 'circle', center: at, diameterMm: feed.padDiameterMm } });
 			return { shapes, voids, patchEdgeYMm: edgeY, probeCenter: at };
 		}
+		case 'aperture-coupled':
+		case 'proximity-coupled':
+			// built on three coppers by buildElement; the top copper holds only the patch
+			throw new Error(`buildTopCopper: a ${feed.kind} feed is built by buildElement`);
+		default:
+			return feed satisfies never;
 	}
 	return { shapes, voids, patchEdgeYMm: edgeY, probeCenter: null };
 }

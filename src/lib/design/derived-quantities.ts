@@ -72,6 +72,8 @@ export function derivedQuantities(s: SizedDesign): Quantity[] {
 			add('Feed', 'probePadDiameterMm', 'Pad ⌀', f.padDiameterMm, 'mm', 3);
 			add('Feed', 'probeClearanceDiameterMm', 'Clearance ⌀', f.clearanceDiameterMm, 'mm', 3);
 			break;
+		default:
+			throw new Error(`derivedQuantities: no rows for feed ${f satisfies never}`);
 	}
 
 	if (s.parasitic) {

@@ -7,3 +7,4 @@ export { revisionSummary } from './revision-summary';
 export { revisionTree, type TreeRevision, type TreeRow } from './revision-tree';
 export { canonicalJson } from './canonical-json';
 export { buildArrayBenchFiles, arrayBenchDocument, ARRAY_BENCH_FORMATS } from './array-bench';
+export { predictedBand } from './predicted-band';

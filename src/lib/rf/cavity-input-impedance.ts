@@ -1,6 +1,7 @@
 // The model's predicted S11 near resonance: the cavity model's parallel-RLC input impedance at the feed point,
 // built from the sized resonance, the total quality factor and the feed resistance at resonance. It is the closed-form
 // curve the pages draw beside the full-wave and the measured S11.
+import { feedKindTraits } from './feed-kinds';
 import type { SizedDesign } from './sized-design';
 import { requirePositive } from './guard';
 
@@ -54,7 +55,7 @@ export function cavityModelRlc(sized: Pick<SizedDesign, 'frequencyHz' | 'estimat
 	return {
 		resonantFrequencyHz: sized.frequencyHz,
 		qualityFactor: sized.estimates.qualityFactor,
-		resistanceOhm: sized.feedKind === 'edge' ? sized.edgeResistanceOhm : sized.input.targetImpedanceOhm
+		resistanceOhm: feedKindTraits[sized.feedKind].presents === 'edge-resistance' ? sized.edgeResistanceOhm : sized.input.targetImpedanceOhm
 	};
 }
 

@@ -1,5 +1,6 @@
 // Public face of the rf room: sizing of patches, feeds and microstrip lines; estimates; the tolerance study.
 export * from './sized-design';
+export { feedKindTraits, feedLineOf, isLayeredFeed, isLayeredFeedKind, type FeedKindTraits } from './feed-kinds';
 export { size, NOTCH_GAP_LINE_WIDTHS, PROBE_ANNULAR_RING_MM } from './size';
 export { sizingReport, type SizingReport } from './sizing-report';
 export { resonantFrequencyHz, type SubstrateValues } from './resonant-frequency';

@@ -1,17 +1,8 @@
 // What a measured S11 sweep says about a built patch: return loss in dB, VSWR, resonance, the −10 dB band and its width.
 import { InputError } from '../schemas/input-error';
+import type { ReflectionSample, ReflectionValue } from '../schemas/reflection-sample';
 
-/** A complex reflection coefficient Γ in rectangular form. */
-export interface ReflectionValue {
-	re: number;
-	im: number;
-}
-
-/** One measured frequency. */
-export interface ReflectionSample {
-	frequencyHz: number;
-	s11: ReflectionValue;
-}
+export type { ReflectionSample, ReflectionValue };
 
 /** One analysed frequency. */
 export interface ResponsePoint {

@@ -1,6 +1,7 @@
 // Sizing beyond one substrate and one element: explicit stacks, aperture- and proximity-coupled feeds, a stacked parasitic patch, arrays.
 import { InputError, type DesignInput } from '../schemas';
 import { dbFromPowerRatio, mmFromUm } from '../units';
+import { isLayeredFeedKind } from './feed-kinds';
 import { apertureStart } from './aperture-coupling';
 import { arrayFactorDirectivity, arrayPattern, gratingLobeLimitWavelengths, halfPowerBeamwidthDeg, type ArrayGeometry } from './array-factor';
 import { staticEffectivePermittivity } from './analyze-microstrip';
@@ -18,7 +19,7 @@ export const NETWORK_CLEARANCE_LINE_WIDTHS = 2;
 
 /** True when the document uses anything the single-layer path does not know. */
 export function needsExtendedSizing(d: DesignInput): boolean {
-	return d.stack !== undefined || d.array !== undefined || d.parasitic !== undefined || d.feed === 'aperture-coupled' || d.feed === 'proximity-coupled';
+	return d.stack !== undefined || d.array !== undefined || d.parasitic !== undefined || isLayeredFeedKind(d.feed);
 }
 
 type SizeSingle = (d: DesignInput) => SizedDesign;
@@ -66,33 +67,45 @@ export function sizeExtended(d: DesignInput, sizeSingle: SizeSingle): SizedDesig
 	const t = entries[0].kind === 'copper' ? entries[0].thicknessMm : mmFromUm(d.substrate.copperThicknessUm);
 	const extraWarnings: SizingWarning[] = [];
 	let sized: SizedDesign;
-	if (d.feed === 'aperture-coupled' || d.feed === 'proximity-coupled') {
+	const layered = d.feed;
+	if (isLayeredFeedKind(layered)) {
 		const [upper, lower] = groups;
-		const patchGroup = d.feed === 'aperture-coupled' ? upper : combineDielectrics([upper, lower]);
+		// the slot couples through the upper dielectric alone; the buried line sees both above it
+		const patchGroup = layered === 'aperture-coupled' ? upper : combineDielectrics([upper, lower]);
 		const base = sizeSingle(onGroup(d, patchGroup, 'edge'));
 		const margin = base.ground.marginMm;
 		const probeLine = microstripSection(d.feedLineImpedanceOhm, d.frequencyHz, lower.heightMm, lower.relativePermittivity, t, 0);
 		const lambdaG = 4 * quarterGuidedWavelengthMm(d.frequencyHz, probeLine.effectivePermittivity);
 		const L = patchLengthMm(base.patch);
 		let feed: SizedFeed;
-		if (d.feed === 'aperture-coupled') {
-			const start = apertureStart(L, lambdaG);
-			const slotLengthMm = d.slot?.lengthMm ?? start.slotLengthMm;
-			const slotWidthMm = d.slot?.widthMm ?? start.slotWidthMm;
-			const stubLengthMm = d.slot?.stubLengthMm ?? start.stubLengthMm;
-			feed = { kind: 'aperture-coupled', line: { ...probeLine, lengthMm: margin + L / 2 }, slotLengthMm, slotWidthMm, stubLengthMm };
-		} else {
-			const overlapMm = d.proximity?.overlapMm ?? L / 2;
-			if (!(overlapMm < L)) throw new InputError([{ path: 'proximity.overlapMm', value: overlapMm, message: `must be less than the patch length ${L.toFixed(3)} mm; allowed range [0, ${L.toFixed(3)})` }]);
-			feed = { kind: 'proximity-coupled', line: { ...probeLine, lengthMm: margin + overlapMm }, overlapMm };
+		let tuneBy: string;
+		switch (layered) {
+			case 'aperture-coupled': {
+				const start = apertureStart(L, lambdaG);
+				const slotLengthMm = d.slot?.lengthMm ?? start.slotLengthMm;
+				const slotWidthMm = d.slot?.widthMm ?? start.slotWidthMm;
+				const stubLengthMm = d.slot?.stubLengthMm ?? start.stubLengthMm;
+				feed = { kind: 'aperture-coupled', line: { ...probeLine, lengthMm: margin + L / 2 }, slotLengthMm, slotWidthMm, stubLengthMm };
+				tuneBy = 'slot.lengthMm and slot.stubLengthMm';
+				break;
+			}
+			case 'proximity-coupled': {
+				const overlapMm = d.proximity?.overlapMm ?? L / 2;
+				if (!(overlapMm < L)) throw new InputError([{ path: 'proximity.overlapMm', value: overlapMm, message: `must be less than the patch length ${L.toFixed(3)} mm; allowed range [0, ${L.toFixed(3)})` }]);
+				feed = { kind: 'proximity-coupled', line: { ...probeLine, lengthMm: margin + overlapMm }, overlapMm };
+				tuneBy = 'proximity.overlapMm';
+				break;
+			}
+			default:
+				return layered satisfies never;
 		}
 		extraWarnings.push({
 			code: 'first-pass-coupling',
-			message: `The ${d.feed} sizes are first-pass values from published design guidelines, not a solved match: tune ${d.feed === 'aperture-coupled' ? 'slot.lengthMm and slot.stubLengthMm' : 'proximity.overlapMm'} by sweep against a field solver or a measurement.`
+			message: `The ${layered} sizes are first-pass values from published design guidelines, not a solved match: tune ${tuneBy} by sweep against a field solver or a measurement.`
 		});
 		// the feed's own warnings (notch, line width) do not apply to a coupled feed; keep the substrate ones
 		const kept = base.warnings.filter((w) => w.code !== 'feed-wider-than-notch' && w.code !== 'inset-too-deep' && w.code !== 'feed-mismatch');
-		sized = { ...base, input: d, feedKind: d.feed, feed, warnings: kept };
+		sized = { ...base, input: d, feedKind: layered, feed, warnings: kept };
 	} else if (d.parasitic) {
 		const [upper, lower] = groups;
 		// the driven patch lies under the spacer: size it on the covered εeff (as an equivalent substrate εr at its own width)

@@ -1,6 +1,7 @@
 // Sizing one design: validated input in, every derived quantity and the warnings out.
 import { InputError, laminateClassFor, parseDesignInput, type DesignInput } from '../schemas';
 import { freeSpaceWavelengthMm, mmFromUm } from '../units';
+import { feedKindTraits } from './feed-kinds';
 import { circularPatch } from './circular-patch';
 import { circularProbeRadiusMm } from './circular-probe-radius';
 import { insetDepthMm } from './inset-depth';
@@ -88,9 +89,21 @@ function formulaValuesOf(d: DesignInput, fed: SizedFeed, core: Core): FormulaVal
 	if (o.widthMm !== undefined && plain.patch.kind === 'rectangular') out.widthMm = plain.patch.widthMm;
 	if (o.radiusMm !== undefined && plain.patch.kind === 'circular') out.radiusMm = plain.patch.radiusMm;
 	// the feed formulas applied to the patch as overridden, so a tuned feed is compared like for like
-	if (o.insetDepthMm !== undefined && fed.kind === 'inset') out.insetDepthMm = insetDepthMm({ edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm, lengthMm: core.resonantLengthMm, law: 'cos4' });
-	if (o.probeOffsetMm !== undefined && fed.kind === 'probe') out.probeOffsetMm = probeFormulaOffset(d, core);
-	return out;
+	switch (fed.kind) {
+		case 'inset':
+			if (o.insetDepthMm !== undefined) out.insetDepthMm = insetDepthMm({ edgeResistanceOhm: core.edgeResistanceOhm, targetResistanceOhm: d.targetImpedanceOhm, lengthMm: core.resonantLengthMm, law: 'cos4' });
+			return out;
+		case 'probe':
+			if (o.probeOffsetMm !== undefined) out.probeOffsetMm = probeFormulaOffset(d, core);
+			return out;
+		case 'edge':
+		case 'quarter-wave':
+		case 'aperture-coupled':
+		case 'proximity-coupled':
+			return out; // no feed dimension of these can be overridden
+		default:
+			return fed satisfies never;
+	}
 }
 
 function probeFormulaOffset(d: DesignInput, core: Core): number {
@@ -239,6 +252,8 @@ function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
 			const edge = Math.min(core.resonantLengthMm / 2 - offset, core.extentXMm / 2);
 			return { feed: { kind: 'probe', offsetXMm: 0, offsetYMm: offset, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: edge, padRadiusMm: pad / 2, drillDiameterMm: common.drillDiameterMm } } };
 		}
+		default:
+			return d.feed satisfies never;
 	}
 }
 
@@ -269,7 +284,7 @@ function sizeValid(d: DesignInput, assumed?: WarningFacts['assumedLossTangent'])
 		circularlyPolarised: isCircularlyPolarisedShape(d.shape),
 		accuracy: resonanceAccuracy,
 		...(d.bandToCover ? { bandCover: { wanted: d.bandToCover, usable: usableBandOf(d, core.estimates) } } : {}),
-		feedPoint: { resistanceOhm: d.feed === 'edge' ? core.edgeResistanceOhm : d.targetImpedanceOhm, lineImpedanceOhm: d.feedLineImpedanceOhm },
+		feedPoint: { resistanceOhm: feedKindTraits[d.feed].presents === 'edge-resistance' ? core.edgeResistanceOhm : d.targetImpedanceOhm, lineImpedanceOhm: d.feedLineImpedanceOhm },
 		...fed.facts
 	});
 	const shapeModel =

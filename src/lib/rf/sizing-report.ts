@@ -80,6 +80,8 @@ export function sizingReport(sized: SizedDesign): SizingReport {
 				probeClearanceDiameterMm: f.clearanceDiameterMm
 			});
 			break;
+		default:
+			throw new Error(`sizingReport: no report row for feed ${f satisfies never}`);
 	}
 	Object.assign(out, {
 		groundWidthMm: sized.ground.widthMm,

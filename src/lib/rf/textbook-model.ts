@@ -23,12 +23,24 @@ export function textbookModel(d: DesignInput, firstPass: SizedPatch): SizedTextb
 	if (firstPass.kind === 'circular') {
 		const edge = 1 / circularRadiationConductanceS(firstPass.effectiveRadiusMm, frequencyHz);
 		const out: SizedTextbook = { resonantDimensionMm: firstPass.radiusMm, resonanceOfFirstPassHz, edgeResistanceOhm: edge };
-		if (d.feed !== 'probe' || d.targetImpedanceOhm > edge) return out;
-		const target = { edgeResistanceOhm: edge, targetResistanceOhm: d.targetImpedanceOhm, radiusMm: firstPass.radiusMm, effectiveRadiusMm: firstPass.effectiveRadiusMm };
-		try {
-			return { ...out, probeOffsetMm: circularProbeRadiusMm(target) };
-		} catch {
-			return out; // the rim presents less than the target: no textbook probe position
+		if (d.targetImpedanceOhm > edge) return out;
+		switch (d.feed) {
+			case 'probe': {
+				const target = { edgeResistanceOhm: edge, targetResistanceOhm: d.targetImpedanceOhm, radiusMm: firstPass.radiusMm, effectiveRadiusMm: firstPass.effectiveRadiusMm };
+				try {
+					return { ...out, probeOffsetMm: circularProbeRadiusMm(target) };
+				} catch {
+					return out; // the rim presents less than the target: no textbook probe position
+				}
+			}
+			case 'inset':
+			case 'edge':
+			case 'quarter-wave':
+			case 'aperture-coupled':
+			case 'proximity-coupled':
+				return out; // the textbook places only a probe on a disc
+			default:
+				return d.feed satisfies never;
 		}
 	}
 	const base = { frequencyHz, relativePermittivity: s.relativePermittivity, heightMm: s.heightMm, model: 'textbook' as const };
@@ -37,7 +49,17 @@ export function textbookModel(d: DesignInput, firstPass: SizedPatch): SizedTextb
 	const out: SizedTextbook = { resonantDimensionMm: model.lengthMm, resonanceOfFirstPassHz, edgeResistanceOhm: edge };
 	if (firstPass.kind !== 'rectangular' || d.targetImpedanceOhm > edge) return out;
 	const target = { edgeResistanceOhm: edge, targetResistanceOhm: d.targetImpedanceOhm, lengthMm: model.lengthMm };
-	if (d.feed === 'inset') return { ...out, insetDepthMm: insetDepthMm(target) };
-	if (d.feed === 'probe') return { ...out, probeOffsetMm: probeOffsetMm(target) };
-	return out;
+	switch (d.feed) {
+		case 'inset':
+			return { ...out, insetDepthMm: insetDepthMm(target) };
+		case 'probe':
+			return { ...out, probeOffsetMm: probeOffsetMm(target) };
+		case 'edge':
+		case 'quarter-wave':
+		case 'aperture-coupled':
+		case 'proximity-coupled':
+			return out; // no feed position to place by cos²
+		default:
+			return d.feed satisfies never;
+	}
 }

@@ -7,6 +7,7 @@ export * from './account-limits';
 export * from './plain-text';
 export * from './revision-note';
 export * from './waiver-reason';
+export * from './reflection-sample';
 import { designInputSchema, type DesignInput } from './design-input';
 import { parseWith } from './input-error';
 

@@ -194,29 +194,40 @@ export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number,
 	const fixedY: number[] = [];
 	const fixedZ: number[] = Array.from({ length: layerCells + 1 }, (_, k) => groundZMm + k * layerCellMm);
 	let port: FieldModel['port'];
-	if (artwork.metadata.feedKind === 'probe') {
-		const drill = artwork.drills.find((d) => d.role === 'probe');
-		if (!drill) throw unsupported('a probe feed needs its probe drill');
-		const [px, py] = drill.center;
-		const probe = artwork.metadata.probe;
-		const pinRadiusMm = probe?.model === 'plated-barrel' ? drill.diameterMm / 2 + mmFromUm(probe.platingThicknessUm ?? 0) : drill.diameterMm / 2;
-		const portTopZ = groundZMm + layerCellMm;
-		properties.push({ kind: 'pec', name: 'probe-pin', primitives: [{ kind: 'cylinder', centerMm: [px, py], fromZMm: portTopZ, toZMm: topZMm, radiusMm: pinRadiusMm, priority: PRIORITY_PIN }] });
-		port = { fromMm: [px, py, groundZMm], toMm: [px, py, portTopZ], referenceImpedanceOhm };
-		fixedX.push(px);
-		fixedY.push(py);
-	} else if (['inset', 'edge', 'quarter-wave'].includes(artwork.metadata.feedKind)) {
-		const line = topLayer.shapes.find((s) => s.role === 'feed-line');
-		if (!line) throw unsupported('a microstrip feed needs its feed line');
-		const pts = shapeOutline(line);
-		const x0 = pts.reduce((m, p) => Math.min(m, p[0]), Infinity);
-		const x1 = pts.reduce((m, p) => Math.max(m, p[0]), -Infinity);
-		// one thirds-rule cell in from the board edge, so the port sits on copper at both ends
-		const y0 = pts.reduce((m, p) => Math.min(m, p[1]), Infinity) + edgeCellMm;
-		port = { fromMm: [x0, y0, groundZMm], toMm: [x1, y0, topZMm], referenceImpedanceOhm };
-		fixedY.push(y0);
-	} else {
-		throw unsupported(`the Field check does not model a ${artwork.metadata.feedKind} feed yet`);
+	const feedKind = artwork.metadata.feedKind;
+	switch (feedKind) {
+		case 'probe': {
+			const drill = artwork.drills.find((d) => d.role === 'probe');
+			if (!drill) throw unsupported('a probe feed needs its probe drill');
+			const [px, py] = drill.center;
+			const probe = artwork.metadata.probe;
+			const pinRadiusMm = probe?.model === 'plated-barrel' ? drill.diameterMm / 2 + mmFromUm(probe.platingThicknessUm ?? 0) : drill.diameterMm / 2;
+			const portTopZ = groundZMm + layerCellMm;
+			properties.push({ kind: 'pec', name: 'probe-pin', primitives: [{ kind: 'cylinder', centerMm: [px, py], fromZMm: portTopZ, toZMm: topZMm, radiusMm: pinRadiusMm, priority: PRIORITY_PIN }] });
+			port = { fromMm: [px, py, groundZMm], toMm: [px, py, portTopZ], referenceImpedanceOhm };
+			fixedX.push(px);
+			fixedY.push(py);
+			break;
+		}
+		case 'inset':
+		case 'edge':
+		case 'quarter-wave': {
+			const line = topLayer.shapes.find((s) => s.role === 'feed-line');
+			if (!line) throw unsupported('a microstrip feed needs its feed line');
+			const pts = shapeOutline(line);
+			const x0 = pts.reduce((m, p) => Math.min(m, p[0]), Infinity);
+			const x1 = pts.reduce((m, p) => Math.max(m, p[0]), -Infinity);
+			// one thirds-rule cell in from the board edge, so the port sits on copper at both ends
+			const y0 = pts.reduce((m, p) => Math.min(m, p[1]), Infinity) + edgeCellMm;
+			port = { fromMm: [x0, y0, groundZMm], toMm: [x1, y0, topZMm], referenceImpedanceOhm };
+			fixedY.push(y0);
+			break;
+		}
+		case 'aperture-coupled':
+		case 'proximity-coupled':
+			throw unsupported(`the Field check does not model a ${feedKind} feed yet`);
+		default:
+			return feedKind satisfies never;
 	}
 
 	// edges lying on or beside a fixed line are resolved by it (the port plane near the board edge)

@@ -60,7 +60,18 @@ function threadCount(context: FieldCheckContext): number {
 
 /** The reference impedance of the port: the feed line's Z0, or the target (the coax) for a probe. */
 function referenceImpedanceOf(sized: SizedDesign): number {
-	return sized.feed.kind === 'probe' ? sized.input.targetImpedanceOhm : sized.input.feedLineImpedanceOhm;
+	switch (sized.feed.kind) {
+		case 'probe':
+			return sized.input.targetImpedanceOhm;
+		case 'edge':
+		case 'inset':
+		case 'quarter-wave':
+		case 'aperture-coupled':
+		case 'proximity-coupled':
+			return sized.input.feedLineImpedanceOhm;
+		default:
+			return sized.feed satisfies never;
+	}
 }
 
 /** Runs the engine on one model in `dir`; reports the energy decay as progress from `from` to `to`. */

@@ -39,9 +39,20 @@ function resonantDimension(sized: SizedDesign): { key: ResonantKey; valueMm: num
 }
 
 function feedDimension(sized: SizedDesign): { key: FeedKey; valueMm: number } | null {
-	if (sized.feed.kind === 'inset') return { key: 'insetDepthMm', valueMm: sized.feed.insetDepthMm };
-	if (sized.feed.kind === 'probe') return { key: 'probeOffsetMm', valueMm: Math.hypot(sized.feed.offsetXMm, sized.feed.offsetYMm) };
-	return null;
+	const feed = sized.feed;
+	switch (feed.kind) {
+		case 'inset':
+			return { key: 'insetDepthMm', valueMm: feed.insetDepthMm };
+		case 'probe':
+			return { key: 'probeOffsetMm', valueMm: Math.hypot(feed.offsetXMm, feed.offsetYMm) };
+		case 'edge':
+		case 'quarter-wave':
+		case 'aperture-coupled':
+		case 'proximity-coupled':
+			return null; // no feed position to move
+		default:
+			return feed satisfies never;
+	}
 }
 
 /**

@@ -5,7 +5,8 @@ import { mkdtempSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { request } from 'node:http';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import pg from 'pg';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { migrateToLatest } from '../../../scripts/lib/migrate';
 import { closeDb } from '../../../src/lib/server/db';
 import { api } from './helpers/client';
@@ -47,13 +48,23 @@ describe('PostgreSQL stopped and started under the running app', () => {
 		expect((await api(server.origin, '/api/v1/teams', auth)).status).toBe(200);
 		const before = await designsOfTeam(ws.a.teamId);
 
-		// 40 design creations in flight (each a design row plus revision A in one transaction) while the database stops.
+		// 40 design creations in flight (each a design row plus revision A in one transaction) while the database
+		// stops. A session of our own holds the revision table, so no creation can commit: once one of them waits
+		// on that lock (its design row written, its revision not), every answer can only be 503.
+		const blocker = new pg.Client({ connectionString: url });
+		blocker.on('error', () => undefined); // the stop below ends this session as well
+		await blocker.connect();
+		await blocker.query('begin');
+		await blocker.query('lock table revision in access exclusive mode');
 		const creations = Array.from({ length: 40 }, (_, i) => api(server.origin, `/api/v1/teams/${ws.a.teamId}/designs`, auth, { body: { input: demoDesign(`Fault ${i} ${ws.suffix}`) } }));
-		await new Promise((r) => setTimeout(r, 30));
+		const waitingOnRevision = async () =>
+			(await queryOnce<{ n: number }>(url, "select count(*)::int as n from pg_locks l join pg_class c on c.oid = l.relation where c.relname = 'revision' and not l.granted"))[0].n;
+		await vi.waitFor(async () => expect(await waitingOnRevision()).toBeGreaterThan(0), { timeout: 30_000, interval: 25 });
 		await cluster.stop();
+		await blocker.end().catch(() => undefined);
 		const answers = await Promise.all(creations);
 		const statuses = answers.map((a) => a.status);
-		expect(statuses.every((s) => s === 201 || s === 503), `statuses: ${statuses.join(',')}`).toBe(true);
+		expect(statuses, `statuses: ${statuses.join(',')}`).toEqual(Array.from({ length: 40 }, () => 503));
 
 		// While down: JSON 503 under /api, a 503 page for people, never a 500.
 		const apiDown = await api(server.origin, '/api/v1/teams', auth);
@@ -82,9 +93,8 @@ describe('PostgreSQL stopped and started under the running app', () => {
 		expect(recoveredMs).toBeLessThan(10_000);
 		expect(server.process.exitCode).toBeNull();
 
-		// Exactly the creations answered 201 exist, each whole (design + revision A); the 503s left nothing.
-		const created = statuses.filter((s) => s === 201).length;
-		expect(await designsOfTeam(ws.a.teamId)).toBe(before + created);
+		// The 503s left nothing: not one of the design rows written inside the interrupted transactions remains.
+		expect(await designsOfTeam(ws.a.teamId)).toBe(before);
 		expect(await halfDesigns(ws.a.teamId)).toBe(0);
 	}, 120_000);
 });

@@ -4,11 +4,11 @@ import Handle from 'dxf-writer/src/Handle.js';
 import { boundsOfPoints, emptyBounds } from '../../geometry';
 import type { DxfCommand } from './commands';
 
-const r = (v: number) => {
+const roundToNanometre = (v: number) => {
 	const n = Math.round(v * 1e6) / 1e6;
 	return n === 0 ? 0 : n;
 };
-const rb = (v: number) => {
+const roundBulge = (v: number) => {
 	const n = Math.round(v * 1e12) / 1e12;
 	return n === 0 ? 0 : n;
 };
@@ -26,8 +26,8 @@ export function serializeDxf(commands: readonly DxfCommand[]): string {
 		if (c.type === 'polyline') ext = boundsOfPoints(c.vertices.map((v) => v.at), ext);
 	}
 	if (Number.isFinite(ext.minXMm)) {
-		drawing.header('EXTMIN', [[10, r(ext.minXMm)], [20, r(ext.minYMm)], [30, 0]]);
-		drawing.header('EXTMAX', [[10, r(ext.maxXMm)], [20, r(ext.maxYMm)], [30, 0]]);
+		drawing.header('EXTMIN', [[10, roundToNanometre(ext.minXMm)], [20, roundToNanometre(ext.minYMm)], [30, 0]]);
+		drawing.header('EXTMAX', [[10, roundToNanometre(ext.maxXMm)], [20, roundToNanometre(ext.maxYMm)], [30, 0]]);
 	}
 	for (const c of commands) {
 		if (c.type === 'layer') drawing.addLayer(c.name, c.colorIndex, 'CONTINUOUS');
@@ -35,9 +35,9 @@ export function serializeDxf(commands: readonly DxfCommand[]): string {
 	for (const c of commands) {
 		if (c.type === 'layer') continue;
 		drawing.setActiveLayer(c.layer);
-		if (c.type === 'circle') drawing.drawCircle(r(c.center[0]), r(c.center[1]), r(c.radiusMm));
+		if (c.type === 'circle') drawing.drawCircle(roundToNanometre(c.center[0]), roundToNanometre(c.center[1]), roundToNanometre(c.radiusMm));
 		else {
-			const pts = c.vertices.map((v) => (v.bulge === 0 ? [r(v.at[0]), r(v.at[1])] : [r(v.at[0]), r(v.at[1]), rb(v.bulge)]));
+			const pts = c.vertices.map((v) => (v.bulge === 0 ? [roundToNanometre(v.at[0]), roundToNanometre(v.at[1])] : [roundToNanometre(v.at[0]), roundToNanometre(v.at[1]), roundBulge(v.bulge)]));
 			drawing.drawPolyline(pts as unknown as [number, number][], c.closed);
 		}
 	}

@@ -20,17 +20,17 @@ function boundsDiffer(a: Bounds | null, b: Bounds | null): string | null {
 
 function compareHoles(plated: boolean, drills: readonly ArtworkDrill[], holes: readonly FabHole[], fileName: string | null): ReadBackMismatch[] {
 	const what = plated ? 'plated' : 'non-plated';
-	const m = (check: ReadBackMismatch['check'], message: string): ReadBackMismatch => ({ check, fileName, layerKey: null, message });
-	if (drills.length !== holes.length) return [m('drill-count', `${drills.length} ${what} holes in the artwork, ${holes.length} in the drill file`)];
+	const mismatch = (check: ReadBackMismatch['check'], message: string): ReadBackMismatch => ({ check, fileName, layerKey: null, message });
+	if (drills.length !== holes.length) return [mismatch('drill-count', `${drills.length} ${what} holes in the artwork, ${holes.length} in the drill file`)];
 	const want = drills.map((d) => d.diameterMm).sort((a, b) => a - b);
 	const got = holes.map((h) => h.diameterMm).sort((a, b) => a - b);
 	const bad = want.findIndex((d, i) => Math.abs(d - got[i]) > TOL.drillDiameterMm);
-	if (bad >= 0) return [m('drill-diameter', `a ${fmt(want[bad])} mm ${what} hole in the artwork is ${fmt(got[bad])} mm in the drill file`)];
+	if (bad >= 0) return [mismatch('drill-diameter', `a ${fmt(want[bad])} mm ${what} hole in the artwork is ${fmt(got[bad])} mm in the drill file`)];
 	const unused = [...holes];
 	const out: ReadBackMismatch[] = [];
 	for (const d of drills) {
 		const i = unused.findIndex((h) => Math.abs(h.diameterMm - d.diameterMm) <= TOL.drillDiameterMm && Math.hypot(h.xMm - d.center[0], h.yMm - d.center[1]) <= TOL.drillPositionMm);
-		if (i < 0) out.push(m('drill-position', `${d.id} at (${fmt(d.center[0])}, ${fmt(d.center[1])}) has no hole within 1 µm in the drill file`));
+		if (i < 0) out.push(mismatch('drill-position', `${d.id} at (${fmt(d.center[0])}, ${fmt(d.center[1])}) has no hole within 1 µm in the drill file`));
 		else unused.splice(i, 1);
 	}
 	return out;
@@ -43,13 +43,13 @@ export function compareFabView(artwork: Artwork, view: FabView): ReadBackMismatc
 		const key = layerKeyOf(layer.function);
 		expectedKeys.add(key);
 		const found = view.layers.filter((l) => l.key === key);
-		const m = (check: ReadBackMismatch['check'], message: string, fileName: string | null = found[0]?.fileName ?? null) => out.push({ check, fileName, layerKey: key, message });
+		const mismatch = (check: ReadBackMismatch['check'], message: string, fileName: string | null = found[0]?.fileName ?? null) => out.push({ check, fileName, layerKey: key, message });
 		if (found.length === 0) {
-			m('layer-missing', `no file images ${key} (${layer.title})`, null);
+			mismatch('layer-missing', `no file images ${key} (${layer.title})`, null);
 			continue;
 		}
 		if (found.length > 1) {
-			m('layer-unexpected', `${found.length} files image ${key}: ${found.map((f) => f.fileName).join(', ')}`);
+			mismatch('layer-unexpected', `${found.length} files image ${key}: ${found.map((f) => f.fileName).join(', ')}`);
 			continue; // which one a fab would use is anyone's guess
 		}
 		const file = found[0];
@@ -59,14 +59,14 @@ export function compareFabView(artwork: Artwork, view: FabView): ReadBackMismatc
 		const gotArea = imageArea(got);
 		const scale = Math.max(want.areaMm2, 1e-9);
 		if (Math.abs(gotArea - want.areaMm2) > TOL.areaFraction * scale) {
-			m('layer-area', `${key}: ${fmt(want.areaMm2)} mm² in the artwork, ${fmt(gotArea)} mm² in ${file.fileName}`);
+			mismatch('layer-area', `${key}: ${fmt(want.areaMm2)} mm² in the artwork, ${fmt(gotArea)} mm² in ${file.fileName}`);
 		}
 		// copper in one image and not the other, allowed as if every edge had moved by the extents tolerance
 		const xor = differenceArea(want.regions, got);
 		const allowed = Math.min(TOL.areaFraction * scale, imagePerimeter(want.regions) * TOL.extentsMm);
-		if (xor > allowed) m('layer-shape', `${key}: ${fmt(xor)} mm² differ between the artwork and ${file.fileName} (allowed ${fmt(allowed)} mm²)`);
+		if (xor > allowed) mismatch('layer-shape', `${key}: ${fmt(xor)} mm² differ between the artwork and ${file.fileName} (allowed ${fmt(allowed)} mm²)`);
 		const ext = boundsDiffer(want.bounds, file.bounds);
-		if (ext) m('layer-extents', `${key}: ${ext}`);
+		if (ext) mismatch('layer-extents', `${key}: ${ext}`);
 	}
 	for (const l of view.layers) {
 		if (!expectedKeys.has(l.key)) out.push({ check: 'layer-unexpected', fileName: l.fileName, layerKey: l.key, message: `${l.fileName} images ${l.key}, which the artwork does not have` });

@@ -67,14 +67,13 @@ const comment = (line: string) => line.replace(/\*\//g, '* /');
 
 export function serializeStep(doc: StepDocument): string {
 	const h = doc.header;
-	const s = (t: string) => encodeStepString(t);
 	const lines = [
 		'ISO-10303-21;',
 		'HEADER;',
 		...(h.comments.length ? ['/*', ...h.comments.map((c) => ` * ${comment(c)}`), ' */'] : []),
-		`FILE_DESCRIPTION((${h.description.map(s).join(',')}),'2;1');`,
-		`FILE_NAME(${s(h.fileName)},${s(h.timeStamp)},(${s(h.author)}),(${s(h.organization)}),${s(h.preprocessorVersion)},${s(h.originatingSystem)},'');`,
-		`FILE_SCHEMA((${s(h.schema)}));`,
+		`FILE_DESCRIPTION((${h.description.map(encodeStepString).join(',')}),'2;1');`,
+		`FILE_NAME(${encodeStepString(h.fileName)},${encodeStepString(h.timeStamp)},(${encodeStepString(h.author)}),(${encodeStepString(h.organization)}),${encodeStepString(h.preprocessorVersion)},${encodeStepString(h.originatingSystem)},'');`,
+		`FILE_SCHEMA((${encodeStepString(h.schema)}));`,
 		'ENDSEC;',
 		'DATA;',
 		...doc.entities.map(entity),

@@ -27,22 +27,22 @@ const el = (name: SvgElement['name'], attributes: Record<string, string>, childr
 	text === undefined ? { name, attributes, children } : { name, attributes, children, text: replaceControlCharacters(text) };
 
 export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
-	const H = artwork.board.lengthMm;
-	const W = artwork.board.widthMm;
-	const X = (x: number) => svgNumber(x);
-	const Y = (y: number) => svgNumber(H - y);
-	const P = (p: Point) => `${X(p[0])} ${Y(p[1])}`;
+	const boardLengthMm = artwork.board.lengthMm;
+	const boardWidthMm = artwork.board.widthMm;
+	const toSvgX = (x: number) => svgNumber(x);
+	const toSvgY = (y: number) => svgNumber(boardLengthMm - y);
+	const toSvgPoint = (p: Point) => `${toSvgX(p[0])} ${toSvgY(p[1])}`;
 
 	const pathOf = (c: Contour): string => {
-		let d = `M${P(c.start)}`;
+		let d = `M${toSvgPoint(c.start)}`;
 		let from = c.start;
 		for (const s of c.segments) {
-			if (s.kind === 'line') d += `L${P(s.to)}`;
+			if (s.kind === 'line') d += `L${toSvgPoint(s.to)}`;
 			else {
 				const r = Math.hypot(from[0] - s.center[0], from[1] - s.center[1]);
 				const large = Math.abs(arcSweepRad(from, s.to, s.center, s.clockwise)) > Math.PI ? 1 : 0;
 				// flipping y turns counter-clockwise into SVG's positive-angle (sweep-flag 0) direction
-				d += `A${svgNumber(r)} ${svgNumber(r)} 0 ${large} ${s.clockwise ? 1 : 0} ${P(s.to)}`;
+				d += `A${svgNumber(r)} ${svgNumber(r)} 0 ${large} ${s.clockwise ? 1 : 0} ${toSvgPoint(s.to)}`;
 			}
 			from = s.to;
 		}
@@ -50,7 +50,7 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
 	};
 	const shapeElement = (s: ArtworkShape, fill: string): SvgElement => {
 		const g = s.geometry;
-		if (g.kind === 'circle') return el('circle', { id: s.id, cx: X(g.center[0]), cy: Y(g.center[1]), r: svgNumber(g.diameterMm / 2), fill });
+		if (g.kind === 'circle') return el('circle', { id: s.id, cx: toSvgX(g.center[0]), cy: toSvgY(g.center[1]), r: svgNumber(g.diameterMm / 2), fill });
 		if (g.kind === 'outline') return el('path', { id: s.id, d: pathOf(g.contour), fill: 'none', stroke: '#000000', 'stroke-width': svgNumber(g.strokeWidthMm) });
 		return el('path', { id: s.id, d: [g.region.outer, ...g.region.holes].map(pathOf).join(''), fill, 'fill-rule': 'evenodd' });
 	};
@@ -64,8 +64,8 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
 		if (clear.length) {
 			const maskId = `clear-${layer.id}`;
 			defs.push(
-				el('mask', { id: maskId, maskUnits: 'userSpaceOnUse', x: '0', y: '0', width: svgNumber(W), height: svgNumber(H) }, [
-					el('rect', { x: '0', y: '0', width: svgNumber(W), height: svgNumber(H), fill: '#ffffff' }),
+				el('mask', { id: maskId, maskUnits: 'userSpaceOnUse', x: '0', y: '0', width: svgNumber(boardWidthMm), height: svgNumber(boardLengthMm) }, [
+					el('rect', { x: '0', y: '0', width: svgNumber(boardWidthMm), height: svgNumber(boardLengthMm), fill: '#ffffff' }),
 					...clear.map((s) => shapeElement(s, '#000000'))
 				])
 			);
@@ -76,10 +76,10 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
 	const drills = el(
 		'g',
 		{ id: 'drills' },
-		artwork.drills.map((d) => el('circle', { id: d.id, cx: X(d.center[0]), cy: Y(d.center[1]), r: svgNumber(d.diameterMm / 2), fill: '#ffffff', stroke: '#000000', 'stroke-width': '0.05' }))
+		artwork.drills.map((d) => el('circle', { id: d.id, cx: toSvgX(d.center[0]), cy: toSvgY(d.center[1]), r: svgNumber(d.diameterMm / 2), fill: '#ffffff', stroke: '#000000', 'stroke-width': '0.05' }))
 	);
 
-	const dims = el('g', { id: 'dimensions', stroke: '#202020', 'stroke-width': '0.1', fill: 'none', 'font-family': 'sans-serif' }, artwork.dimensions.map((d) => dimension(d, X, Y)));
+	const dims = el('g', { id: 'dimensions', stroke: '#202020', 'stroke-width': '0.1', fill: 'none', 'font-family': 'sans-serif' }, artwork.dimensions.map((d) => dimension(d, toSvgX, toSvgY)));
 
 	const { designName, revisionLabel, revisionDate } = meta;
 	const dielectric = artwork.stack.find((s) => s.kind === 'dielectric');
@@ -87,8 +87,8 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
 	const laminate = dielectric && dielectric.kind === 'dielectric'
 		? `εr ${dielectric.relativePermittivity}, tanδ ${dielectric.lossTangent}, h ${svgNumber(dielectric.thicknessMm)} mm, copper ${svgNumber((copper?.thicknessMm ?? 0) * 1000)} µm`
 		: '';
-	const tbY = H + 14;
-	const tbW = Math.max(W, 90);
+	const tbY = boardLengthMm + 14;
+	const tbW = Math.max(boardWidthMm, 90);
 	const title = el('g', { id: 'title-block', 'font-family': 'sans-serif', fill: '#000000' }, [
 		el('rect', { x: '0', y: svgNumber(tbY), width: svgNumber(tbW), height: '22', fill: 'none', stroke: '#000000', 'stroke-width': '0.2' }),
 		el('text', { x: '2', y: svgNumber(tbY + 5.5), 'font-size': '4' }, [], designName),
@@ -98,8 +98,8 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
 	]);
 
 	const m = SVG_MARGINS_MM;
-	const viewW = Math.max(W, tbW) + m.left + m.right;
-	const viewH = H + m.top + m.bottom;
+	const viewW = Math.max(boardWidthMm, tbW) + m.left + m.right;
+	const viewH = boardLengthMm + m.top + m.bottom;
 	return {
 		widthMm: viewW,
 		heightMm: viewH,
@@ -116,7 +116,7 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
 }
 
 /** A dimension line offset 6 mm to one side of the span, with extension lines, end ticks and its label. */
-function dimension(d: ArtworkDimension, X: (x: number) => string, Y: (y: number) => string): SvgElement {
+function dimension(d: ArtworkDimension, toSvgX: (x: number) => string, toSvgY: (y: number) => string): SvgElement {
 	const off = 6;
 	const horizontal = d.side === 'above' || d.side === 'below';
 	const sign = d.side === 'above' || d.side === 'right' ? 1 : -1;
@@ -126,15 +126,15 @@ function dimension(d: ArtworkDimension, X: (x: number) => string, Y: (y: number)
 	const label = `${d.label} ${svgNumber(d.valueMm)}`;
 	const tick = (p: Point) =>
 		horizontal
-			? el('line', { x1: X(p[0]), y1: Y(p[1] - 1), x2: X(p[0]), y2: Y(p[1] + 1) })
-			: el('line', { x1: X(p[0] - 1), y1: Y(p[1]), x2: X(p[0] + 1), y2: Y(p[1]) });
+			? el('line', { x1: toSvgX(p[0]), y1: toSvgY(p[1] - 1), x2: toSvgX(p[0]), y2: toSvgY(p[1] + 1) })
+			: el('line', { x1: toSvgX(p[0] - 1), y1: toSvgY(p[1]), x2: toSvgX(p[0] + 1), y2: toSvgY(p[1]) });
 	const textAttrs: Record<string, string> = horizontal
-		? { x: X(mid[0]), y: Y(mid[1] + sign * 1.2 + (sign < 0 ? -1.5 : 0)), 'text-anchor': 'middle' }
-		: { x: X(mid[0] + sign * 1.2), y: Y(mid[1]), 'text-anchor': sign > 0 ? 'start' : 'end' };
+		? { x: toSvgX(mid[0]), y: toSvgY(mid[1] + sign * 1.2 + (sign < 0 ? -1.5 : 0)), 'text-anchor': 'middle' }
+		: { x: toSvgX(mid[0] + sign * 1.2), y: toSvgY(mid[1]), 'text-anchor': sign > 0 ? 'start' : 'end' };
 	return el('g', { id: `dimension-${d.id}` }, [
-		el('line', { x1: X(d.from[0]), y1: Y(d.from[1]), x2: X(a[0]), y2: Y(a[1]), 'stroke-dasharray': '0.5 0.5' }),
-		el('line', { x1: X(d.to[0]), y1: Y(d.to[1]), x2: X(b[0]), y2: Y(b[1]), 'stroke-dasharray': '0.5 0.5' }),
-		el('line', { x1: X(a[0]), y1: Y(a[1]), x2: X(b[0]), y2: Y(b[1]) }),
+		el('line', { x1: toSvgX(d.from[0]), y1: toSvgY(d.from[1]), x2: toSvgX(a[0]), y2: toSvgY(a[1]), 'stroke-dasharray': '0.5 0.5' }),
+		el('line', { x1: toSvgX(d.to[0]), y1: toSvgY(d.to[1]), x2: toSvgX(b[0]), y2: toSvgY(b[1]), 'stroke-dasharray': '0.5 0.5' }),
+		el('line', { x1: toSvgX(a[0]), y1: toSvgY(a[1]), x2: toSvgX(b[0]), y2: toSvgY(b[1]) }),
 		tick(a),
 		tick(b),
 		el('text', { ...textAttrs, 'font-size': '2.5', fill: '#202020', stroke: 'none' }, [], label)

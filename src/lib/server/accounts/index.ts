@@ -10,5 +10,6 @@ export { inviteToTeam, listPendingInvites, withdrawInvite, describeInvite, accep
 export { createApiToken, listApiTokens, findOwnApiTokenTeam, revokeApiToken, type ApiTokenSummary } from './api-tokens';
 export { safeNextPath, requireUser, requireSessionUser, DEFAULT_NEXT_PATH } from './request-user';
 export { formFailure, formFields, withoutSecrets, type FormProblem } from './form-failure';
+export { runTeamChange, teamChangeForms, type TeamChangeForm, type TeamChangeDone } from './team-changes';
 export { takeSignInAttempt, settleSuccessfulSignIn, clearSignInFailures, takeResetMailAllowance, takeInviteAllowance, THROTTLE_LIMITS, type Throttle } from './attempt-throttle';
 export { registerAccount, confirmEmail, resendEmailConfirmation, isEmailConfirmed, CONFIRM_LINK_LIFETIME_MS, type Registration } from './email-confirmation';

@@ -30,8 +30,8 @@ export function safeNextPath(next: string | null | undefined, fallback = DEFAULT
 	return url.pathname + url.search;
 }
 
-/** The signed-in person, or a redirect to sign-in that comes back to `url` afterwards. */
-export function requireUser(locals: App.Locals, url: URL): RequestUser {
+/** The signed-in person, or a redirect to sign-in that comes back to `url` afterwards (pages, actions and design access all ask here). */
+export function requireUser(locals: { user: RequestUser | null }, url: URL): RequestUser {
 	if (!locals.user) redirect(303, `/signin?next=${encodeURIComponent(url.pathname + url.search)}`);
 	return locals.user;
 }

@@ -1,6 +1,7 @@
 // Reading measurements: a revision's list, one with its samples, and the retune links either way.
 import type { Kysely } from 'kysely';
-import type { S11Sample, TracePoint } from '../../formats/touchstone';
+import type { TracePoint } from '../../formats/touchstone';
+import type { ReflectionSample } from '../../schemas/reflection-sample';
 import { analyzeMeasuredResponse } from '../../rf/measured-response';
 import type { Database } from '../db/database';
 import * as measurementQueries from '../db/measurement.queries';
@@ -14,7 +15,7 @@ export async function listMeasurements(db: Kysely<Database>, revisionId: string)
 export async function findMeasurement(db: Kysely<Database>, revisionId: string, id: string): Promise<MeasurementWithSamples | null> {
 	if (!/^[0-9a-f-]{36}$/.test(id)) return null;
 	const row = await measurementQueries.findMeasurementByRevisionAndId(db, revisionId, id);
-	return row ? { ...toMeasurement(row), samples: row.points as S11Sample[] } : null;
+	return row ? { ...toMeasurement(row), samples: row.points as ReflectionSample[] } : null;
 }
 
 export interface MeasurementView extends Measurement {

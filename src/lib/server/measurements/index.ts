@@ -6,4 +6,6 @@ export { deleteMeasurement, MeasurementInUseError, type DeleteMeasurementOptions
 export { TRACE_COLUMNS, traceOf } from './measurement-trace';
 export { retuneProposal, confirmRetune, type RetuneChoice } from './retune-measurement';
 export { requireRevision, type RevisionAccess } from './revision-access';
+export { loadMeasurementsPage } from './measurements-page';
+export { uploadRefusal, type UploadRefusal } from './upload-refusal';
 export type { Measurement, MeasurementSummary, MeasurementWithSamples } from './measurement-model';

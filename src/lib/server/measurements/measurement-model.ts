@@ -1,7 +1,7 @@
 // A measurement as the app sees it: camelCase, parsed json, one mapping.
 import type { MatchedBand, MeasuredResonance } from '../../rf/measured-response';
 import type { DataFormat, FrequencyUnit, PortCount, TouchstoneVersion } from '../../formats/touchstone';
-import type { S11Sample } from '../../formats/touchstone';
+import type { ReflectionSample } from '../../schemas/reflection-sample';
 
 /** What the stored file says, computed once at upload. */
 export interface MeasurementSummary {
@@ -34,7 +34,7 @@ export interface Measurement {
 }
 
 export interface MeasurementWithSamples extends Measurement {
-	samples: S11Sample[];
+	samples: ReflectionSample[];
 }
 
 export interface MeasurementListRecord {

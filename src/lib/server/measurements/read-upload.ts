@@ -1,6 +1,7 @@
 // An uploaded Touchstone file, checked before anything is stored: size, name, text content, then the strict reader.
 import { findControlCharacter, InputError } from '../../schemas';
-import { describeNetwork, portCountFromFileName, readTouchstone, s11FromNetwork, type S11Sample, type TracePoint } from '../../formats/touchstone';
+import { describeNetwork, portCountFromFileName, readTouchstone, s11FromNetwork, type TracePoint } from '../../formats/touchstone';
+import type { ReflectionSample } from '../../schemas/reflection-sample';
 import { analyzeMeasuredResponse } from '../../rf/measured-response';
 import type { MeasurementSummary } from './measurement-model';
 import { traceOf } from './measurement-trace';
@@ -13,7 +14,7 @@ const MAX_FILE_NAME_CHARS = 200;
 
 export interface ReadUpload {
 	text: string;
-	samples: S11Sample[];
+	samples: ReflectionSample[];
 	summary: MeasurementSummary;
 	/** What the plot draws: at most 2 points per pixel column (see measurement-trace.ts). */
 	trace: TracePoint[];

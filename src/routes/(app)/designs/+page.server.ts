@@ -3,13 +3,14 @@ import { fail, redirect } from '@sveltejs/kit';
 import { authorize, can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
 import { listDesigns, listLaminates, startDesign } from '$lib/server/designs';
-import { requireTeamRole, requireUser } from '$lib/server/designs/design-access';
+import { requireUser } from '$lib/server/accounts';
+import { requireTeamRole } from '$lib/server/designs/design-access';
 import { currentTeam } from '$lib/server/teams/current-team';
 import { InputError } from '$lib/schemas';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	requireUser(event);
+	requireUser(event.locals, event.url);
 	const { current } = await currentTeam(event.locals.identity, event.cookies);
 	if (!current) return { team: null, designs: [], laminates: [], canCreate: false };
 	authorize(current.role, 'team.read');

@@ -2,7 +2,8 @@
 import { fail } from '@sveltejs/kit';
 import { authorize, can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
-import { requireTeamRole, requireUser } from '$lib/server/designs/design-access';
+import { requireUser } from '$lib/server/accounts';
+import { requireTeamRole } from '$lib/server/designs/design-access';
 import { addFabProfile, listFabProfiles } from '$lib/server/fab-profiles';
 import { currentTeam } from '$lib/server/teams/current-team';
 import { InputError } from '$lib/schemas';
@@ -14,7 +15,7 @@ const lengthKeys = ['minTraceWidthMm', 'minSpacingMm', 'minDrillMm', 'minAnnular
 const processKeys = ['maxCopperLayers', 'mixedCores', 'boardThicknessTolerancePercent', 'finish'] as const;
 
 export const load: PageServerLoad = async (event) => {
-	requireUser(event);
+	requireUser(event.locals, event.url);
 	const { current } = await currentTeam(event.locals.identity, event.cookies);
 	if (!current) return { team: null, profiles: [], canAdd: false };
 	authorize(current.role, 'team.read');

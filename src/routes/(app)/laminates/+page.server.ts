@@ -3,7 +3,8 @@ import { fail } from '@sveltejs/kit';
 import { authorize, can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
 import { addLaminate, listLaminates } from '$lib/server/designs';
-import { requireTeamRole, requireUser } from '$lib/server/designs/design-access';
+import { requireUser } from '$lib/server/accounts';
+import { requireTeamRole } from '$lib/server/designs/design-access';
 import { currentTeam } from '$lib/server/teams/current-team';
 import { InputError } from '$lib/schemas';
 import type { Actions, PageServerLoad } from './$types';
@@ -11,7 +12,7 @@ import type { Actions, PageServerLoad } from './$types';
 const propertyKeys = ['relativePermittivity', 'lossTangent', 'heightMm', 'copperThicknessUm', 'relativePermittivityTolerance', 'heightToleranceMm'] as const;
 
 export const load: PageServerLoad = async (event) => {
-	requireUser(event);
+	requireUser(event.locals, event.url);
 	const { current } = await currentTeam(event.locals.identity, event.cookies);
 	if (!current) return { team: null, laminates: [], canAdd: false };
 	authorize(current.role, 'team.read');

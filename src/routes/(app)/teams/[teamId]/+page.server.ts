@@ -1,9 +1,9 @@
 // One team: its members for every member to see; for owners also roles, removal, invitations and the name.
-import { error, redirect } from '@sveltejs/kit';
+import { error } from '@sveltejs/kit';
 import { authorize, can, CONFIRM_EMAIL_FIRST } from '$lib/server/access';
 import { roleInTeam } from '$lib/server/access/team-role';
 import * as accounts from '$lib/server/accounts';
-import type { Actions, PageServerLoad, RequestEvent } from './$types';
+import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ params, locals, url }) => {
 	const user = accounts.requireUser(locals, url);
@@ -23,58 +23,11 @@ export const load: PageServerLoad = async ({ params, locals, url }) => {
 	};
 };
 
-/** Every change on this page needs team.manage; non-members get 404, other members 403. */
-async function asOwner(event: RequestEvent) {
-	const user = accounts.requireSessionUser(event.locals, event.url);
-	authorize(await roleInTeam(event.locals.identity, event.params.teamId), 'team.manage', 'Team not found');
-	return { user, teamId: event.params.teamId, values: await accounts.formFields(event.request) };
-}
-
+// Every change on this page needs team.manage; runTeamChange authorises, runs and answers each one the same way.
 export const actions: Actions = {
-	rename: async (event) => {
-		const { teamId, values } = await asOwner(event);
-		try {
-			await accounts.renameTeam(teamId, { name: values.name });
-		} catch (err) {
-			return accounts.formFailure(err, 'rename', values);
-		}
-		return { form: 'rename', done: 'Team renamed.' };
-	},
-	invite: async (event) => {
-		const { user, teamId, values } = await asOwner(event);
-		try {
-			await accounts.inviteToTeam(teamId, user.id, { email: values.email, role: values.role });
-		} catch (err) {
-			return accounts.formFailure(err, 'invite', values);
-		}
-		return { form: 'invite', done: `Invitation sent to ${values.email.trim().toLowerCase()}.` };
-	},
-	withdraw: async (event) => {
-		const { user, teamId, values } = await asOwner(event);
-		try {
-			await accounts.withdrawInvite(teamId, values.inviteId ?? '', user.id);
-		} catch (err) {
-			return accounts.formFailure(err, 'withdraw', values);
-		}
-		return { form: 'withdraw', done: 'Invitation withdrawn.' };
-	},
-	role: async (event) => {
-		const { user, teamId, values } = await asOwner(event);
-		try {
-			await accounts.changeMemberRole(teamId, { userId: values.userId, role: values.role }, user.id);
-		} catch (err) {
-			return accounts.formFailure(err, 'role', values);
-		}
-		return { form: 'role', done: 'Role changed.' };
-	},
-	remove: async (event) => {
-		const { user, teamId, values } = await asOwner(event);
-		try {
-			await accounts.removeMember(teamId, { userId: values.userId }, new Date(), user.id);
-		} catch (err) {
-			return accounts.formFailure(err, 'remove', values);
-		}
-		if (values.userId === user.id) redirect(303, '/teams');
-		return { form: 'remove', done: 'Member removed; their API tokens for this team are revoked.' };
-	}
+	rename: (event) => accounts.runTeamChange(event, 'rename'),
+	invite: (event) => accounts.runTeamChange(event, 'invite'),
+	withdraw: (event) => accounts.runTeamChange(event, 'withdraw'),
+	role: (event) => accounts.runTeamChange(event, 'role'),
+	remove: (event) => accounts.runTeamChange(event, 'remove')
 };

@@ -2,57 +2,12 @@
 // against the revision's newest full-wave check when there is one), its retune proposal, confirming it, and deleting a file
 // (editors and owners, after a confirm step; recorded in the security log).
 import { error, fail, redirect } from '@sveltejs/kit';
-import { can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
 import * as measurements from '$lib/server/measurements';
-import { findLatestFieldCheckResult, thinSamples } from '$lib/server/field-checks';
 import { InputError } from '$lib/schemas';
-import { TouchstoneError } from '$lib/formats/touchstone';
 import type { Actions, PageServerLoad } from './$types';
 
-export const load: PageServerLoad = async ({ locals, params, url }) => {
-	const { design, revision, role } = await measurements.requireRevision(locals.identity, params.designId, params.label, 'team.read');
-	const db = getDb();
-	const list = await measurements.listMeasurements(db, revision.id);
-	const chosenId = url.searchParams.get('m') ?? list[0]?.id;
-	const chosen = chosenId ? await measurements.findMeasurementView(db, revision.id, chosenId) : null;
-	const fullWave = chosen ? ((await findLatestFieldCheckResult(db, revision.id))?.result ?? null) : null;
-	let selected = null;
-	if (chosen) {
-		let proposal = null;
-		let proposalError: string | null = null;
-		try {
-			proposal = measurements.retuneProposal(revision, chosen);
-		} catch (err) {
-			if (!(err instanceof InputError)) throw err;
-			proposalError = err.first.message;
-		}
-		const { trace, ...facts } = chosen;
-		selected = {
-			...facts,
-			points: trace,
-			// complex samples, thinned, only to draw against a full-wave check (the Smith chart needs S11 itself)
-			samples: fullWave ? thinSamples((await measurements.findMeasurement(db, revision.id, chosen.id))?.samples ?? []) : [],
-			proposal,
-			proposalError,
-			retunedInto: await measurements.listRetunedRevisions(db, chosen.id)
-		};
-	}
-	const half = (revision.results.estimates.bandwidthFraction / 2) * revision.results.frequencyHz;
-	return {
-		design: { id: design.id, name: design.name, slug: design.slug },
-		revision: { label: revision.label, frequencyHz: revision.results.frequencyHz, parentLabel: revision.parentLabel },
-		predictedBand: { lowHz: revision.results.frequencyHz - half, highHz: revision.results.frequencyHz + half },
-		list,
-		selected,
-		retunedFrom: await measurements.findRetuneSource(db, revision.id),
-		fullWave,
-		canUpload: can(role, 'measurement.upload'),
-		canRetune: can(role, 'revision.create'),
-		canDelete: can(role, 'measurement.delete'),
-		maxBytes: measurements.MAX_TOUCHSTONE_BYTES
-	};
-};
+export const load: PageServerLoad = ({ locals, params, url }) => measurements.loadMeasurementsPage(locals.identity, params.designId, params.label, url.searchParams.get('m'));
 
 export const actions: Actions = {
 	upload: async ({ locals, params, request }) => {
@@ -65,8 +20,8 @@ export const actions: Actions = {
 		try {
 			({ id } = await measurements.uploadMeasurement(getDb(), { revisionId: revision.id, userId: locals.user!.id, fileName: file.name, bytes: new Uint8Array(await file.arrayBuffer()) }));
 		} catch (err) {
-			if (err instanceof TouchstoneError) return fail(400, { upload: { message: `${file.name}, line ${err.line}: expected ${err.expected}${err.found ? ` (found "${err.found.slice(0, 40)}")` : ''}. Nothing was stored.`, line: err.line } });
-			if (err instanceof InputError) return fail(400, { upload: { message: `${file.name}: ${err.first.message}. Nothing was stored.`, line: null } });
+			const refusal = measurements.uploadRefusal(file.name, err);
+			if (refusal) return fail(400, { upload: refusal });
 			throw err;
 		}
 		redirect(303, `/designs/${params.designId}/r/${params.label}/measurements?m=${id}`);
