@@ -14,6 +14,9 @@ export function createImmutableCache<T>(opts: { maxEntries: number; maxBytes: nu
 	function evict(): void {
 		for (const [key, entry] of entries) {
 			if (entries.size <= opts.maxEntries && totalBytes <= opts.maxBytes) break;
+			// the newest value stays even when it alone is over the byte limit: dropping it at once would make every
+			// request for it (a 64 × 64 array's bundle, minutes of work) build it again
+			if (entries.size === 1) break;
 			entries.delete(key);
 			totalBytes -= entry.bytes;
 		}

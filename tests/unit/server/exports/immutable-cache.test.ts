@@ -52,4 +52,22 @@ describe('createImmutableCache', () => {
 		await new Promise((r) => setTimeout(r, 0));
 		expect(cache.size).toBe(1);
 	});
+
+	it('keeps the newest value even when it alone is over the byte limit, until another one pushes it out', async () => {
+		const cache = createImmutableCache<string>({ maxEntries: 10, maxBytes: 10, sizeOf: sizeOfString });
+		let runs = 0;
+		const big = async () => {
+			runs++;
+			return 'z'.repeat(50);
+		};
+		await cache.get('big', big);
+		await new Promise((r) => setTimeout(r, 0));
+		expect(cache.size).toBe(1);
+		await cache.get('big', big);
+		expect(runs).toBe(1);
+		await cache.get('small', async () => 'ok');
+		await new Promise((r) => setTimeout(r, 0));
+		await cache.get('big', big);
+		expect(runs).toBe(2);
+	});
 });
