@@ -2,7 +2,7 @@
 import { deflateRawSync } from 'node:zlib';
 import { Bench } from 'tinybench';
 import { arrayBenchDocument, buildArrayBenchFiles, bundle, gate, holdsFabFiles, prepare, prepareSized, readBack, writeFiles, type PreparedDesign } from '../../src/lib/design';
-import { buildSweepDocument, createExportMeta, formatIds, serializeSweep, sha256Hex, toSvg } from '../../src/lib/formats';
+import { buildSweepDocument, createExportMeta, bundleFormatIds, formatIds, serializeSweep, sha256Hex, toSvg } from '../../src/lib/formats';
 import { STANDARD_QUICK_TURN_PROFILE } from '../../src/lib/schemas/fab-profile';
 import { legacyBundleDownload } from './legacy-download';
 import { parseDesignInput } from '../../src/lib/schemas';
@@ -74,7 +74,7 @@ export async function coreRows(): Promise<BenchRow[]> {
 	const afterDownload = async () => {
 		const prepared = prepareSized(sized);
 		gate(prepared, STANDARD_QUICK_TURN_PROFILE);
-		const files = await writeFiles(prepared, formatIds, meta);
+		const files = await writeFiles(prepared, bundleFormatIds, meta);
 		if (holdsFabFiles(files)) readBack(files, prepared, meta);
 		const body = await bundle(files, meta);
 		return { body, sha256: await sha256Hex(body) };
@@ -82,7 +82,7 @@ export async function coreRows(): Promise<BenchRow[]> {
 	const beforeDownload = () => legacyBundleDownload(sized, meta, STANDARD_QUICK_TURN_PROFILE);
 	const [after, before] = await Promise.all([afterDownload(), beforeDownload()]);
 	if (after.sha256 !== before.sha256) throw new Error('the pipeline and the old chain made different bundles');
-	const files = await writeFiles(prepareSized(sized), formatIds, meta);
+	const files = await writeFiles(prepareSized(sized), bundleFormatIds, meta);
 	const concatenated = new Uint8Array(files.reduce((n, f) => n + f.bytes.length, 0));
 	let offset = 0;
 	for (const f of files) {

@@ -5,7 +5,7 @@
 import { createHash } from 'node:crypto';
 import { buildArtwork } from '../../src/lib/artwork';
 import { checkArtwork } from '../../src/lib/drc';
-import { buildBundle, buildSweepDocument, exportFileName, formatRegistry, serializeSweep, serializeManifest, type ExportFile, type ExportMeta } from '../../src/lib/formats';
+import { bundleFormatIds, buildBundle, buildSweepDocument, exportFileName, formatEntry, serializeSweep, serializeManifest, writeOrder, type ExportFile, type ExportMeta } from '../../src/lib/formats';
 import { checkReadBack, isFabFileName } from '../../src/lib/formats/readback';
 import type { SizedDesign } from '../../src/lib/rf';
 import type { FabProfile } from '../../src/lib/schemas/fab-profile';
@@ -19,8 +19,8 @@ export async function legacyBundleDownload(sized: SizedDesign, meta: ExportMeta,
 	const prepared = { input: sized.input, sized, artwork };
 	const manifestName = exportFileName(meta, 'manifest', 'json');
 	const files: ExportFile[] = [];
-	for (const format of formatRegistry) {
-		if (!format.appliesTo(artwork)) continue;
+	for (const format of writeOrder.map(formatEntry)) {
+		if (!(bundleFormatIds as readonly string[]).includes(format.id) || !format.appliesTo(artwork)) continue;
 		if (format.id === 'sweep') {
 			// the old one-point sweep sized and drew the design again
 			const doc = buildSweepDocument(sized.input, { axes: [{ field: 'frequencyHz', values: [sized.input.frequencyHz] }] }, meta);

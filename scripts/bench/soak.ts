@@ -48,6 +48,12 @@ type Kind = 'sign-in' | 'size' | 'export' | 'upload' | 'array-download' | 'sweep
 
 const HEALTH_P99_TARGET_MS = 100;
 
+/** fetch's "fetch failed" with its cause (a reset socket, a refused connection, a timeout), which says what went wrong. */
+function describeError(err: unknown): string {
+	const cause = (err as { cause?: { code?: string; message?: string } }).cause;
+	return `${(err as Error).message}${cause ? ` (${cause.code ?? ''}${cause.code && cause.message ? ': ' : ''}${cause.message ?? ''})` : ''}`;
+}
+
 export async function soakRun(opts: { seconds: number; warmupSeconds: number; workers: number }) {
 	build();
 	const url = await freshDatabase();
@@ -151,7 +157,7 @@ export async function soakRun(opts: { seconds: number; warmupSeconds: number; wo
 					// no answer at all counts as a failed probe; a server that died says why
 					healthMs.push(Number.POSITIVE_INFINITY);
 					const died = server.process.exitCode !== null || server.process.signalCode !== null;
-					if (errorSamples.length < 5) errorSamples.push(`/healthz: ${(err as Error).message}${died ? `; the server ended (${server.process.exitCode ?? server.process.signalCode}): ${server.log().slice(-2000)}` : ''}`);
+					if (errorSamples.length < 5) errorSamples.push(`/healthz: ${describeError(err)}${died ? `; the server ended (${server.process.exitCode ?? server.process.signalCode}): ${server.log().slice(-2000)}` : ''}`);
 					if (died) break;
 				}
 				await new Promise((r) => setTimeout(r, 250));
@@ -164,7 +170,7 @@ export async function soakRun(opts: { seconds: number; warmupSeconds: number; wo
 				try {
 					ok = await steps[kind](i);
 				} catch (err) {
-					if (errorSamples.length < 5) errorSamples.push(`${kind}: ${(err as Error).message}`);
+					if (errorSamples.length < 5) errorSamples.push(`${kind}: ${describeError(err)}`);
 				}
 				counts[kind][ok ? 'ok' : 'errors']++;
 				if (!ok && errorSamples.length < 5) errorSamples.push(`${kind} failed`);
