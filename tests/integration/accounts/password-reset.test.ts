@@ -42,7 +42,8 @@ describe('asking for a reset link', () => {
 		const mail = await smtp.waitFor(user.email);
 		expect(mail.subject).toBe('Set a new Fringefield password');
 		expect(mail.from).toContain('noreply@fringefield.test');
-		expect(mail.links[0].startsWith(`${process.env.ORIGIN || 'http://127.0.0.1:3000'}/reset/`)).toBe(true);
+		// ORIGIN, else the local server on PORT (3000 by default): src/lib/server/mail/app-origin.ts
+		expect(mail.links[0].startsWith(`${process.env.ORIGIN || `http://127.0.0.1:${process.env.PORT || 3000}`}/reset/`)).toBe(true);
 		expect(token.length).toBeGreaterThanOrEqual(43); // 32 random bytes in base64url
 		const rows = await getDb().selectFrom('password_reset').selectAll().where('user_id', '=', user.id).execute();
 		expect(rows).toHaveLength(1);
