@@ -1,9 +1,9 @@
 // The one-pipeline redesign changed no /api/v1 call and no response shape: the OpenAPI document's paths equal the
-// ones recorded before it, and every data shape recorded then still has the same fields, the same required ones
+// ones recorded before it (re-recorded since only for intended changes, which the fixture's recordedFrom names), and every data shape recorded then still has the same fields, the same required ones
 // and the same types (the generated schemas may say more — enums, bounds, descriptions — but never less or other).
 import { describe, expect, it } from 'vitest';
 import { openApiDocument } from '../../../src/lib/server/api/openapi-document';
-import before from '../../fixtures/api/openapi-before-redesign.json';
+import before from '../../fixtures/api/openapi-recorded.json';
 
 type Schema = { type?: string | string[]; properties?: Record<string, Schema>; required?: string[]; items?: Schema; $ref?: string; additionalProperties?: unknown };
 type Outline = { properties?: Record<string, Outline | null>; required?: string[]; items?: Outline | null; $ref?: string } | null;

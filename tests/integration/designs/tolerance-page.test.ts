@@ -25,11 +25,11 @@ describe('the tolerance page', () => {
 	it('starts from the etch tolerance of the profile recorded with the revision', async () => {
 		const r = await load(coarse);
 		expect(r.outcome).toBe('ok');
-		expect((r.data as { fabProfile: unknown }).fabProfile).toEqual({ name: `Coarse etch ${ws.suffix}`, etchToleranceMm: 0.1 });
+		expect((r.data as { fabProfile: unknown }).fabProfile).toMatchObject({ name: `Coarse etch ${ws.suffix}`, etchToleranceMm: 0.1, switched: false });
 	});
 
 	it('starts from the built-in profile for a revision saved with it', async () => {
 		const r = await load('A');
-		expect((r.data as { fabProfile: unknown }).fabProfile).toEqual({ name: STANDARD_QUICK_TURN_PROFILE.name, etchToleranceMm: STANDARD_QUICK_TURN_PROFILE.etchToleranceMm });
+		expect((r.data as { fabProfile: unknown }).fabProfile).toMatchObject({ name: STANDARD_QUICK_TURN_PROFILE.name, etchToleranceMm: STANDARD_QUICK_TURN_PROFILE.etchToleranceMm, switched: false });
 	});
 });
