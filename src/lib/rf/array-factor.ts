@@ -1,4 +1,5 @@
 // Array factor of a uniform rectangular array of isotropic elements: directivity, grating-lobe limit, beamwidths, pattern cuts.
+import { halfPowerWidthDeg } from './half-power-width';
 import { dbFromPowerRatio, radFromDeg } from '../units';
 
 export interface ArrayGeometry {
@@ -70,28 +71,8 @@ export function arrayFactorCutDb(g: ArrayGeometry, cut: 'xz' | 'yz', angleDeg: n
 
 /** Full width between the −3 dB points around the beam on a cut (bisection); null when a side has none in view. */
 export function halfPowerBeamwidthDeg(g: ArrayGeometry, cut: 'xz' | 'yz'): number | null {
-	const peak = cut === 'xz' ? g.scanAngleDeg : 0;
-	const level = dbFromPowerRatio(0.5);
-	const edge = (dir: 1 | -1): number | null => {
-		// walk out in 0.05° steps to the first crossing, then bisect
-		let inside = peak;
-		for (let a = peak + dir * 0.05; Math.abs(a) <= 90; a += dir * 0.05) {
-			if (arrayFactorCutDb(g, cut, a) < level) {
-				let lo = inside, hi = a;
-				for (let i = 0; i < 40; i++) {
-					const mid = (lo + hi) / 2;
-					if (arrayFactorCutDb(g, cut, mid) < level) hi = mid;
-					else lo = mid;
-				}
-				return (lo + hi) / 2;
-			}
-			inside = a;
-		}
-		return null;
-	};
-	const up = edge(1);
-	const down = edge(-1);
-	return up === null || down === null ? null : up - down;
+	// walk out in 0.05° steps from the beam to the first crossing, then bisect
+	return halfPowerWidthDeg((a) => arrayFactorCutDb(g, cut, a), cut === 'xz' ? g.scanAngleDeg : 0, 0.05);
 }
 
 /** Plot-ready cuts: angles −90°…90° in 1° steps and the normalised power pattern in dB on each cut. */

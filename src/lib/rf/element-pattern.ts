@@ -1,4 +1,5 @@
 // Far-field pattern of one patch: the E- and H-plane cuts from the two-slot model (rectangular family) and the TM11 cavity model (disc).
+import { halfPowerWidthDeg } from './half-power-width';
 import { dbFromPowerRatio, freeSpaceWavelengthMm, radFromDeg } from '../units';
 import { besselJ } from './bessel';
 import type { SizedDesign } from './sized-design';
@@ -82,27 +83,7 @@ export function elementCutDb(g: ElementPatternGeometry, plane: PatternPlane, ang
 
 /** Full width between the −3 dB points either side of broadside (walk out, then bisect); null when a side stays above −3 dB to ±90°. */
 export function elementHalfPowerBeamwidthDeg(g: ElementPatternGeometry, plane: PatternPlane): number | null {
-	const level = dbFromPowerRatio(0.5);
-	const edge = (dir: 1 | -1): number | null => {
-		let inside = 0;
-		for (let a = dir * 0.25; Math.abs(a) <= 90; a += dir * 0.25) {
-			if (elementCutDb(g, plane, a) < level) {
-				let lo = inside;
-				let hi = a;
-				for (let i = 0; i < 40; i++) {
-					const mid = (lo + hi) / 2;
-					if (elementCutDb(g, plane, mid) < level) hi = mid;
-					else lo = mid;
-				}
-				return (lo + hi) / 2;
-			}
-			inside = a;
-		}
-		return null;
-	};
-	const up = edge(1);
-	const down = edge(-1);
-	return up === null || down === null ? null : up - down;
+	return halfPowerWidthDeg((a) => elementCutDb(g, plane, a), 0, 0.25);
 }
 
 /** The plot-ready cuts of one patch: angles −90°…90° in 1° steps, the E- and H-plane power in dB (0 at broadside) and the beamwidths. */
