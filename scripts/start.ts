@@ -13,6 +13,7 @@ import { canBind } from './lib/ports.ts';
 import { APP_DATABASE, provideDatabase } from './lib/postgres.ts';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemo } from './lib/seed.ts';
 import { forgetPid, recordPid } from './lib/services.ts';
+import { serverEnv } from './lib/server-env.ts';
 
 interface Plan {
 	env: NodeJS.ProcessEnv;
@@ -70,7 +71,7 @@ runMain(async () => {
 	const server = spawn(process.execPath, ['build'], {
 		cwd: rootDir,
 		stdio: 'inherit',
-		env: { ...process.env, ...plan.env, PORT: String(config.appPort), BODY_SIZE_LIMIT: process.env.BODY_SIZE_LIMIT || '6M' }
+		env: { ...process.env, ...plan.env, PORT: String(config.appPort), ...serverEnv() }
 	});
 	recordPid(config, 'app', server.pid!);
 	// One job worker beside the app (field checks and Homing); more on other machines scale out (README "Scaling out").

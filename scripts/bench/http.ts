@@ -8,6 +8,7 @@ import { migrateToLatest } from '../lib/migrate.ts';
 import { isPortOpen, waitFor } from '../lib/ports.ts';
 import { connectionUrl, provideDatabase } from '../lib/postgres.ts';
 import type { BenchRow } from './core.ts';
+import { serverEnv } from '../lib/server-env.ts';
 
 const BENCH_DATABASE = 'fringefield_bench';
 
@@ -69,7 +70,7 @@ export async function httpRows(opts: { seconds: number }): Promise<BenchRow[]> {
 	const server: ChildProcess = spawn(process.execPath, ['build'], {
 		cwd: rootDir,
 		stdio: ['ignore', 'ignore', 'inherit'],
-		env: { ...process.env, DATABASE_URL: databaseUrl, HOST: '127.0.0.1', PORT: String(port), ORIGIN: origin, BODY_SIZE_LIMIT: '6M', DATABASE_POOL_SIZE: '20', FRINGEFIELD_LOCAL_TRIAL: '1' }
+		env: { ...process.env, DATABASE_URL: databaseUrl, HOST: '127.0.0.1', PORT: String(port), ORIGIN: origin, ...serverEnv(), DATABASE_POOL_SIZE: '20', FRINGEFIELD_LOCAL_TRIAL: '1' }
 	});
 	try {
 		if (!(await waitFor(() => isPortOpen(port), 30_000))) throw new Error('the server did not start');

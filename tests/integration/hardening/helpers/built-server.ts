@@ -6,6 +6,7 @@ import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { join, resolve } from 'node:path';
 import { randomBytes } from 'node:crypto';
+import { serverEnv } from '../../../../scripts/lib/server-env.ts';
 
 export const rootDir = resolve(import.meta.dirname, '..', '..', '..', '..');
 const BUILD_LOCK = '/tmp/ff-build.lock';
@@ -73,7 +74,7 @@ export async function startBuiltServer(opts: StartOptions): Promise<BuiltServer>
 			HOST: '127.0.0.1',
 			PORT: String(port),
 			ORIGIN: opts.origin ?? origin,
-			BODY_SIZE_LIMIT: '6M',
+			...serverEnv(),
 			SMTP_HOST: process.env.SMTP_HOST ?? '127.0.0.1',
 			SMTP_PORT: process.env.SMTP_PORT ?? '2526',
 			// production mode on loopback: plain http and the test mail catcher (see src/lib/server/app-mode.ts)
