@@ -93,7 +93,7 @@ export async function action(
 	}
 	const type = typeof b.type === 'string' ? b.type : a.status >= 400 ? 'error' : 'unknown';
 	const actionStatus = typeof b.status === 'number' ? b.status : type === 'success' ? 200 : a.status;
-	const message = String(data?.message ?? data?.upload?.message ?? data?.retune?.message ?? data?.remove?.message ?? b.error?.message ?? b.message ?? (a.status >= 400 ? a.text.slice(0, 200) : ''));
+	const message = String(data?.message ?? data?.upload?.message ?? data?.retune?.message ?? data?.remove?.message ?? data?.fieldCheck?.message ?? b.error?.message ?? b.message ?? (a.status >= 400 ? a.text.slice(0, 200) : ''));
 	return { ...a, type, actionStatus, data, message };
 }
 

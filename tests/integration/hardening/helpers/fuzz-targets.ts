@@ -50,6 +50,7 @@ function formBodies(names: readonly string[], fixed: Record<string, string> = {}
 const designFormNames = ['name', 'frequencyGHz', 'shape', 'handedness', 'substrate.relativePermittivity', 'substrate.lossTangent', 'substrate.heightMm', 'feed', 'targetImpedanceOhm', 'feedLineImpedanceOhm', 'inset.notchGapMm', 'probe.drillDiameterMm', 'patchWidthMm', 'groundMarginMm', 'solderMask', 'note', 'from'];
 const sweepFormNames = ['name', 'combine', ...[0, 1, 2, 3].flatMap((i) => ['field', 'mode', 'from', 'to', 'step', 'values'].map((k) => `axes.${i}.${k}`))];
 const laminateFormNames = ['name', 'relativePermittivity', 'lossTangent', 'heightMm', 'copperThicknessUm', 'relativePermittivityTolerance', 'heightToleranceMm'];
+const fabProfileFormNames = ['name', 'minTraceWidthMm', 'minSpacingMm', 'minDrillMm', 'minAnnularRingMm', 'copperToEdgeMm', 'minSlotWidthMm', 'etchToleranceMm', 'platedDrillToleranceMm', 'nonPlatedDrillToleranceMm', 'maxCopperLayers', 'boardThicknessTolerancePercent', 'mixedCores', 'finish'];
 const queryKeys = ['page', 'pageSize', 'sort', 'order', 'waiver', 'kind', 'via', 'from', 'to', 'design', 'revision', 'points', 'format'];
 
 export function fuzzTargets(ws: HardeningWorkspace): FuzzTarget[] {
@@ -81,6 +82,11 @@ export function fuzzTargets(ws: HardeningWorkspace): FuzzTarget[] {
 		{ name: 'GET /api/v1/designs/[designId]/revisions/[label]/sweep', kind: 'api', requests: get(fc.tuple(segmentOr(a.label), hostileQuery(queryKeys)).map(([l, q]) => `/api/v1/designs/${a.designId}/revisions/${l}/sweep${q}`)) },
 		{ name: 'GET /api/v1/designs/[designId]/revisions/[label]/sweep-plans', kind: 'api', requests: get(fc.tuple(segmentOr(a.label), hostileQuery(queryKeys)).map(([l, q]) => `${`/api/v1/designs/${a.designId}/revisions/${l}`}/sweep-plans${q}`)) },
 		{ name: 'GET /api/v1/designs/[designId]/revisions/[label]/sweep-plans/[planId]/sweep', kind: 'api', requests: get(fc.tuple(segmentOr(a.planId), hostileQuery(queryKeys)).map(([p, q]) => `${rev}/sweep-plans/${p}/sweep${q}`)) },
+		{ name: 'GET /api/v1/designs/[designId]/revisions/[label]/simulations', kind: 'api', requests: get(fc.tuple(segmentOr(a.label), hostileQuery(queryKeys)).map(([l, q]) => `/api/v1/designs/${a.designId}/revisions/${l}/simulations${q}`)) },
+		{ name: 'POST /api/v1/designs/[designId]/revisions/[label]/simulations', kind: 'api', requests: post(`${rev}/simulations`, jsonBodies({ mode: 'quick', homing: false }), editorToken) },
+		{ name: 'GET /api/v1/simulations/[id]', kind: 'api', requests: get(fc.tuple(fc.oneof(fc.uuid(), hostileSegment), hostileQuery(queryKeys)).map(([id, q]) => `/api/v1/simulations/${id}${q}`)) },
+		{ name: 'POST /api/v1/simulations/[id]/cancel', kind: 'api', requests: fc.tuple(fc.oneof(fc.uuid(), hostileSegment), jsonBodies({ reason: 'fuzz' })).map(([id, b]): FuzzRequest => ({ method: 'POST', path: `/api/v1/simulations/${id}/cancel`, caller: editorToken, ...b })) },
+		{ name: 'GET /api/v1/openapi.json', kind: 'api', requests: get(hostileQuery(queryKeys).map((q) => `/api/v1/openapi.json${q}`), anonymous) },
 		{ name: 'GET /api/v1/[...rest] (unknown routes)', kind: 'api', requests: get(fc.array(hostileSegment, { minLength: 1, maxLength: 4 }).map((segs) => `/api/v1/${segs.join('/')}`)) }
 	];
 
@@ -120,6 +126,11 @@ export function fuzzTargets(ws: HardeningWorkspace): FuzzTarget[] {
 		},
 		{ name: 'POST /designs/[designId]/r/[label]/measurements?/retune', kind: 'action', requests: post(`${page}/measurements?/retune`, formBodies(['measurementId', 'holdWidth']), editor) },
 		{ name: 'POST /designs/[designId]/r/[label]/measurements?/delete', kind: 'action', requests: post(`${page}/measurements?/delete`, formBodies(['measurementId', 'confirm']), editor) },
+		{ name: 'POST /designs/[designId]/r/[label]?/startFieldCheck', kind: 'action', requests: post(`${page}?/startFieldCheck`, formBodies(['mode', 'kind']), editor) },
+		{ name: 'POST /designs/[designId]/r/[label]?/cancelFieldCheck', kind: 'action', requests: post(`${page}?/cancelFieldCheck`, formBodies(['checkId']), editor) },
+		{ name: 'POST /fab-profiles?/add', kind: 'action', requests: post('/fab-profiles?/add', formBodies(fabProfileFormNames).map((b) => (b.form ? { form: { teamId: a.teamId, ...b.form } } : b)), editor) },
+		{ name: 'POST /confirm?/resend', kind: 'action', requests: post('/confirm?/resend', formBodies([]), editor) },
+		{ name: 'POST /confirm/[token]', kind: 'action', requests: fc.tuple(hostileSegment, formBodies([])).map(([t, b]): FuzzRequest => ({ method: 'POST', path: `/confirm/${t}`, caller: anonymous, ...b })) },
 		{ name: 'POST /laminates?/add', kind: 'action', requests: post('/laminates?/add', formBodies(laminateFormNames).map((b) => (b.form ? { form: { teamId: a.teamId, ...b.form } } : b)), editor) },
 		{ name: 'POST /settings/tokens?/create', kind: 'action', requests: post('/settings/tokens?/create', formBodies(['name']), editor) },
 		{ name: 'POST /settings/tokens?/revoke', kind: 'action', requests: post('/settings/tokens?/revoke', formBodies(['tokenId']), editor) }
