@@ -84,4 +84,9 @@ test('a violating design is marked, its download refused with the list, and a wa
 	await row.getByRole('button', { name: /bundle/ }).click();
 	await expect(page.locator('[data-waiver-reason]')).toContainText(reason);
 	await page.screenshot({ path: '/tmp/drc-export-log-waiver.png', fullPage: true });
+	// Repeating a waived export says it will ask for a reason again, and leads to the refusal page that asks for it.
+	const again = row.locator('[data-download-again]');
+	await expect(again).toHaveText('Export again (waiver)');
+	await again.click();
+	await expect(page.getByLabel('Why these are acceptable')).toBeVisible();
 });
