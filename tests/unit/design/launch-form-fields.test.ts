@@ -44,3 +44,14 @@ describe('launch fields in the editor', () => {
 		expect(() => parseDesignInput(documentFromFormValues({ ...values, 'launch.kind': 'edge', 'launch.lengthMm': 'abc' }))).toThrow(/launch\.lengthMm|lengthMm/);
 	});
 });
+
+describe('a launch the design cannot hold, in the live sizing', () => {
+	it('is an issue beside launch.gapMm when no gap reaches the line impedance', async () => {
+		const { sizeDocument } = await import('../../../src/lib/design');
+		const outcome = sizeDocument(designDocument('rectangular', 'edge', { feedLineImpedanceOhm: 200, targetImpedanceOhm: 200, launch: { kind: 'edge' } }));
+		expect(outcome.ok).toBe(false);
+		if (outcome.ok) return;
+		expect(outcome.issues[0].path).toBe('launch.gapMm');
+		expect(outcome.issues[0].message).toMatch(/state launch\.gapMm/);
+	});
+});
