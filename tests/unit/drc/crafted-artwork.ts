@@ -108,7 +108,7 @@ export function edgeLaunchedArtwork(opts: { gapMm?: number; vias?: { center: Poi
 	const g = opts.gapMm ?? 0.5;
 	const left: [number, number] = [19 - g - 2, 19 - g];
 	const right: [number, number] = [21 + g, 23 + g];
-	const vias = opts.vias ?? [{ center: [(left[0] + left[1]) / 2, 1.5] }, { center: [(right[0] + right[1]) / 2, 1.5] }];
+	const vias: { center: Point; diameterMm?: number }[] = opts.vias ?? [{ center: [(left[0] + left[1]) / 2, 1.5] }, { center: [(right[0] + right[1]) / 2, 1.5] }];
 	return craftArtwork({
 		top: [
 			...edgeFedArtwork().layers[0].shapes,
