@@ -115,3 +115,28 @@ describe('a back-side launch', () => {
 		}
 	});
 });
+
+describe('any launch the schema accepts', () => {
+	it('builds an artwork the Artwork schema accepts, or refuses with a GeometryError (property)', async () => {
+		const fc = (await import('fast-check')).default;
+		const { artworkSchema } = await import('../../../src/lib/schemas/artwork');
+		fc.assert(
+			fc.property(
+				fc.constantFrom('inset', 'edge', 'quarter-wave', 'probe'),
+				fc.record({ lengthMm: fc.double({ min: 0.2, max: 50, noNaN: true }), groundWidthMm: fc.double({ min: 0.2, max: 50, noNaN: true }), viaPitchMm: fc.double({ min: 0.1, max: 20, noNaN: true }), viaRows: fc.integer({ min: 1, max: 4 }) }),
+				fc.record({ mount: fc.constantFrom('pad', 'flange'), padSideMm: fc.double({ min: 0.5, max: 50, noNaN: true }), flangeSpacingMm: fc.double({ min: 0.5, max: 50, noNaN: true }) }),
+				(feed, edge, back) => {
+					const launch = feed === 'probe' ? { kind: 'back' as const, ...back } : { kind: 'edge' as const, ...edge };
+					try {
+						const a = buildArtwork(size(designDocument('rectangular', feed, { launch })));
+						expect(artworkSchema.safeParse(a).success).toBe(true);
+						expect(a.metadata.launch?.kind).toBe(launch.kind);
+					} catch (e) {
+						expect(e).toBeInstanceOf(GeometryError);
+					}
+				}
+			),
+			{ numRuns: 40 }
+		);
+	});
+});
