@@ -145,6 +145,7 @@ test('the editor sets an edge launch: the live preview draws its pads and vias, 
 	await expect(preview.locator('[data-role="launch-signal"]')).toHaveCount(1);
 	await expect(preview.locator('[data-layer="drills"]')).toHaveCount(12);
 	await preview.screenshot({ path: '/tmp/ff-launch-preview.png' });
+	await page.locator('fieldset[data-group="Feed"]').screenshot({ path: '/tmp/ff-launch-fields.png' });
 
 	await page.getByLabel('What changed (revision note)').fill('Edge launch for the connector');
 	await page.getByRole('button', { name: 'Save as new revision' }).click();
