@@ -1,7 +1,8 @@
 // Journey of the designer on a design's pages: "Edit from C" edits C while a fork of A is the newest revision (with and
 // without scripts, through a refused save); the fab profile switch checks the same revision against another of the
 // team's profiles without saving, and downloads keep the recorded one; the fab view draws all three coppers of an
-// aperture-coupled board by name.
+// aperture-coupled board by name; the editor sets an edge connector launch, the preview draws its pads and vias and
+// the saved revision's fab view reads them back from the files.
 import { expect, test, type Page } from '@playwright/test';
 import { closeDb, getDb } from '../../src/lib/server/db';
 import { createDesign, saveRevision } from '../../src/lib/server/designs';
@@ -126,4 +127,33 @@ test('the fab view of an aperture-coupled board draws its three coppers, each by
 	await expect(fab.locator('[data-fab-copper]')).toHaveText([/L1 Top copper \(patch\) [\d.]+ mm²/, /L2 Inner copper \(layer 2\) \(ground\) [\d.]+ mm²/, /L3 Bottom copper \(feed\) [\d.]+ mm²/]);
 	await expect(fab).not.toContainText('L2 Bottom copper');
 	await fab.screenshot({ path: '/work/shots/exportlog-fab-view-three-coppers.png' });
+});
+
+test('the editor sets an edge launch: the live preview draws its pads and vias, the saved revision’s fab view reads them back', async ({ page }) => {
+	const { design } = await createDesign(getDb(), { teamId: seeded.teamId, userId: seeded.editor.id, raw: { ...demo, name: `Launch patch ${seeded.suffix}` } });
+	await page.setViewportSize({ width: 1400, height: 1000 });
+	await signInEditor(page, `/designs/${design.id}/edit?from=A`);
+	const preview = page.getByTestId('patch-preview');
+	await expect(preview.locator('[data-role="launch-ground"]')).toHaveCount(0);
+	// the launch's dimensions stay hidden until its kind is chosen
+	await expect(page.getByLabel('Launch gap to the line')).toBeHidden();
+	await page.getByLabel('Connector launch').selectOption('edge');
+	await expect(page.getByLabel('Launch gap to the line')).toBeVisible();
+	await page.getByLabel('Launch via rows per pad').fill('2');
+	// two ground pads beside the signal pad, 3 vias along × 2 rows × 2 pads (defaults: 3 mm long at a 1 mm pitch)
+	await expect(preview.locator('[data-role="launch-ground"]')).toHaveCount(2);
+	await expect(preview.locator('[data-role="launch-signal"]')).toHaveCount(1);
+	await expect(preview.locator('[data-layer="drills"]')).toHaveCount(12);
+	await preview.screenshot({ path: '/tmp/ff-launch-preview.png' });
+	await page.locator('fieldset[data-group="Feed"]').screenshot({ path: '/tmp/ff-launch-fields.png' });
+
+	await page.getByLabel('What changed (revision note)').fill('Edge launch for the connector');
+	await page.getByRole('button', { name: 'Save as new revision' }).click();
+	await page.waitForURL(new RegExp(`/designs/${design.id}/r/B$`));
+	const fab = page.getByTestId('fab-view');
+	await expect(fab).toHaveAttribute('data-read-back', 'ok');
+	await expect(fab.locator('circle[data-fab-layer="holes"]')).toHaveCount(12);
+	await expect(fab).toContainText('12 holes');
+	await expect(page.getByTestId('violation-list')).toContainText('Design rules met');
+	await fab.screenshot({ path: '/tmp/ff-launch-fab-view.png' });
 });

@@ -13,8 +13,9 @@ export const help = `Usage: npm run cli -- check design.json [--profile profile.
 Sizes the design, builds its artwork and checks it against a fab capability profile. Prints ONE
 JSON object: \`design\` (its name), \`profile\` (the profile's name and every value it was checked
 against), \`clean\` and \`violations\`, each with ruleId (trace-width, copper-spacing, drill-size,
-annular-ring, edge-clearance, slot-width, stack-build), layerId, shapeIds, location {xMm, yMm}, measuredMm,
-requiredMm and a message.
+annular-ring, edge-clearance, slot-width, stack-build; a connector launch's launch-gap, launch-via-edge,
+launch-via-spacing, launch-annular-ring, launch-outside-board), layerId, shapeIds, location {xMm, yMm},
+measuredMm, requiredMm and a message.
 
   --profile FILE  a fab profile JSON (name, minTraceWidthMm, minSpacingMm, minDrillMm,
                   minAnnularRingMm, copperToEdgeMm, minSlotWidthMm, etchToleranceMm,

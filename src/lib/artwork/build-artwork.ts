@@ -7,6 +7,7 @@ import { buildLayeredStack, buildStack } from './build-stack';
 import { buildExtendedArtwork } from './build-extended-artwork';
 import { profileLayer } from './profile-layer';
 import { buildTopCopper } from './build-top-copper';
+import { withLaunch } from './build-launch';
 import { probeModelOf } from './probe-model';
 import type { Artwork, ArtworkDrill, ArtworkLayer, ArtworkShape } from './types';
 
@@ -18,7 +19,7 @@ import type { Artwork, ArtworkDrill, ArtworkLayer, ArtworkShape } from './types'
  */
 export function buildArtwork(sized: SizedDesign): Artwork {
 	artworkBuilds += 1;
-	return drawArtwork(sized);
+	return withLaunch(drawArtwork(sized), sized);
 }
 
 /** Artworks built so far by this module instance (one per thread): lets a worker task report what it drew. */

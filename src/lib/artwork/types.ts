@@ -4,6 +4,7 @@ import type { z } from 'zod';
 import type {
 	artworkDimensionSchema,
 	artworkDrillSchema,
+	artworkLaunchSchema,
 	artworkLayerSchema,
 	artworkProbeSchema,
 	artworkSchema,
@@ -41,3 +42,5 @@ export type Artwork = z.output<typeof artworkSchema>;
  * about drillDiameterMm + 2 × plating and plates it back to the finished size).
  */
 export type ArtworkProbe = z.output<typeof artworkProbeSchema>;
+/** The connector launch as built: an edge launch's solved gap and via count, or a back-side footprint's mount. */
+export type ArtworkLaunch = z.output<typeof artworkLaunchSchema>;

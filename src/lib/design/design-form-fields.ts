@@ -1,6 +1,6 @@
 // The editor's fields: how each maps to a path of the design-input document, with its label and unit.
 // Pure: the browser uses it for live validation and preview, the form action for parsing the post.
-import { allFeedKinds, handednesses, patchShapes, probeModels, requiredCopperCount, type DesignInput, type DesignInputDocument, type InputIssue } from '../schemas';
+import { allFeedKinds, backMounts, edgeLaunchFeeds, handednesses, launchKinds, patchShapes, probeModels, requiredCopperCount, type DesignInput, type DesignInputDocument, type InputIssue } from '../schemas';
 import { ghzFromHz, hzFromGhz } from '../units';
 
 export type FieldKind = 'text' | 'number' | 'choice' | 'flag';
@@ -32,7 +32,7 @@ export interface FormField {
 }
 
 export type FieldGroup = 'Design' | 'Substrate' | 'Feed' | 'Parasitic' | 'Array' | 'Board';
-export type FormSection = 'slot' | 'proximity' | 'parasitic' | 'array';
+export type FormSection = 'slot' | 'proximity' | 'parasitic' | 'array' | 'launch-edge' | 'launch-back';
 
 const ghz = { toForm: ghzFromHz, toDocument: hzFromGhz, factor: 1e-9 };
 
@@ -63,6 +63,18 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'slot.widthMm', path: 'slot.widthMm', label: 'Coupling slot width', unit: 'mm', kind: 'number', group: 'Feed', section: 'slot', optional: true, hint: 'blank = first-pass rule', step: 'any' },
 	{ name: 'slot.stubLengthMm', path: 'slot.stubLengthMm', label: 'Open stub past the slot', unit: 'mm', kind: 'number', group: 'Feed', section: 'slot', optional: true, hint: 'blank ≈ λg/4', step: 'any' },
 	{ name: 'proximity.overlapMm', path: 'proximity.overlapMm', label: 'Line run under the patch', unit: 'mm', kind: 'number', group: 'Feed', section: 'proximity', optional: true, hint: 'blank = to the centre', step: 'any' },
+	{ name: 'launch.kind', path: 'launch.kind', label: 'Connector launch', unit: '', kind: 'choice', group: 'Feed', optional: true, hint: 'edge: line feeds; back: probe; blank = none', choices: ['', ...launchKinds] },
+	{ name: 'launch.lengthMm', path: 'launch.lengthMm', label: 'Launch length from the edge', unit: 'mm', kind: 'number', group: 'Feed', section: 'launch-edge', optional: true, hint: 'blank = 3 mm', step: 'any' },
+	{ name: 'launch.groundWidthMm', path: 'launch.groundWidthMm', label: 'Launch ground pad width', unit: 'mm', kind: 'number', group: 'Feed', section: 'launch-edge', optional: true, hint: 'blank = 2 mm', step: 'any' },
+	{ name: 'launch.gapMm', path: 'launch.gapMm', label: 'Launch gap to the line', unit: 'mm', kind: 'number', group: 'Feed', section: 'launch-edge', optional: true, hint: 'blank = solved for the line Z₀', step: 'any' },
+	{ name: 'launch.viaDrillMm', path: 'launch.viaDrillMm', label: 'Launch via drill ⌀', unit: 'mm', kind: 'number', group: 'Feed', section: 'launch-edge', optional: true, hint: 'blank = 0.3 mm', step: 'any' },
+	{ name: 'launch.viaPitchMm', path: 'launch.viaPitchMm', label: 'Launch via pitch', unit: 'mm', kind: 'number', group: 'Feed', section: 'launch-edge', optional: true, hint: 'blank = 1 mm', step: 'any' },
+	{ name: 'launch.viaRows', path: 'launch.viaRows', label: 'Launch via rows per pad', unit: '', kind: 'number', group: 'Feed', section: 'launch-edge', optional: true, hint: '1 … 4; blank = 1', step: '1' },
+	{ name: 'launch.viaInsetMm', path: 'launch.viaInsetMm', label: 'Gap edge to first via row', unit: 'mm', kind: 'number', group: 'Feed', section: 'launch-edge', optional: true, hint: 'blank = 0.5 mm', step: 'any' },
+	{ name: 'launch.mount', path: 'launch.mount', label: 'Back launch mount', unit: '', kind: 'choice', group: 'Feed', section: 'launch-back', optional: true, hint: 'blank = pad', choices: ['', ...backMounts] },
+	{ name: 'launch.padSideMm', path: 'launch.padSideMm', label: 'Back ground pad side', unit: 'mm', kind: 'number', group: 'Feed', section: 'launch-back', optional: true, hint: 'pad mount; blank = 6 mm', step: 'any' },
+	{ name: 'launch.flangeDrillMm', path: 'launch.flangeDrillMm', label: 'Flange hole ⌀', unit: 'mm', kind: 'number', group: 'Feed', section: 'launch-back', optional: true, hint: 'flange mount; blank = 2.7 mm', step: 'any' },
+	{ name: 'launch.flangeSpacingMm', path: 'launch.flangeSpacingMm', label: 'Flange hole spacing', unit: 'mm', kind: 'number', group: 'Feed', section: 'launch-back', optional: true, hint: 'flange mount; blank = 8.6 mm', step: 'any' },
 	{ name: 'parasitic', path: 'parasitic', label: 'Stacked parasitic patch on the top copper', unit: '', kind: 'flag', group: 'Parasitic', presence: true },
 	{ name: 'parasitic.sizeRatio', path: 'parasitic.sizeRatio', label: 'Size over the driven patch', unit: '×', kind: 'number', group: 'Parasitic', section: 'parasitic', optional: true, hint: 'blank = 1.07', step: 'any' },
 	{ name: 'array', path: 'array', label: 'Repeat as an array with a corporate feed', unit: '', kind: 'flag', group: 'Array', presence: true },
@@ -77,10 +89,14 @@ export const designFormFields: readonly FormField[] = [
 ];
 
 /** Whether the switch of an optional part of the document is on: from form values, or from a stored input. */
-export type SectionSwitch = (section: 'parasitic' | 'array') => boolean;
+export type SectionSwitch = (section: 'parasitic' | 'array' | 'launch-edge' | 'launch-back') => boolean;
 
-export const switchesOfValues = (values: FormValues): SectionSwitch => (section) => values[section] === 'on';
-export const switchesOfInput = (input: Pick<DesignInput, 'parasitic' | 'array'>): SectionSwitch => (section) => input[section] !== undefined;
+const LAUNCH_SECTION_KIND = { 'launch-edge': 'edge', 'launch-back': 'back' } as const;
+
+export const switchesOfValues = (values: FormValues): SectionSwitch => (section) =>
+	section === 'launch-edge' || section === 'launch-back' ? values['launch.kind'] === LAUNCH_SECTION_KIND[section] : values[section] === 'on';
+export const switchesOfInput = (input: Pick<DesignInput, 'parasitic' | 'array' | 'launch'>): SectionSwitch => (section) =>
+	section === 'launch-edge' || section === 'launch-back' ? input.launch?.kind === LAUNCH_SECTION_KIND[section] : input[section] !== undefined;
 
 /**
  * Whether a field matters for this shape and feed (the editor hides the rest; tables leave them out).
@@ -90,6 +106,10 @@ export function fieldApplies(field: FormField, shape: string, feed: string, swit
 	if (field.section === 'slot') return feed === 'aperture-coupled';
 	if (field.section === 'proximity') return feed === 'proximity-coupled';
 	if (field.section === 'parasitic' || field.section === 'array') return switches?.(field.section) ?? false;
+	// the launch: edge for a line at the board edge, back under a probe; its dimensions once its kind is chosen
+	if (field.section === 'launch-edge') return (edgeLaunchFeeds as readonly string[]).includes(feed) && (switches?.(field.section) ?? false);
+	if (field.section === 'launch-back') return feed === 'probe' && (switches?.(field.section) ?? false);
+	if (field.name === 'launch.kind') return feed === 'probe' || (edgeLaunchFeeds as readonly string[]).includes(feed);
 	if (field.presence) return switches !== undefined;
 	if (field.name === 'handedness') return shape === 'truncated-corner' || shape === 'nearly-square';
 	if (field.name === 'inset.notchGapMm') return feed === 'inset';

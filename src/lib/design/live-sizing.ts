@@ -17,6 +17,7 @@ const GEOMETRY_PATHS: Record<string, string> = {
 /** The field a geometry error is about: by its code, or (an array that does not fit) by the spacing its message names. */
 function geometryPath(err: GeometryError): string {
 	if (err.code === 'elements-overlap' || err.code === 'feed-network-crowded' || err.code === 'network-arm-too-short') return err.message.startsWith('array.spacingYWavelengths') ? 'array.spacingYWavelengths' : 'array.spacingXWavelengths';
+	if (err.code === 'launch-does-not-fit') return err.message.startsWith('launch.gapMm') ? 'launch.gapMm' : 'launch.kind';
 	return GEOMETRY_PATHS[err.code] ?? '';
 }
 

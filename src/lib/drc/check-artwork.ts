@@ -4,6 +4,7 @@ import type { FabProfile } from '../schemas/fab-profile';
 import { checkCopperSpacing } from './check-copper-spacing';
 import { checkAnnularRing, checkDrillSize } from './check-drills';
 import { checkEdgeClearance } from './check-edge-clearance';
+import { checkLaunch } from './check-launch';
 import { checkSlotWidth } from './check-slot-width';
 import { checkStackBuild } from './check-stack-build';
 import { checkTraceWidth } from './check-trace-width';
@@ -18,6 +19,7 @@ export function checkArtwork(artwork: Artwork, profile: FabProfile): Violation[]
 		...checkDrillSize(artwork, profile),
 		...checkAnnularRing(artwork, profile),
 		...checkEdgeClearance(artwork, profile),
-		...checkSlotWidth(artwork, profile)
+		...checkSlotWidth(artwork, profile),
+		...checkLaunch(artwork, profile)
 	];
 }

@@ -22,6 +22,8 @@ export function checkCopperSpacing(artwork: Artwork, profile: FabProfile): Viola
 				const a = copper[i];
 				const b = copper[j];
 				if (a.feature === b.feature) continue;
+				// a launch ground pad's gap to the line is the launch-gap rule's (check-launch.ts)
+				if (a.shape.role === 'launch-ground' || b.shape.role === 'launch-ground') continue;
 				const gap = boundaryDistance(a.pieces, b.pieces);
 				if (!gap || !(gap.distanceMm < profile.minSpacingMm - LENGTH_EPSILON_MM)) continue;
 				out.push({

@@ -10,6 +10,7 @@ import { locationOf, roundMm, type Violation } from './violation';
 /**
  * Roles whose copper may run exactly flush to the board edge on purpose:
  * - the feed line, where it launches into an edge-mount connector at y = 0;
+ * - an edge launch's signal and top ground pads, which meet the connector at the same edge;
  * - the ground plane that is the whole board: the antenna's ground size is an RF parameter and the
  *   board is cut to it, so the plane is flush on every side by design.
  * A fab expects copper pulled back by copperToEdgeMm; copper flush to the edge is accepted as a
@@ -18,7 +19,7 @@ import { locationOf, roundMm, type Violation } from './violation';
  * violation, and every other role must always keep the full clearance. If the artwork pulls the
  * ground back per profile, it simply passes; to forbid flush copper, empty this list.
  */
-export const FLUSH_TO_EDGE_ROLES: readonly ShapeRole[] = ['feed-line', 'ground'];
+export const FLUSH_TO_EDGE_ROLES: readonly ShapeRole[] = ['feed-line', 'ground', 'launch-signal', 'launch-ground'];
 
 type Side = 'left' | 'bottom' | 'right' | 'top';
 

@@ -12,7 +12,9 @@ export type GeometryErrorCode =
 	/** A corporate-feed arm too short for its λg/4 transformer. */
 	| 'network-arm-too-short'
 	/** The corporate feed would pass too close to an element. */
-	| 'feed-network-crowded';
+	| 'feed-network-crowded'
+	/** A connector launch the design cannot hold: no feed line at the board edge, or a line impedance no gap reaches. */
+	| 'launch-does-not-fit';
 
 export class GeometryError extends Error {
 	readonly name = 'GeometryError';

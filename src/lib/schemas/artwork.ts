@@ -32,8 +32,14 @@ export const shapeRoles = [
 	'coupling-slot',
 	'tuning-stub',
 	'feed-network',
-	'network-transformer'
+	'network-transformer',
+	'launch-signal',
+	'launch-ground',
+	'launch-back-pad'
 ] as const;
+
+/** What a hole is for: the probe's pin, a via of an edge launch (top ground pads to the bottom ground), a back-side launch's flange hole. */
+export const drillRoles = ['probe', 'launch-via', 'launch-flange'] as const;
 
 export const shapeGeometrySchema = z.discriminatedUnion('kind', [
 	/** A filled area bounded by line and arc segments. */
@@ -72,7 +78,7 @@ export const artworkLayerSchema = z
 export const artworkDrillSchema = z
 	.strictObject({
 		id: z.string(),
-		role: z.literal('probe'),
+		role: z.enum(drillRoles),
 		plated: z.boolean(),
 		center: pointSchema,
 		diameterMm: z.number().positive().meta({ description: 'Finished hole diameter' }),
@@ -128,6 +134,35 @@ export const artworkProbeSchema = z
 	})
 	.readonly();
 
+/** The connector launch as built: what the fab notes and drawings state about it (absent: no launch). */
+export const artworkLaunchSchema = z.discriminatedUnion('kind', [
+	z
+		.strictObject({
+			kind: z.literal('edge'),
+			lengthMm: z.number().positive(),
+			signalWidthMm: z.number().positive(),
+			gapMm: z.number().positive(),
+			gapSolved: z.boolean().meta({ description: 'true when the gap was solved for the line impedance, false when the design states it' }),
+			groundWidthMm: z.number().positive(),
+			lineImpedanceOhm: z.number().positive(),
+			launchImpedanceOhm: z.number().positive().meta({ description: 'Grounded-coplanar Z0 of the launch section with this gap (closed form)' }),
+			viaDrillMm: z.number().positive(),
+			viaCount: z.number().int().min(0)
+		})
+		.readonly(),
+	z
+		.strictObject({
+			kind: z.literal('back'),
+			mount: z.enum(['pad', 'flange']),
+			center: pointSchema,
+			antiPadDiameterMm: z.number().positive(),
+			padSideMm: z.number().positive().nullable(),
+			flangeDrillMm: z.number().positive().nullable(),
+			flangeSpacingMm: z.number().positive().nullable()
+		})
+		.readonly()
+]);
+
 export const boardSchema = z.strictObject({ widthMm: z.number().min(0), lengthMm: z.number().min(0) }).readonly();
 
 export const artworkSchema = z
@@ -144,7 +179,8 @@ export const artworkSchema = z
 				feedKind: z.enum(allFeedKinds),
 				frequencyHz: z.number().positive(),
 				copperLayerCount: z.number().int().min(2),
-				probe: artworkProbeSchema.optional().meta({ description: 'The probe model the design states (absent: not stated)' })
+				probe: artworkProbeSchema.optional().meta({ description: 'The probe model the design states (absent: not stated)' }),
+				launch: artworkLaunchSchema.optional().meta({ description: 'The connector launch as built (absent: none)' })
 			})
 			.readonly()
 	})

@@ -1,6 +1,7 @@
 // The design-input document: what a user types, what the API and the CLI take, what a revision stores.
 import { z } from 'zod';
 import { plainText } from './plain-text';
+import { launchMisfit, launchSchema } from './launch';
 
 /** Speed of light in vacuum, m/s (exact, SI definition). */
 const SPEED_OF_LIGHT_M_PER_S = 299_792_458;
@@ -270,7 +271,9 @@ const designInputObject = z.strictObject({
 	/** Explicit dimensions that replace the sizing formulas' values (see dimensionOverridesSchema). */
 	overrides: dimensionOverridesSchema.optional(),
 	/** The band the antenna must serve (see bandToCoverSchema); absent: none stated. */
-	bandToCover: bandToCoverSchema.optional()
+	bandToCover: bandToCoverSchema.optional(),
+	/** The connector launch footprint (see launchSchema in ./launch); absent: none, the artwork as before. */
+	launch: launchSchema.optional()
 });
 
 export const designInputSchema = designInputObject.superRefine((d, ctx) => {
@@ -297,6 +300,8 @@ export const designInputSchema = designInputObject.superRefine((d, ctx) => {
 	}
 	layeredRules(d, ctx);
 	overrideRules(d, ctx);
+	const misfit = launchMisfit(d.launch, d.feed, copperLayerCountOf(d));
+	if (misfit) ctx.addIssue({ code: 'custom', path: ['launch', 'kind'], input: d.launch?.kind, message: misfit });
 	if (d.bandToCover && !(d.bandToCover.upperHz > d.bandToCover.lowerHz)) {
 		ctx.addIssue({ code: 'custom', path: ['bandToCover', 'upperHz'], input: d.bandToCover.upperHz, message: `must be above bandToCover.lowerHz (${d.bandToCover.lowerHz})` });
 	}

@@ -1,5 +1,6 @@
 // Public face of the schemas room.
 export * from './design-input';
+export * from './launch';
 export * from './input-error';
 export * from './fab-profile';
 export * from './laminate';

@@ -143,7 +143,9 @@ function twoCopperStack(artwork: Artwork): TwoCopperStack {
  * start (the board edge), from the ground up to the line across its width, or at the probe's ground
  * end, one cell high, below a perfectly conducting pin (solid pin: the finished hole; plated barrel:
  * its outer wall) that runs up to the patch. The ground clearance of a probe is not modelled: the
- * port stands in for the connector's aperture.
+ * port stands in for the connector's aperture. A connector launch's plated holes are perfectly
+ * conducting posts from ground to top copper and its top ground pads are top copper; a back-side
+ * ground pad lies on the ground and adds nothing; the connector body itself is not modelled.
  */
 export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number, options: FieldModelOptions): FieldModel {
 	const refinement = options.refinement ?? 1;
@@ -228,6 +230,21 @@ export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number,
 			throw unsupported(`the Field check does not model a ${feedKind} feed yet`);
 		default:
 			return feedKind satisfies never;
+	}
+
+	// the connector launch's plated holes (edge-launch vias, back-side flange holes): perfectly conducting posts from
+	// the ground up to the top copper, each on a mesh line in x and y; its top ground pads are already top copper
+	const launchHoles = artwork.drills.filter((d) => d.role === 'launch-via' || d.role === 'launch-flange');
+	if (launchHoles.length > 0) {
+		properties.push({
+			kind: 'pec',
+			name: 'launch-holes',
+			primitives: launchHoles.map((d): ModelPrimitive => ({ kind: 'cylinder', centerMm: d.center, fromZMm: groundZMm, toZMm: topZMm, radiusMm: d.diameterMm / 2, priority: PRIORITY_PIN }))
+		});
+		for (const d of launchHoles) {
+			if (!fixedX.some((v) => Math.abs(v - d.center[0]) < 1e-9)) fixedX.push(d.center[0]);
+			if (!fixedY.some((v) => Math.abs(v - d.center[1]) < 1e-9)) fixedY.push(d.center[1]);
+		}
 	}
 
 	// edges lying on or beside a fixed line are resolved by it (the port plane near the board edge)

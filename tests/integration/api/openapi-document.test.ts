@@ -38,8 +38,21 @@ describe('openApiDocument', () => {
 		expect(download.get.responses['422'].content['application/json'].schema.$ref).toBe('#/components/schemas/ExportRefusal');
 		expect(schemas.ExportRefusal.required).toEqual(expect.arrayContaining(['error', 'profile', 'violations']));
 		expect(schemas.ExportRefusal.properties.violations.items.$ref).toBe('#/components/schemas/Violation');
-		// the rule ids of src/lib/drc/violation.ts
-		expect(schemas.Violation.properties.ruleId.enum).toEqual(['trace-width', 'copper-spacing', 'drill-size', 'annular-ring', 'edge-clearance', 'slot-width', 'stack-build']);
+		// the rule ids of src/lib/drc/violation.ts (the connector launch's five added after the first seven)
+		expect(schemas.Violation.properties.ruleId.enum).toEqual([
+			'trace-width',
+			'copper-spacing',
+			'drill-size',
+			'annular-ring',
+			'edge-clearance',
+			'slot-width',
+			'stack-build',
+			'launch-gap',
+			'launch-via-edge',
+			'launch-via-spacing',
+			'launch-annular-ring',
+			'launch-outside-board'
+		]);
 		expect(schemas.FabProfile.required).toContain('minTraceWidthMm');
 		expect(download.post.requestBody.content['application/json'].schema.$ref).toBe('#/components/schemas/WaiverBody');
 		expect(schemas.WaiverBody.required).toEqual(['waiver']);

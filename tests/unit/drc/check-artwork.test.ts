@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import type { Artwork } from '../../../src/lib/artwork';
 import { checkArtwork, DRC_RULE_IDS, type DrcRuleId } from '../../../src/lib/drc';
 import { STANDARD_QUICK_TURN_PROFILE as P } from '../../../src/lib/schemas/fab-profile';
-import { BOARD_MM, craftArtwork, edgeFedArtwork, insetFedArtwork, probeFedArtwork, rect, roundRegion, disc } from './crafted-artwork';
+import { BOARD_MM, craftArtwork, edgeFedArtwork, edgeLaunchedArtwork, insetFedArtwork, probeFedArtwork, rect, roundRegion, disc } from './crafted-artwork';
 
 const UM = 1e-3;
 const rulesOf = (a: Artwork) => checkArtwork(a, P).map((v) => v.ruleId);
@@ -82,13 +82,22 @@ const cases: RuleCase[] = [
 		limitMm: P.copperToEdgeMm
 	},
 	// an inset notch gap narrower than the minimum slot
-	{ rule: 'slot-width', what: 'inset notch gap', build: (g) => insetFedArtwork(g), limitMm: P.minSlotWidthMm }
+	{ rule: 'slot-width', what: 'inset notch gap', build: (g) => insetFedArtwork(g), limitMm: P.minSlotWidthMm },
+	// an edge launch's ground pads too near the line (left pad 16.5..18.5 − g, line 19..21; common practice, no source: the profile's minimum space)
+	{ rule: 'launch-gap', what: 'launch ground pad gap to the line', build: (g) => edgeLaunchedArtwork({ gapMm: g }), limitMm: P.minSpacingMm },
+	// a 0.4 mm launch via whose wall comes within c of the bottom board edge
+	{ rule: 'launch-via-edge', what: 'launch via wall to the board edge', build: (c) => edgeLaunchedArtwork({ vias: [{ center: [17.5, 0.2 + c] }] }), limitMm: P.copperToEdgeMm },
+	// two 0.4 mm launch vias whose walls are s apart
+	{ rule: 'launch-via-spacing', what: 'web between two launch vias', build: (s) => edgeLaunchedArtwork({ vias: [{ center: [17.5, 1] }, { center: [17.5, 1.4 + s] }] }), limitMm: P.minSpacingMm },
+	// a 0.4 mm launch via leaving a ring of a to the left pad's outer edge (x = 16.5)
+	{ rule: 'launch-annular-ring', what: 'launch via ring to its pad edge', build: (a) => edgeLaunchedArtwork({ vias: [{ center: [16.5 + 0.2 + a, 1.5] }] }), limitMm: P.minAnnularRingMm }
 ];
 
 describe('checkArtwork, one rule at a time', () => {
 	it('covers every rule with at least one crafted case', () => {
-		// stack-build judges the stack against the profile's process, not a length: tests/unit/drc/check-stack-build.test.ts
-		expect([...new Set(cases.map((c) => c.rule))].sort()).toEqual(DRC_RULE_IDS.filter((r) => r !== 'stack-build').sort());
+		// stack-build judges the stack against the profile's process, not a length: tests/unit/drc/check-stack-build.test.ts;
+		// launch-outside-board's copper off the board is also edge-clearance's, so it is judged alone: tests/unit/drc/check-launch.test.ts
+		expect([...new Set(cases.map((c) => c.rule))].sort()).toEqual(DRC_RULE_IDS.filter((r) => r !== 'stack-build' && r !== 'launch-outside-board').sort());
 	});
 
 	it.each(cases)('$rule fires alone when the $what is 1 µm under the limit', ({ rule, build, limitMm }) => {

@@ -99,3 +99,23 @@ export function probeFedArtwork(opts: { drillMm: number; padMm: number; clearanc
 		drills: [{ id: 'probe-drill', role: 'probe', plated: true, center: at, diameterMm: opts.drillMm, fromCopper: 1, toCopper: 2 }]
 	});
 }
+
+/**
+ * The edge-fed patch with an edge launch: 3 mm signal pad on the 2 mm line, ground pads 2 mm wide at
+ * `gapMm` each side, and 0.4 mm vias (default one per pad at its centre, y = 1.5); `vias` replaces them.
+ */
+export function edgeLaunchedArtwork(opts: { gapMm?: number; vias?: { center: Point; diameterMm?: number }[] } = {}): Artwork {
+	const g = opts.gapMm ?? 0.5;
+	const left: [number, number] = [19 - g - 2, 19 - g];
+	const right: [number, number] = [21 + g, 23 + g];
+	const vias: { center: Point; diameterMm?: number }[] = opts.vias ?? [{ center: [(left[0] + left[1]) / 2, 1.5] }, { center: [(right[0] + right[1]) / 2, 1.5] }];
+	return craftArtwork({
+		top: [
+			...edgeFedArtwork().layers[0].shapes,
+			rect('launch-signal', 'launch-signal', 19, 0, 21, 3),
+			rect('launch-ground-left', 'launch-ground', left[0], 0, left[1], 3),
+			rect('launch-ground-right', 'launch-ground', right[0], 0, right[1], 3)
+		],
+		drills: vias.map((v, i): ArtworkDrill => ({ id: `launch-via-${i}`, role: 'launch-via', plated: true, center: v.center, diameterMm: v.diameterMm ?? 0.4, fromCopper: 1, toCopper: 2 }))
+	});
+}

@@ -28,7 +28,10 @@ export function buildExcellonCommands(artwork: Artwork, plated: boolean, meta: E
 	const diameters = [...new Set(drills.map((d) => d.diameterMm.toFixed(3)))].sort((a, b) => Number(a) - Number(b));
 	const toolOf = new Map(diameters.map((d, i) => [d, i + 1]));
 	for (const d of diameters) {
-		out.push({ type: 'attribute', name: 'TA.AperFunction', values: plated ? ['Plated', 'PTH', 'ComponentDrill'] : ['NonPlated', 'NPTH', 'ComponentDrill'] });
+		// a tool that drills only launch vias is a via drill (Gerber X2 spec §5.6.10, .AperFunction ViaDrill); every other hole is a component's
+		const vias = drills.filter((h) => h.diameterMm.toFixed(3) === d).every((h) => h.role === 'launch-via');
+		const use = vias ? 'ViaDrill' : 'ComponentDrill';
+		out.push({ type: 'attribute', name: 'TA.AperFunction', values: plated ? ['Plated', 'PTH', use] : ['NonPlated', 'NPTH', use] });
 		out.push({ type: 'define-tool', tool: toolOf.get(d)!, diameterMm: Number(d) });
 	}
 	out.push({ type: 'header-end' }, { type: 'absolute' }, { type: 'drill-mode' });

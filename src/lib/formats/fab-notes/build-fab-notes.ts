@@ -172,6 +172,8 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 			? `\n   Probe hole: plated barrel, at least ${probe.platingThicknessUm} µm copper on the hole wall, finished at ${n(probe.drillDiameterMm)} mm.`
 			: `\n   Probe hole: finished at ${n(probe.drillDiameterMm)} mm; a solid connector pin is soldered through it after fabrication.`;
 
+	const launchLine = launchNote(artwork, profile);
+
 	const toleranceTable = [
 		`Etched copper edges: ± ${profile.etchToleranceMm} mm`,
 		`Narrowest track and gap: ${profile.minTraceWidthMm} mm and ${profile.minSpacingMm} mm`,
@@ -238,8 +240,26 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 			? 'Solder mask: openings as drawn on the mask layers; the antenna copper stays bare.'
 			: 'No solder mask: leave the outer copper bare (mask over the patch would shift its resonance).',
 		toleranceTable,
-		drillTable: drillTable + probeLine,
+		drillTable: drillTable + probeLine + launchLine,
 		cautions,
 		modelValues
 	});
+}
+
+/** The connector launch for the board house (empty without one): where its pads and holes are and what the gap must hold. */
+function launchNote(artwork: Artwork, profile: FabProfile): string {
+	const launch = artwork.metadata.launch;
+	if (!launch) return '';
+	if (launch.kind === 'edge') {
+		return [
+			'',
+			`   Connector launch at the bottom board edge (y = 0): the ${n(launch.signalWidthMm)} mm line and two top ground pads ${n(launch.groundWidthMm)} mm wide`,
+			`   run ${n(launch.lengthMm)} mm in from the edge, flush with it by design, ${n(launch.gapMm)} mm from the line on each side; ${launch.viaCount} plated`,
+			`   vias of ${n(launch.viaDrillMm)} mm tie the pads to the bottom ground. Hold that gap within ± ${profile.etchToleranceMm} mm: it sets the launch impedance.`
+		].join('\n');
+	}
+	const [x, y] = launch.center;
+	return launch.mount === 'pad'
+		? `\n   Connector launch on the bottom side: a ${n(launch.padSideMm ?? 0)} mm square ground pad centred on the probe hole at (${n(x)}, ${n(y)}), the ${n(launch.antiPadDiameterMm)} mm anti-pad cleared in it.`
+		: `\n   Connector launch on the bottom side: four plated ${n(launch.flangeDrillMm ?? 0)} mm flange holes on a ${n(launch.flangeSpacingMm ?? 0)} mm square centred on the probe hole at (${n(x)}, ${n(y)}); ${n(launch.antiPadDiameterMm)} mm anti-pad around the pin.`;
 }

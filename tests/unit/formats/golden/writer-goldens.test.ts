@@ -1,6 +1,6 @@
-// One golden file per writer per fixture design: every file each format writes for five fixture designs (one per
+// One golden file per writer per fixture design: every file each format writes for six fixture designs (one per
 // kind of artwork: a plain inset patch, a probe-fed disc with its drill, a corner-cut CP patch, a three-copper
-// aperture-coupled stack and a 2 × 2 array) is compared, byte for byte, with the file checked in under
+// aperture-coupled stack, a 2 × 2 array and an edge-fed patch with an edge launch) is compared, byte for byte, with the file checked in under
 // tests/fixtures/writers/<design>/. A change to any writer shows here as the file and line it changed, beside the one
 // hash of the golden bundle. After an intended change, write them again with
 //   UPDATE_GOLDEN=1 npx vitest run tests/unit/formats/golden
@@ -24,7 +24,9 @@ const designs: { slug: string; doc: DesignInputDocument }[] = [
 	{ slug: 'circular-probe', doc: designDocument('circular', 'probe', { name: 'Golden disc', solderMask: true }) },
 	{ slug: 'truncated-corner-inset', doc: designDocument('truncated-corner', 'inset', { name: 'Golden corner-cut' }) },
 	{ slug: 'aperture-coupled', doc: { ...layered('aperture-coupled patch'), name: 'Golden aperture' } },
-	{ slug: 'array-2x2-quarter-wave', doc: { ...layered('2×2 quarter-wave array'), name: 'Golden array' } }
+	{ slug: 'array-2x2-quarter-wave', doc: { ...layered('2×2 quarter-wave array'), name: 'Golden array' } },
+	// an edge-fed patch with an edge launch: its pads, the via drill file and the launch lines of the fab notes
+	{ slug: 'rectangular-edge-launch', doc: designDocument('rectangular', 'edge', { name: 'Golden launch', launch: { kind: 'edge', viaRows: 2 } }) }
 ];
 
 async function filesOf(doc: DesignInputDocument) {
