@@ -31,8 +31,8 @@ function lineAtEdge(top: ArtworkLayer): { centerXMm: number; widthMm: number } {
 		const o = s.geometry.region.outer;
 		const xs = [o.start, ...o.segments.map((seg) => seg.to)].filter((p) => Math.abs(p[1]) <= ON_EDGE_MM).map((p) => p[0]);
 		if (xs.length < 2) continue;
-		const lo = Math.min(...xs);
-		const hi = Math.max(...xs);
+		const lo = xs.reduce((m, x) => Math.min(m, x), Infinity);
+		const hi = xs.reduce((m, x) => Math.max(m, x), -Infinity);
 		if (hi - lo > ON_EDGE_MM) return { centerXMm: (lo + hi) / 2, widthMm: hi - lo };
 	}
 	throw new GeometryError('launch-does-not-fit', 'launch.kind "edge": no feed line reaches the board edge (y = 0) on the top copper');
