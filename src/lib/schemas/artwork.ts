@@ -107,8 +107,24 @@ export const stackLayerSchema = z.discriminatedUnion('kind', [
 
 export const artworkDimensionSchema = z
 	.strictObject({
-		id: z.enum(['patch-width', 'patch-length', 'patch-diameter', 'inset-depth', 'feed-width', 'ground-width', 'ground-length']),
-		label: z.string().meta({ description: 'Short label: W, L, D, y0, Wf, Wg, Lg' }),
+		id: z.enum([
+			'patch-width',
+			'patch-length',
+			'patch-diameter',
+			'corner-cut',
+			'inset-depth',
+			'notch-gap',
+			'probe-x',
+			'probe-y',
+			'transformer-length',
+			'transformer-width',
+			'feed-width',
+			'pitch-x',
+			'pitch-y',
+			'ground-width',
+			'ground-length'
+		]),
+		label: z.string().meta({ description: 'Short label: W, L, D, c, y0, g, xp, yp (probe centre from the board corner), Lt, Wt, Wf, Sx, Sy, Wg, Lg' }),
 		from: pointSchema,
 		to: pointSchema,
 		valueMm: z.number(),
