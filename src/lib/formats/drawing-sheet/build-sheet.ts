@@ -77,7 +77,9 @@ export function buildDrawingSheet(artwork: Artwork, meta: ExportMeta, options: D
 
 	// datum A: its letter framed in the corner below and left of the board (no dimension label reaches there), a leader to the corner
 	const boxH = DRAWING_TEXT_METRICS.boxEm * th;
-	const letter = labelAt(PROBE_DATUM.name, -1.2 * th - textWidthMm(PROBE_DATUM.name, th), -1.2 * th - boxH, th);
+	// (a board narrower than a label below it lets that label pass its left edge: the letter moves further left)
+	const belowLeft = Math.min(0, ...layout.dimensions.filter((d) => d.label.box.maxYMm < 0).map((d) => d.label.box.minXMm));
+	const letter = labelAt(PROBE_DATUM.name, belowLeft - 1.2 * th - textWidthMm(PROBE_DATUM.name, th), -1.2 * th - boxH, th);
 	const pad = 0.2 * th;
 	const frame: Bounds = { minXMm: letter.box.minXMm - pad, minYMm: letter.box.minYMm - pad, maxXMm: letter.box.maxXMm + pad, maxYMm: letter.box.maxYMm + pad };
 	const datum = { segments: [...boxSegments(frame), [[frame.maxXMm, frame.maxYMm], PROBE_DATUM.at] as DrawingSegment], label: letter };
