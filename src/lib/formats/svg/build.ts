@@ -2,10 +2,14 @@
 // then the sheet shared with the DXF writer: dimensions in tiers, datum A and the title block.
 import type { Artwork, ArtworkLayer, ArtworkShape, DrawingLabel, DrawingSegment } from '../../artwork';
 import { replaceControlCharacters } from '../../schemas/plain-text';
-import { arcSweepRad, type Contour, type Point } from '../../geometry';
+import type { Contour } from '../../geometry';
 import { buildDrawingSheet, type DrawingSheetOptions } from '../drawing-sheet';
 import type { ExportMeta } from '../export-meta';
 import type { SvgDocument, SvgElement } from './commands';
+import { contourPathData } from './outline-path';
+import { svgNumber } from './svg-number';
+
+export { svgNumber };
 
 /**
  * How a layer is drawn. Coppers are filled (a ground plane hatched, so copper above it keeps its own colour);
@@ -45,12 +49,6 @@ function lookOf(layer: ArtworkLayer, copperCount: number): LayerLook {
 	}
 }
 
-/** Fixed number format for coordinates: 4 decimals (0.1 µm), no trailing zeros, no "-0". Printed sizes use the sheet's decimals. */
-export function svgNumber(v: number): string {
-	const n = Math.round(v * 1e4) / 1e4;
-	return String(n === 0 ? 0 : n);
-}
-
 /** Text content never holds a control character: most are not allowed in XML 1.0 at all (§2.2 Characters). */
 const el = (name: SvgElement['name'], attributes: Record<string, string>, children: SvgElement[] = [], text?: string): SvgElement =>
 	text === undefined ? { name, attributes, children } : { name, attributes, children, text: replaceControlCharacters(text) };
@@ -67,23 +65,8 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta, options: Drawin
 	const boardWidthMm = artwork.board.widthMm;
 	const toSvgX = (x: number) => svgNumber(x);
 	const toSvgY = (y: number) => svgNumber(boardLengthMm - y);
-	const toSvgPoint = (p: Point) => `${toSvgX(p[0])} ${toSvgY(p[1])}`;
 
-	const pathOf = (c: Contour): string => {
-		let d = `M${toSvgPoint(c.start)}`;
-		let from = c.start;
-		for (const s of c.segments) {
-			if (s.kind === 'line') d += `L${toSvgPoint(s.to)}`;
-			else {
-				const r = Math.hypot(from[0] - s.center[0], from[1] - s.center[1]);
-				const large = Math.abs(arcSweepRad(from, s.to, s.center, s.clockwise)) > Math.PI ? 1 : 0;
-				// flipping y turns counter-clockwise into SVG's positive-angle (sweep-flag 0) direction
-				d += `A${svgNumber(r)} ${svgNumber(r)} 0 ${large} ${s.clockwise ? 1 : 0} ${toSvgPoint(s.to)}`;
-			}
-			from = s.to;
-		}
-		return d + 'Z';
-	};
+	const pathOf = (c: Contour): string => contourPathData(c, boardLengthMm);
 	const shapeElement = (s: ArtworkShape, look: LayerLook, fillOverride?: string): SvgElement => {
 		const g = s.geometry;
 		const fill = fillOverride ?? look.fill;

@@ -2,6 +2,7 @@
 export * from './commands';
 export { buildSvgTree, svgNumber } from './build';
 export { serializeSvgText } from './serialize-text';
+export { contourPathData, outlinePathData } from './outline-path';
 import type { Artwork } from '../../artwork';
 import type { DrawingSheetOptions } from '../drawing-sheet';
 import type { ExportMeta } from '../export-meta';
