@@ -1,6 +1,6 @@
 // DXF writer: typed entities, then text through dxf-writer.
 export * from './commands';
-export { buildDxfCommands, dxfLayerName, DXF_DIMENSION_LAYER, DXF_PLATED_DRILL_LAYER, DXF_NON_PLATED_DRILL_LAYER, DXF_TITLE_LAYER } from './build';
+export { buildDxfCommands, dxfLayerName, DXF_DIMENSION_LAYER, DXF_TEXT_HEIGHT_PER_EM, DXF_PLATED_DRILL_LAYER, DXF_NON_PLATED_DRILL_LAYER, DXF_TITLE_LAYER } from './build';
 export { serializeDxf } from './serialize';
 import type { Artwork } from '../../artwork';
 import type { DrawingSheetOptions } from '../drawing-sheet';

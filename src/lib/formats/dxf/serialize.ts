@@ -1,7 +1,6 @@
 // DXF entities → DXF text through dxf-writer, millimetres, numbers rounded to 1 nm so output never carries float noise.
 import Drawing from 'dxf-writer';
 import Handle from 'dxf-writer/src/Handle.js';
-import { textWidthMm } from '../../artwork';
 import { boundsOfPoints, emptyBounds } from '../../geometry';
 import type { DxfCommand } from './commands';
 
@@ -26,7 +25,7 @@ export function serializeDxf(commands: readonly DxfCommand[]): string {
 		if (c.type === 'circle') ext = boundsOfPoints([[c.center[0] - c.radiusMm, c.center[1] - c.radiusMm], [c.center[0] + c.radiusMm, c.center[1] + c.radiusMm]], ext);
 		if (c.type === 'polyline') ext = boundsOfPoints(c.vertices.map((v) => v.at), ext);
 		if (c.type === 'line') ext = boundsOfPoints([c.from, c.to], ext);
-		if (c.type === 'text') ext = boundsOfPoints([c.at, [c.at[0] + textWidthMm(c.value, c.heightMm), c.at[1] + c.heightMm]], ext);
+		if (c.type === 'text') ext = boundsOfPoints([c.at, [c.at[0] + c.widthMm, c.at[1] + c.heightMm]], ext);
 	}
 	if (Number.isFinite(ext.minXMm)) {
 		drawing.header('EXTMIN', [[10, roundToNanometre(ext.minXMm)], [20, roundToNanometre(ext.minYMm)], [30, 0]]);

@@ -88,6 +88,30 @@ describe('DXF writer', () => {
 		expect(dxf.header.$EXTMAX.y).toBeGreaterThan(artwork.board.lengthMm);
 	});
 
+	it.each(cases)('leaves room between the TEXT entities of a $shape / $feed drawing, read at a CAD font’s width', ({ artwork }) => {
+		const meta = createExportMeta({ designName: 'Sunroof GNSS', revisionLabel: 'B', revisionDate: '2026-11-20' });
+		const dxf = parse(toDxf(artwork, meta));
+		// a single-stroke CAD font advances about one text height per character (from memory); TEXT height is group 40
+		const boxes = dxf.entities
+			.filter((e: { type: string }) => e.type === 'TEXT')
+			.map((e: { text: string; startPoint: { x: number; y: number }; textHeight: number }) => ({
+				text: e.text,
+				x0: e.startPoint.x,
+				y0: e.startPoint.y,
+				x1: e.startPoint.x + [...e.text].length * e.textHeight,
+				y1: e.startPoint.y + e.textHeight
+			}));
+		expect(boxes.length).toBeGreaterThan(artwork.dimensions.length);
+		const overlaps: string[] = [];
+		for (let i = 0; i < boxes.length; i++)
+			for (let j = i + 1; j < boxes.length; j++) {
+				const [a, b] = [boxes[i], boxes[j]];
+				if (a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1) overlaps.push(`${a.text} × ${b.text}`);
+			}
+		expect(overlaps).toEqual([]);
+		for (const b of boxes) expect(b.x1 <= dxf.header.$EXTMAX.x + 1e-6 && b.y1 <= dxf.header.$EXTMAX.y + 1e-6, b.text).toBe(true);
+	});
+
 	it('gives byte-identical text for the same artwork twice in one process', () => {
 		expect(toDxf(cases[0].artwork)).toBe(toDxf(cases[0].artwork));
 	});
