@@ -1,5 +1,5 @@
 // The sizes a drawing dimensions, as measured spans on the board: patch W and L (or D) and its corner cut, the feed's
-// widths, inset depth and notch gap, the probe position from datum A (the board's lower-left corner), array pitch, ground.
+// widths, inset depth and notch gap, a coupling slot and stub or a buried line's overlap, the probe position from datum A (the board's lower-left corner), array pitch, ground.
 import type { Point } from '../geometry';
 import { feedLineOf } from '../rf/feed-kinds';
 import type { SizedDesign } from '../rf/sized-design';
@@ -69,9 +69,21 @@ export function buildDimensions(sized: SizedDesign, placement: DimensionPlacemen
 			dims.push({ id: 'transformer-width', label: 'Wt', from: [cx - half, edgeY], to: [cx + half, edgeY], valueMm: feed.transformer.widthMm, side: 'below' });
 			break;
 		}
+		case 'aperture-coupled': {
+			// the slot in the ground is centred under the patch, across the line; the open stub runs on past its centre
+			const half = feed.line.widthMm / 2;
+			const [hs, ws] = [feed.slotLengthMm / 2, feed.slotWidthMm / 2];
+			dims.push({ id: 'slot-length', label: 'Ls', from: [cx - hs, cy - ws], to: [cx + hs, cy - ws], valueMm: feed.slotLengthMm, side: 'below' });
+			dims.push({ id: 'slot-width', label: 'Ws', from: [cx + hs, cy - ws], to: [cx + hs, cy + ws], valueMm: feed.slotWidthMm, side: 'right' });
+			if (feed.stubLengthMm > 0) dims.push({ id: 'stub-length', label: 'Lst', from: [cx + half, cy], to: [cx + half, cy + feed.stubLengthMm], valueMm: feed.stubLengthMm, side: 'right' });
+			break;
+		}
+		case 'proximity-coupled': {
+			const half = feed.line.widthMm / 2;
+			dims.push({ id: 'feed-overlap', label: 'Lo', from: [cx + half, edgeY], to: [cx + half, edgeY + feed.overlapMm], valueMm: feed.overlapMm, side: 'right' });
+			break;
+		}
 		case 'edge':
-		case 'aperture-coupled':
-		case 'proximity-coupled':
 			break;
 		default:
 			return feed satisfies never;

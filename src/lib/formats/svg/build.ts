@@ -12,8 +12,9 @@ import { svgNumber } from './svg-number';
 export { svgNumber };
 
 /**
- * How a layer is drawn. Coppers are filled (a ground plane hatched, so copper above it keeps its own colour);
- * masks, the profile and any layer kind this writer does not know are outlines only, never a tint over copper.
+ * How a layer is drawn. Coppers are filled and opaque (a ground plane hatched, so copper above it keeps its own
+ * colour); masks, the profile and any layer kind this writer does not know are outlines only, never a tint over
+ * copper. What lies under the top copper shows again as dashed hidden edges.
  */
 interface LayerLook {
 	readonly fill: string | null;
@@ -33,13 +34,12 @@ const HATCH_ID = 'ground-hatch';
 
 const isGround = (layer: ArtworkLayer) => layer.function.kind === 'copper' && layer.shapes.some((s) => s.role === 'ground');
 
-function lookOf(layer: ArtworkLayer, copperCount: number): LayerLook {
+function lookOf(layer: ArtworkLayer): LayerLook {
 	const fn = layer.function;
 	switch (fn.kind) {
 		case 'copper':
 			if (isGround(layer)) return { fill: `url(#${HATCH_ID})`, stroke: 'none', opacity: '1' };
-			// seen through the board: a top copper over buried feed lines lets them show
-			return { fill: COPPER_BY_SIDE[fn.side], stroke: 'none', opacity: fn.side === 'top' && copperCount > 2 ? '0.85' : '1' };
+			return { fill: COPPER_BY_SIDE[fn.side], stroke: 'none', opacity: '1' };
 		case 'solder-mask':
 			return { fill: null, stroke: MASK_OPENING, dash: '0.6 0.4', opacity: '1' };
 		case 'profile':
@@ -53,11 +53,11 @@ function lookOf(layer: ArtworkLayer, copperCount: number): LayerLook {
 const el = (name: SvgElement['name'], attributes: Record<string, string>, children: SvgElement[] = [], text?: string): SvgElement =>
 	text === undefined ? { name, attributes, children } : { name, attributes, children, text: replaceControlCharacters(text) };
 
-/** Coppers from the bottom up, then the other layers in artwork order. */
+/** Ground planes first (they fill the board), then the other coppers from the bottom up, then the other layers in artwork order. */
 function drawingOrder(layers: readonly ArtworkLayer[]): ArtworkLayer[] {
-	const coppers = layers.filter((l) => l.function.kind === 'copper');
 	const index = (l: ArtworkLayer) => (l.function.kind === 'copper' ? l.function.copperIndex : 0);
-	return [...coppers.sort((a, b) => index(b) - index(a)), ...layers.filter((l) => l.function.kind !== 'copper')];
+	const coppers = layers.filter((l) => l.function.kind === 'copper').sort((a, b) => index(b) - index(a));
+	return [...coppers.filter(isGround), ...coppers.filter((l) => !isGround(l)), ...layers.filter((l) => l.function.kind !== 'copper')];
 }
 
 export function buildSvgTree(artwork: Artwork, meta: ExportMeta, options: DrawingSheetOptions = {}): SvgDocument {
@@ -84,9 +84,8 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta, options: Drawin
 			el('rect', { x: '0', y: '0', width: '0.35', height: '1.2', fill: GROUND_HATCH.line })
 		])
 	];
-	const copperCount = artwork.metadata.copperLayerCount;
 	const layerGroups: SvgElement[] = drawingOrder(artwork.layers).map((layer) => {
-		const look = lookOf(layer, copperCount);
+		const look = lookOf(layer);
 		const dark = layer.shapes.filter((s) => s.polarity === 'dark').map((s) => shapeElement(s, look));
 		const clear = layer.shapes.filter((s) => s.polarity === 'clear');
 		const attrs: Record<string, string> = { id: `layer-${layer.id}`, 'data-layer-title': layer.title, opacity: look.opacity };
@@ -102,6 +101,16 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta, options: Drawin
 		}
 		return el('g', attrs, dark);
 	});
+	// edges under the top copper, drawn dashed over it as hidden lines: buried coppers and what is cut out of a ground
+	const hidden = artwork.layers
+		.filter((l) => l.function.kind === 'copper' && l.function.copperIndex > 1)
+		.flatMap((l) => {
+			const look: LayerLook = { fill: null, stroke: isGround(l) ? GROUND_HATCH.line : lookOf(l).fill ?? INK, dash: '0.8 0.5', opacity: '1' };
+			return l.shapes
+				.filter((s) => (isGround(l) ? s.polarity === 'clear' : s.polarity === 'dark'))
+				.map((s) => shapeElement({ ...s, id: `hidden-${s.id}` }, look));
+		});
+	const hiddenEdges = el('g', { id: 'hidden-edges', 'data-layer-title': 'Edges under the top copper (dashed)' }, hidden);
 	const substrate = el('rect', { id: 'substrate', x: '0', y: '0', width: svgNumber(boardWidthMm), height: svgNumber(boardLengthMm), fill: SUBSTRATE });
 	const drills = el(
 		'g',
@@ -146,6 +155,7 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta, options: Drawin
 			el('defs', {}, defs),
 			substrate,
 			...layerGroups,
+			hiddenEdges,
 			drills,
 			dims,
 			title

@@ -7,6 +7,8 @@ import { buildArtwork } from '../../../../src/lib/artwork';
 import { createExportMeta } from '../../../../src/lib/formats/export-meta';
 import { buildSvgTree, toSvg, type SvgElement } from '../../../../src/lib/formats/svg';
 import { allShapeFeedCases, sizedCase } from '../../../fixtures/designs/design-cases';
+import { layeredCases } from '../../../fixtures/designs/layered-cases';
+import { size } from '../../../../src/lib/rf';
 
 const meta = createExportMeta({ designName: 'Sunroof GNSS', revisionLabel: 'B', revisionDate: '2026-11-20' });
 const cases = allShapeFeedCases.map((c) => ({ ...c, artwork: buildArtwork(sizedCase(c.shape, c.feed, { solderMask: true })) }));
@@ -129,6 +131,23 @@ describe('SVG writer', () => {
 		const groups = Array.from(doc.querySelectorAll('g')).map((g) => g.getAttribute('id'));
 		expect(groups.indexOf('layer-copper-bottom')).toBeLessThan(groups.indexOf('layer-copper-top'));
 		expect(doc.querySelector('g#layer-copper-bottom path#ground')!.getAttribute('fill')).toBe('url(#ground-hatch)');
+	});
+
+	it('keeps a top copper over buried ones opaque and draws what lies under it as dashed hidden edges', () => {
+		const a = buildArtwork(size(layeredCases.find((c) => c.name === 'aperture-coupled patch')!.doc));
+		const doc = parseXml(toSvg(a, meta));
+		expect(doc.querySelector('g#layer-copper-top')!.getAttribute('opacity')).toBe('1');
+		const hidden = doc.querySelector('g#hidden-edges')!;
+		// the feed line on the bottom copper and the slot cut out of the inner ground
+		for (const id of ['hidden-feed-line', 'hidden-coupling-slot']) {
+			const edge = hidden.querySelector(`#${id}`)!;
+			expect(edge.getAttribute('fill')).toBe('none');
+			expect(edge.getAttribute('stroke-dasharray')).not.toBeNull();
+		}
+		// the ground itself is no hidden edge, and the hidden edges come after every layer
+		expect(hidden.querySelector('#hidden-ground')).toBeNull();
+		const groups = Array.from(doc.querySelectorAll('g')).map((g) => g.getAttribute('id'));
+		for (const layer of a.layers) expect(groups.indexOf(`layer-${layer.id}`)).toBeLessThan(groups.indexOf('hidden-edges'));
 	});
 
 	it('draws a layer of a kind it does not know as an outline group of its own', () => {
