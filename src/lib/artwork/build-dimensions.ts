@@ -1,4 +1,5 @@
-// The sizes a drawing dimensions, as measured spans on the board: patch W and L (or D) and its corner cut, the feed's
+// The sizes a drawing dimensions, as measured spans on the board: patch W and L (or D) and its corner cut, a parasitic
+// patch's, the feed's
 // widths, inset depth and notch gap, a coupling slot and stub or a buried line's overlap, the probe position from datum A (the board's lower-left corner), array pitch, ground.
 import type { Point } from '../geometry';
 import { feedLineOf } from '../rf/feed-kinds';
@@ -45,6 +46,16 @@ export function buildDimensions(sized: SizedDesign, placement: DimensionPlacemen
 			const [from, to]: [Point, Point] = patch.truncatedDiagonal === 'rising' ? [[px + hx - t, py + hy], [px + hx, py + hy - t]] : [[px - hx, py + hy - t], [px - hx + t, py + hy]];
 			dims.push({ id: 'corner-cut', label: 'c', from, to: [to[0], from[1]], valueMm: t, side: 'above' });
 		}
+	}
+	// a stacked parasitic patch, centred over the driven one: its own width and length (or diameter)
+	const parasitic = sized.parasitic?.patch;
+	if (parasitic?.kind === 'circular') {
+		const r = parasitic.radiusMm;
+		dims.push({ id: 'parasitic-width', label: 'Dp', from: [px - r, py], to: [px + r, py], valueMm: 2 * r, side: 'above' });
+	} else if (parasitic) {
+		const { halfXMm: hx, halfYMm: hy } = patchHalfSizes(parasitic);
+		dims.push({ id: 'parasitic-width', label: 'Wp', from: [px - hx, py + hy], to: [px + hx, py + hy], valueMm: 2 * hx, side: 'above' });
+		dims.push({ id: 'parasitic-length', label: 'Lp', from: [px + hx, py - hy], to: [px + hx, py + hy], valueMm: 2 * hy, side: 'right' });
 	}
 	const feed = sized.feed;
 	switch (feed.kind) {

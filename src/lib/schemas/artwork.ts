@@ -112,6 +112,8 @@ export const artworkDimensionSchema = z
 			'patch-length',
 			'patch-diameter',
 			'corner-cut',
+			'parasitic-width',
+			'parasitic-length',
 			'inset-depth',
 			'notch-gap',
 			'probe-x',
@@ -128,7 +130,7 @@ export const artworkDimensionSchema = z
 			'ground-width',
 			'ground-length'
 		]),
-		label: z.string().meta({ description: 'Short label: W, L, D, c, y0, g, xp, yp (probe centre from the board corner), Lt, Wt, Ls, Ws, Lst, Lo, Wf, Sx, Sy, Wg, Lg' }),
+		label: z.string().meta({ description: 'Short label: W, L, D, c, Wp, Lp (or Dp) of a parasitic patch, y0, g, xp, yp (probe centre from the board corner), Lt, Wt, Ls, Ws, Lst, Lo, Wf, Sx, Sy, Wg, Lg' }),
 		from: pointSchema,
 		to: pointSchema,
 		valueMm: z.number(),
