@@ -72,7 +72,7 @@ function drawArtwork(sized: SizedDesign): Artwork {
 		layers,
 		drills,
 		stack: sized.layerStack ? buildLayeredStack(sized) : buildStack(sized),
-		dimensions: buildDimensions(sized, center, top.patchEdgeYMm),
+		dimensions: buildDimensions(sized, { center, patchEdgeYMm: top.patchEdgeYMm, feedStartYMm: 0, board: { widthMm: boardW, lengthMm: boardL } }),
 		metadata: {
 			designName: sized.input.name,
 			shape: sized.shape,

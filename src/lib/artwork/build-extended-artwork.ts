@@ -1,13 +1,13 @@
 // Artwork for layered designs (three coppers) and arrays: elements placed on a grid, the corporate feed, the ground, the stack.
 import { GeometryError, createRectangleContour, emptyBounds, mergeBounds, type Bounds, type Point } from '../geometry';
-import { feedLineOf } from '../rf/feed-kinds';
 import type { SizedDesign } from '../rf/sized-design';
+import { buildDimensions } from './build-dimensions';
 import { buildElement, layerRolesOf, shapeBounds, type BuiltElement } from './build-element';
 import { buildLayeredStack, copperLayerIds } from './build-stack';
 import { layoutCorporateFeed, pieceBounds, pieceShape, type NetworkPiece } from './build-corporate-feed';
 import { profileLayer } from './profile-layer';
 import { translateShape } from './translate-shape';
-import type { Artwork, ArtworkDimension, ArtworkLayer, ArtworkShape } from './types';
+import type { Artwork, ArtworkLayer, ArtworkShape } from './types';
 
 
 const COPPER_TITLES: Record<string, string> = {
@@ -84,13 +84,23 @@ export function buildExtendedArtwork(sized: SizedDesign): Artwork {
 		layers.push({ id: 'mask-bottom', title: 'Bottom solder mask (openings)', function: { kind: 'solder-mask', side: 'bottom' }, shapes: openings(ids.length - 1, 'bottom'), voids: [] });
 	}
 
-	const c0: Point = [element.center[0] + offX, element.center[1] + offY];
+	// an array's sizes on its upper right element (nothing between it and the top and right edges), its feed on the lower right one
+	const [topX, topY] = origin(rows - 1, columns - 1);
+	const [feedX, feedY] = origin(0, columns - 1);
+	const at = (ox: number, oy: number): Point => [element.center[0] + ox + offX, element.center[1] + oy + offY];
 	return {
 		board: { widthMm: boardW, lengthMm: boardL },
 		layers,
 		drills: [],
 		stack: buildLayeredStack(sized),
-		dimensions: dimensionsOf(sized, element, c0, offX, offY, boardW, boardL, roles.feedIndex),
+		dimensions: buildDimensions(sized, {
+			center: at(topX, topY),
+			patchEdgeYMm: element.patchEdgeYMm + topY + offY,
+			feedElement: { center: at(feedX, feedY), patchEdgeYMm: element.patchEdgeYMm + feedY + offY },
+			feedStartYMm: shapeBounds(element.shapes[roles.feedIndex]).minYMm + feedY + offY,
+			board: { widthMm: boardW, lengthMm: boardL },
+			...(array ? { pitch: { xMm: columns > 1 ? dx : null, yMm: rows > 1 ? dy : null } } : {})
+		}),
 		metadata: { designName: sized.input.name, shape: sized.shape, feedKind: sized.feedKind, frequencyHz: sized.frequencyHz, copperLayerCount: roles.copperCount }
 	};
 }
@@ -191,25 +201,3 @@ function networkCollision(pieces: readonly NetworkPiece[], boxes: readonly Bound
 	return null;
 }
 
-function dimensionsOf(sized: SizedDesign, element: BuiltElement, center: Point, offX: number, offY: number, gw: number, gl: number, feedIndex: number): ArtworkDimension[] {
-	const [cx, cy] = center;
-	const dims: ArtworkDimension[] = [];
-	const p = sized.patch;
-	if (p.kind === 'circular') dims.push({ id: 'patch-diameter', label: 'D', from: [cx - p.radiusMm, cy], to: [cx + p.radiusMm, cy], valueMm: 2 * p.radiusMm, side: 'above' });
-	else {
-		const hx = p.kind === 'truncated-corner' ? p.sideMm / 2 : p.widthMm / 2;
-		const hy = p.kind === 'truncated-corner' ? p.sideMm / 2 : p.lengthMm / 2;
-		dims.push({ id: 'patch-width', label: 'W', from: [cx - hx, cy + hy], to: [cx + hx, cy + hy], valueMm: 2 * hx, side: 'above' });
-		dims.push({ id: 'patch-length', label: 'L', from: [cx + hx, cy - hy], to: [cx + hx, cy + hy], valueMm: 2 * hy, side: 'right' });
-	}
-	const line = feedLineOf(sized.feed);
-	if (line) {
-		const half = line.widthMm / 2;
-		const fy = shapeBounds(element.shapes[feedIndex]).minYMm + offY;
-		dims.push({ id: 'feed-width', label: 'Wf', from: [cx - half, fy], to: [cx + half, fy], valueMm: line.widthMm, side: 'below' });
-	}
-	void offX;
-	dims.push({ id: 'ground-width', label: 'Wg', from: [0, 0], to: [gw, 0], valueMm: gw, side: 'below' });
-	dims.push({ id: 'ground-length', label: 'Lg', from: [0, 0], to: [0, gl], valueMm: gl, side: 'left' });
-	return dims;
-}

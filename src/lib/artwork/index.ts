@@ -8,3 +8,18 @@ export { copperLayerIds } from './build-stack';
 export { translateShape } from './translate-shape';
 export { DEFAULT_PLATING_THICKNESS_UM, probeModelOf } from './probe-model';
 export { layoutCorporateFeed, pieceShape, type CorporateFeedLayout, type NetworkPiece } from './build-corporate-feed';
+export { PROBE_DATUM } from './build-dimensions';
+export {
+	boxesOverlap,
+	decimalsForResolution,
+	DRAWING_TEXT_METRICS,
+	formatLengthMm,
+	labelAt,
+	layoutDimensions,
+	textWidthMm,
+	type DimensionLayout,
+	type DimensionLayoutOptions,
+	type DrawingLabel,
+	type DrawingSegment,
+	type PlacedDimension
+} from './dimension-layout';

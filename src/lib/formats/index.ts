@@ -4,6 +4,7 @@ export * from './gerber';
 export * from './excellon';
 export * from './dxf';
 export * from './svg';
+export * from './drawing-sheet';
 export * from './step';
 export * from './sweep';
 export * from './fab-notes';

@@ -6,6 +6,7 @@ import type { DesignInput } from '../schemas';
 import { builtInFabProfileFor, type FabProfile } from '../schemas/fab-profile';
 import { buildArrayPatternDocument, serializeArrayPattern } from './array-pattern';
 import { exportFileName } from './bundle/file-names';
+import { drawingResolutionMm, type DrawingSheetOptions } from './drawing-sheet';
 import { toDxf } from './dxf';
 import { toExcellon } from './excellon';
 import type { ExportMeta } from './export-meta';
@@ -55,6 +56,12 @@ export interface FormatEntry {
 	write(prepared: PreparedDesign, meta: ExportMeta, context: FormatWriteContext): ExportFile[];
 }
 
+/** What the drawings print besides the artwork: sizes to the profile's resolution, the ordered laminate's name. */
+export function drawingSheetOptions(prepared: PreparedDesign, profile: FabProfile | undefined): DrawingSheetOptions {
+	const name = prepared.input.laminate?.name;
+	return { resolutionMm: drawingResolutionMm(profile), ...(name ? { laminateName: name } : {}) };
+}
+
 const encoder = new TextEncoder();
 const textFile = (name: string, body: string): ExportFile => ({ name, bytes: encoder.encode(body) });
 const always = () => true;
@@ -88,7 +95,7 @@ const entries: { readonly [K in FormatId]: FormatEntry & { readonly id: K } } = 
 		extension: 'dxf',
 		contentType: 'image/vnd.dxf',
 		appliesTo: always,
-		write: ({ artwork }, meta) => [textFile(exportFileName(meta, 'drawing', 'dxf'), toDxf(artwork))]
+		write: (prepared, meta, context) => [textFile(exportFileName(meta, 'drawing', 'dxf'), toDxf(prepared.artwork, meta, drawingSheetOptions(prepared, context.profile)))]
 	},
 	svg: {
 		id: 'svg',
@@ -97,7 +104,7 @@ const entries: { readonly [K in FormatId]: FormatEntry & { readonly id: K } } = 
 		extension: 'svg',
 		contentType: 'image/svg+xml',
 		appliesTo: always,
-		write: ({ artwork }, meta) => [textFile(exportFileName(meta, 'drawing', 'svg'), toSvg(artwork, meta))]
+		write: (prepared, meta, context) => [textFile(exportFileName(meta, 'drawing', 'svg'), toSvg(prepared.artwork, meta, drawingSheetOptions(prepared, context.profile)))]
 	},
 	sweep: {
 		id: 'sweep',

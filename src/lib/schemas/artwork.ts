@@ -113,8 +113,30 @@ export const stackLayerSchema = z.discriminatedUnion('kind', [
 
 export const artworkDimensionSchema = z
 	.strictObject({
-		id: z.enum(['patch-width', 'patch-length', 'patch-diameter', 'inset-depth', 'feed-width', 'ground-width', 'ground-length']),
-		label: z.string().meta({ description: 'Short label: W, L, D, y0, Wf, Wg, Lg' }),
+		id: z.enum([
+			'patch-width',
+			'patch-length',
+			'patch-diameter',
+			'corner-cut',
+			'parasitic-width',
+			'parasitic-length',
+			'inset-depth',
+			'notch-gap',
+			'probe-x',
+			'probe-y',
+			'transformer-length',
+			'transformer-width',
+			'slot-length',
+			'slot-width',
+			'stub-length',
+			'feed-overlap',
+			'feed-width',
+			'pitch-x',
+			'pitch-y',
+			'ground-width',
+			'ground-length'
+		]),
+		label: z.string().meta({ description: 'Short label: W, L, D, c, Wp, Lp (or Dp) of a parasitic patch, y0, g, xp, yp (probe centre from the board corner), Lt, Wt, Ls, Ws, Lst, Lo, Wf, Sx, Sy, Wg, Lg' }),
 		from: pointSchema,
 		to: pointSchema,
 		valueMm: z.number(),

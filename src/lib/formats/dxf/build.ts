@@ -1,5 +1,8 @@
-// Artwork → DXF entities: region contours as closed bulged polylines, round things as CIRCLE, drills on their own layers.
-import type { Artwork } from '../../artwork';
+// Artwork → DXF entities: region contours as closed bulged polylines, round things as CIRCLE, drills on their own layers;
+// with the revision's meta also the drawing sheet (dimensions, datum A, title block) as LINE and TEXT on layers of their own.
+import { textWidthMm, type Artwork, type DrawingLabel } from '../../artwork';
+import { buildDrawingSheet, type DrawingSheetOptions } from '../drawing-sheet';
+import type { ExportMeta } from '../export-meta';
 import { arcSweepRad, type Contour } from '../../geometry';
 import type { DxfCommand, DxfVertex } from './commands';
 
@@ -7,6 +10,10 @@ import type { DxfCommand, DxfVertex } from './commands';
 export const dxfLayerName = (layerId: string) => layerId.toUpperCase();
 export const DXF_PLATED_DRILL_LAYER = 'DRILL-PLATED';
 export const DXF_NON_PLATED_DRILL_LAYER = 'DRILL-NON-PLATED';
+/** Dimension lines, their texts and datum A. */
+export const DXF_DIMENSION_LAYER = 'FF-DIMENSIONS';
+/** The title block. */
+export const DXF_TITLE_LAYER = 'FF-TITLE';
 
 const COLORS: Record<string, number> = { 'copper-top': 1, 'copper-bottom': 5, profile: 7, 'mask-top': 3, 'mask-bottom': 4, 'copper-inner-1': 6 };
 
@@ -28,7 +35,7 @@ function vertices(c: Contour): DxfVertex[] {
 	return out;
 }
 
-export function buildDxfCommands(artwork: Artwork): DxfCommand[] {
+export function buildDxfCommands(artwork: Artwork, meta?: ExportMeta, options: DrawingSheetOptions = {}): DxfCommand[] {
 	const out: DxfCommand[] = [];
 	for (const layer of artwork.layers) out.push({ type: 'layer', name: dxfLayerName(layer.id), colorIndex: COLORS[layer.id] ?? 8 });
 	const plated = artwork.drills.filter((d) => d.plated);
@@ -54,5 +61,33 @@ export function buildDxfCommands(artwork: Artwork): DxfCommand[] {
 	for (const d of [...plated, ...nonPlated]) {
 		out.push({ type: 'circle', layer: d.plated ? DXF_PLATED_DRILL_LAYER : DXF_NON_PLATED_DRILL_LAYER, center: d.center, radiusMm: d.diameterMm / 2 });
 	}
+	if (meta) out.push(...sheetCommands(artwork, meta, options));
+	return out;
+}
+
+/**
+ * DXF text height per unit of the sheet's font size. CAD fonts take the height as the capital height and advance
+ * about one height per character (from memory, for the common single-stroke fonts), so 0.6 keeps a label within
+ * the 0.64 em per character the layout reserved, and near the SVG's capital height (≈ 0.73 em).
+ */
+export const DXF_TEXT_HEIGHT_PER_EM = 0.6;
+
+/** The sheet the SVG draws too, as lines and texts: the board layers above keep their geometry. */
+function sheetCommands(artwork: Artwork, meta: ExportMeta, options: DrawingSheetOptions): DxfCommand[] {
+	const sheet = buildDrawingSheet(artwork, meta, options);
+	const dim = DXF_DIMENSION_LAYER;
+	const text = (layer: string, l: DrawingLabel): DxfCommand => ({ type: 'text', layer, at: l.baseline, heightMm: l.heightMm * DXF_TEXT_HEIGHT_PER_EM, widthMm: textWidthMm(l.text, l.heightMm), value: l.text });
+	const out: DxfCommand[] = [
+		{ type: 'layer', name: dim, colorIndex: 250 },
+		{ type: 'layer', name: DXF_TITLE_LAYER, colorIndex: 251 }
+	];
+	sheet.dimensions.forEach((d, i) => {
+		for (const [from, to] of [...d.extensions, d.line, sheet.endMarks[2 * i], sheet.endMarks[2 * i + 1]]) out.push({ type: 'line', layer: dim, from, to });
+		out.push(text(dim, d.label));
+	});
+	for (const [from, to] of sheet.datum.segments) out.push({ type: 'line', layer: dim, from, to });
+	out.push(text(dim, sheet.datum.label));
+	for (const [from, to] of sheet.titleBlock.rules) out.push({ type: 'line', layer: DXF_TITLE_LAYER, from, to });
+	for (const l of sheet.titleBlock.labels) out.push(text(DXF_TITLE_LAYER, l));
 	return out;
 }

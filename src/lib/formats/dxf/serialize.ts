@@ -19,11 +19,13 @@ export function serializeDxf(commands: readonly DxfCommand[]): string {
 	Handle.seed = 0;
 	const drawing = new Drawing();
 	drawing.setUnits('Millimeters');
-	// Extents from the entities' points and circle boxes (bulged edges of our contours never leave the board).
+	// Extents from the entities' points, circle boxes and text boxes (bulged edges of our contours never leave the board).
 	let ext = emptyBounds;
 	for (const c of commands) {
 		if (c.type === 'circle') ext = boundsOfPoints([[c.center[0] - c.radiusMm, c.center[1] - c.radiusMm], [c.center[0] + c.radiusMm, c.center[1] + c.radiusMm]], ext);
 		if (c.type === 'polyline') ext = boundsOfPoints(c.vertices.map((v) => v.at), ext);
+		if (c.type === 'line') ext = boundsOfPoints([c.from, c.to], ext);
+		if (c.type === 'text') ext = boundsOfPoints([c.at, [c.at[0] + c.widthMm, c.at[1] + c.heightMm]], ext);
 	}
 	if (Number.isFinite(ext.minXMm)) {
 		drawing.header('EXTMIN', [[10, roundToNanometre(ext.minXMm)], [20, roundToNanometre(ext.minYMm)], [30, 0]]);
@@ -36,6 +38,8 @@ export function serializeDxf(commands: readonly DxfCommand[]): string {
 		if (c.type === 'layer') continue;
 		drawing.setActiveLayer(c.layer);
 		if (c.type === 'circle') drawing.drawCircle(roundToNanometre(c.center[0]), roundToNanometre(c.center[1]), roundToNanometre(c.radiusMm));
+		else if (c.type === 'line') drawing.drawLine(roundToNanometre(c.from[0]), roundToNanometre(c.from[1]), roundToNanometre(c.to[0]), roundToNanometre(c.to[1]));
+		else if (c.type === 'text') drawing.drawText(roundToNanometre(c.at[0]), roundToNanometre(c.at[1]), roundToNanometre(c.heightMm), 0, c.value);
 		else {
 			const pts = c.vertices.map((v) => (v.bulge === 0 ? [roundToNanometre(v.at[0]), roundToNanometre(v.at[1])] : [roundToNanometre(v.at[0]), roundToNanometre(v.at[1]), roundBulge(v.bulge)]));
 			drawing.drawPolyline(pts as unknown as [number, number][], c.closed);

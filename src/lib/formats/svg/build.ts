@@ -1,113 +1,161 @@
-// Artwork → SVG element tree: layers as groups (y flipped once: svgY = boardLength − y), dimensions, title block.
-import type { Artwork, ArtworkDimension, ArtworkShape } from '../../artwork';
+// Artwork → SVG element tree: the board's layers drawn bottom copper first (y flipped once: svgY = boardLength − y),
+// then the sheet shared with the DXF writer: dimensions in tiers, datum A and the title block.
+import type { Artwork, ArtworkLayer, ArtworkShape, DrawingLabel, DrawingSegment } from '../../artwork';
 import { replaceControlCharacters } from '../../schemas/plain-text';
-import { arcSweepRad, type Contour, type Point } from '../../geometry';
+import type { Contour } from '../../geometry';
+import { buildDrawingSheet, type DrawingSheetOptions } from '../drawing-sheet';
 import type { ExportMeta } from '../export-meta';
 import type { SvgDocument, SvgElement } from './commands';
+import { contourPathData } from './outline-path';
+import { svgNumber } from './svg-number';
 
-/** Space around the board for dimension lines (left, right, top) and the title block (bottom), mm. */
-export const SVG_MARGINS_MM = { left: 16, right: 14, top: 12, bottom: 40 } as const;
+export { svgNumber };
 
-const STYLE: Record<string, { fill: string; opacity: string }> = {
-	'copper-top': { fill: '#b87333', opacity: '1' },
-	'copper-bottom': { fill: '#5a7fa8', opacity: '0.35' },
-	'copper-inner-1': { fill: '#8a5a9e', opacity: '0.55' },
-	'mask-top': { fill: '#2e8b57', opacity: '0.3' },
-	'mask-bottom': { fill: '#2e8b57', opacity: '0.3' }
-};
+/**
+ * How a layer is drawn. Coppers are filled and opaque (a ground plane hatched, so copper above it keeps its own
+ * colour); masks, the profile and any layer kind this writer does not know are outlines only, never a tint over
+ * copper. What lies under the top copper shows again as dashed hidden edges.
+ */
+interface LayerLook {
+	readonly fill: string | null;
+	readonly stroke: string;
+	readonly dash?: string;
+	readonly opacity: string;
+}
 
-/** Fixed number format: 4 decimals (0.1 µm), no trailing zeros, no "-0". */
-export function svgNumber(v: number): string {
-	const n = Math.round(v * 1e4) / 1e4;
-	return String(n === 0 ? 0 : n);
+// Our own palette (the copper tones are the app's tailwind tokens, as in the preview).
+const INK = '#242d3b';
+const COPPER_BY_SIDE = { top: '#d98f55', inner: '#b0622b', bottom: '#6e3a17' } as const;
+const GROUND_HATCH = { line: '#7d8ba0', paper: '#e6eaf0' } as const;
+const SUBSTRATE = '#f3f5ec';
+const MASK_OPENING = '#2f8f5b';
+const OTHER_LAYER = '#5c4a8a';
+const HATCH_ID = 'ground-hatch';
+
+const isGround = (layer: ArtworkLayer) => layer.function.kind === 'copper' && layer.shapes.some((s) => s.role === 'ground');
+
+function lookOf(layer: ArtworkLayer): LayerLook {
+	const fn = layer.function;
+	switch (fn.kind) {
+		case 'copper':
+			if (isGround(layer)) return { fill: `url(#${HATCH_ID})`, stroke: 'none', opacity: '1' };
+			return { fill: COPPER_BY_SIDE[fn.side], stroke: 'none', opacity: '1' };
+		case 'solder-mask':
+			return { fill: null, stroke: MASK_OPENING, dash: '0.6 0.4', opacity: '1' };
+		case 'profile':
+			return { fill: null, stroke: INK, opacity: '1' };
+		default:
+			return { fill: null, stroke: OTHER_LAYER, opacity: '1' };
+	}
 }
 
 /** Text content never holds a control character: most are not allowed in XML 1.0 at all (§2.2 Characters). */
 const el = (name: SvgElement['name'], attributes: Record<string, string>, children: SvgElement[] = [], text?: string): SvgElement =>
 	text === undefined ? { name, attributes, children } : { name, attributes, children, text: replaceControlCharacters(text) };
 
-export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
+/** Ground planes first (they fill the board), then the other coppers from the bottom up, then the other layers in artwork order. */
+function drawingOrder(layers: readonly ArtworkLayer[]): ArtworkLayer[] {
+	const index = (l: ArtworkLayer) => (l.function.kind === 'copper' ? l.function.copperIndex : 0);
+	const coppers = layers.filter((l) => l.function.kind === 'copper').sort((a, b) => index(b) - index(a));
+	return [...coppers.filter(isGround), ...coppers.filter((l) => !isGround(l)), ...layers.filter((l) => l.function.kind !== 'copper')];
+}
+
+export function buildSvgTree(artwork: Artwork, meta: ExportMeta, options: DrawingSheetOptions = {}): SvgDocument {
 	const boardLengthMm = artwork.board.lengthMm;
 	const boardWidthMm = artwork.board.widthMm;
 	const toSvgX = (x: number) => svgNumber(x);
 	const toSvgY = (y: number) => svgNumber(boardLengthMm - y);
-	const toSvgPoint = (p: Point) => `${toSvgX(p[0])} ${toSvgY(p[1])}`;
 
-	const pathOf = (c: Contour): string => {
-		let d = `M${toSvgPoint(c.start)}`;
-		let from = c.start;
-		for (const s of c.segments) {
-			if (s.kind === 'line') d += `L${toSvgPoint(s.to)}`;
-			else {
-				const r = Math.hypot(from[0] - s.center[0], from[1] - s.center[1]);
-				const large = Math.abs(arcSweepRad(from, s.to, s.center, s.clockwise)) > Math.PI ? 1 : 0;
-				// flipping y turns counter-clockwise into SVG's positive-angle (sweep-flag 0) direction
-				d += `A${svgNumber(r)} ${svgNumber(r)} 0 ${large} ${s.clockwise ? 1 : 0} ${toSvgPoint(s.to)}`;
-			}
-			from = s.to;
-		}
-		return d + 'Z';
-	};
-	const shapeElement = (s: ArtworkShape, fill: string): SvgElement => {
+	const pathOf = (c: Contour): string => contourPathData(c, boardLengthMm);
+	const shapeElement = (s: ArtworkShape, look: LayerLook, fillOverride?: string): SvgElement => {
 		const g = s.geometry;
-		if (g.kind === 'circle') return el('circle', { id: s.id, cx: toSvgX(g.center[0]), cy: toSvgY(g.center[1]), r: svgNumber(g.diameterMm / 2), fill });
-		if (g.kind === 'outline') return el('path', { id: s.id, d: pathOf(g.contour), fill: 'none', stroke: '#000000', 'stroke-width': svgNumber(g.strokeWidthMm) });
-		return el('path', { id: s.id, d: [g.region.outer, ...g.region.holes].map(pathOf).join(''), fill, 'fill-rule': 'evenodd' });
+		const fill = fillOverride ?? look.fill;
+		const paint: Record<string, string> =
+			fill === null ? { fill: 'none', stroke: look.stroke, 'stroke-width': '0.15', ...(look.dash ? { 'stroke-dasharray': look.dash } : {}) } : { fill };
+		if (g.kind === 'circle') return el('circle', { id: s.id, cx: toSvgX(g.center[0]), cy: toSvgY(g.center[1]), r: svgNumber(g.diameterMm / 2), ...paint });
+		if (g.kind === 'outline') return el('path', { id: s.id, d: pathOf(g.contour), fill: 'none', stroke: look.fill ?? look.stroke, 'stroke-width': svgNumber(g.strokeWidthMm) });
+		return el('path', { id: s.id, d: [g.region.outer, ...g.region.holes].map(pathOf).join(''), ...paint, ...(fill === null ? {} : { 'fill-rule': 'evenodd' }) });
 	};
 
-	const defs: SvgElement[] = [];
-	const layerGroups: SvgElement[] = artwork.layers.map((layer) => {
-		const style = STYLE[layer.id] ?? { fill: '#000000', opacity: '1' };
-		const dark = layer.shapes.filter((s) => s.polarity === 'dark').map((s) => shapeElement(s, style.fill));
+	const defs: SvgElement[] = [
+		// ground planes hatched at 45°: told apart from copper without hue, and copper drawn over them keeps its colour
+		el('pattern', { id: HATCH_ID, patternUnits: 'userSpaceOnUse', width: '1.2', height: '1.2', patternTransform: 'rotate(45)' }, [
+			el('rect', { x: '0', y: '0', width: '1.2', height: '1.2', fill: GROUND_HATCH.paper }),
+			el('rect', { x: '0', y: '0', width: '0.35', height: '1.2', fill: GROUND_HATCH.line })
+		])
+	];
+	const layerGroups: SvgElement[] = drawingOrder(artwork.layers).map((layer) => {
+		const look = lookOf(layer);
+		const dark = layer.shapes.filter((s) => s.polarity === 'dark').map((s) => shapeElement(s, look));
 		const clear = layer.shapes.filter((s) => s.polarity === 'clear');
-		const attrs: Record<string, string> = { id: `layer-${layer.id}`, 'data-layer-title': layer.title, opacity: style.opacity };
+		const attrs: Record<string, string> = { id: `layer-${layer.id}`, 'data-layer-title': layer.title, opacity: look.opacity };
 		if (clear.length) {
 			const maskId = `clear-${layer.id}`;
 			defs.push(
 				el('mask', { id: maskId, maskUnits: 'userSpaceOnUse', x: '0', y: '0', width: svgNumber(boardWidthMm), height: svgNumber(boardLengthMm) }, [
 					el('rect', { x: '0', y: '0', width: svgNumber(boardWidthMm), height: svgNumber(boardLengthMm), fill: '#ffffff' }),
-					...clear.map((s) => shapeElement(s, '#000000'))
+					...clear.map((s) => shapeElement(s, look, '#000000'))
 				])
 			);
 			attrs.mask = `url(#${maskId})`;
 		}
 		return el('g', attrs, dark);
 	});
+	// edges under the top copper, drawn dashed over it as hidden lines: buried coppers and what is cut out of a ground
+	const hidden = artwork.layers
+		.filter((l) => l.function.kind === 'copper' && l.function.copperIndex > 1)
+		.flatMap((l) => {
+			const look: LayerLook = { fill: null, stroke: isGround(l) ? GROUND_HATCH.line : lookOf(l).fill ?? INK, dash: '0.8 0.5', opacity: '1' };
+			return l.shapes
+				.filter((s) => (isGround(l) ? s.polarity === 'clear' : s.polarity === 'dark'))
+				.map((s) => shapeElement({ ...s, id: `hidden-${s.id}` }, look));
+		});
+	const hiddenEdges = el('g', { id: 'hidden-edges', 'data-layer-title': 'Edges under the top copper (dashed)' }, hidden);
+	const substrate = el('rect', { id: 'substrate', x: '0', y: '0', width: svgNumber(boardWidthMm), height: svgNumber(boardLengthMm), fill: SUBSTRATE });
 	const drills = el(
 		'g',
 		{ id: 'drills' },
-		artwork.drills.map((d) => el('circle', { id: d.id, cx: toSvgX(d.center[0]), cy: toSvgY(d.center[1]), r: svgNumber(d.diameterMm / 2), fill: '#ffffff', stroke: '#000000', 'stroke-width': '0.05' }))
+		artwork.drills.map((d) => el('circle', { id: d.id, cx: toSvgX(d.center[0]), cy: toSvgY(d.center[1]), r: svgNumber(d.diameterMm / 2), fill: '#ffffff', stroke: INK, 'stroke-width': '0.05' }))
 	);
 
-	const dims = el('g', { id: 'dimensions', stroke: '#202020', 'stroke-width': '0.1', fill: 'none', 'font-family': 'sans-serif' }, artwork.dimensions.map((d) => dimension(d, toSvgX, toSvgY)));
-
-	const { designName, revisionLabel, revisionDate } = meta;
-	const dielectric = artwork.stack.find((s) => s.kind === 'dielectric');
-	const copper = artwork.stack.find((s) => s.kind === 'copper');
-	const laminate = dielectric && dielectric.kind === 'dielectric'
-		? `εr ${dielectric.relativePermittivity}, tanδ ${dielectric.lossTangent}, h ${svgNumber(dielectric.thicknessMm)} mm, copper ${svgNumber((copper?.thicknessMm ?? 0) * 1000)} µm`
-		: '';
-	const tbY = boardLengthMm + 14;
-	const tbW = Math.max(boardWidthMm, 90);
-	const title = el('g', { id: 'title-block', 'font-family': 'sans-serif', fill: '#000000' }, [
-		el('rect', { x: '0', y: svgNumber(tbY), width: svgNumber(tbW), height: '22', fill: 'none', stroke: '#000000', 'stroke-width': '0.2' }),
-		el('text', { x: '2', y: svgNumber(tbY + 5.5), 'font-size': '4' }, [], designName),
-		el('text', { x: '2', y: svgNumber(tbY + 11), 'font-size': '3' }, [], `Revision ${revisionLabel} · ${revisionDate}`),
-		el('text', { x: '2', y: svgNumber(tbY + 16), 'font-size': '2.6' }, [], `Laminate: ${laminate}`),
-		el('text', { x: '2', y: svgNumber(tbY + 20.5), 'font-size': '2.6' }, [], `${artwork.metadata.shape} patch, ${artwork.metadata.feedKind} feed, ${svgNumber(artwork.metadata.frequencyHz / 1e9)} GHz · all sizes in mm`)
+	const sheet = buildDrawingSheet(artwork, meta, options);
+	const line = (s: DrawingSegment, extra: Record<string, string> = {}) => el('line', { x1: toSvgX(s[0][0]), y1: toSvgY(s[0][1]), x2: toSvgX(s[1][0]), y2: toSvgY(s[1][1]), ...extra });
+	const text = (l: DrawingLabel, extra: Record<string, string> = {}) => el('text', { x: toSvgX(l.baseline[0]), y: toSvgY(l.baseline[1]), 'font-size': svgNumber(l.heightMm), ...extra }, [], l.text);
+	const dims = el(
+		'g',
+		{ id: 'dimensions', stroke: INK, 'stroke-width': '0.13', fill: INK, 'font-family': FONT },
+		[
+			...sheet.dimensions.map((d, i) =>
+				el('g', { id: `dimension-${d.id}`, 'data-tier': String(d.tier) }, [
+					...d.extensions.map((s) => line(s, { 'stroke-width': '0.08', 'stroke-dasharray': '0.5 0.35' })),
+					line(d.line),
+					line(sheet.endMarks[2 * i]),
+					line(sheet.endMarks[2 * i + 1]),
+					text(d.label, { stroke: 'none' })
+				])
+			),
+			el('g', { id: 'datum-a' }, [...sheet.datum.segments.map((s) => line(s)), text(sheet.datum.label, { stroke: 'none' })])
+		]
+	);
+	const tb = sheet.titleBlock;
+	const title = el('g', { id: 'title-block', stroke: INK, 'stroke-width': '0.2', fill: INK, 'font-family': FONT }, [
+		...tb.rules.map((s) => line(s)),
+		...tb.labels.map((l, i) => text(l, { stroke: 'none', ...(i === 0 ? { 'font-weight': 'bold' } : {}) }))
 	]);
 
-	const m = SVG_MARGINS_MM;
-	const viewW = Math.max(boardWidthMm, tbW) + m.left + m.right;
-	const viewH = boardLengthMm + m.top + m.bottom;
+	const { minXMm, minYMm, maxXMm, maxYMm } = sheet.extent;
+	const viewW = maxXMm - minXMm;
+	const viewH = maxYMm - minYMm;
 	return {
 		widthMm: viewW,
 		heightMm: viewH,
-		viewBox: [-m.left, -m.top, viewW, viewH],
+		viewBox: [minXMm, boardLengthMm - maxYMm, viewW, viewH],
 		children: [
-			el('title', {}, [], `${designName} — revision ${revisionLabel}`),
+			el('title', {}, [], `${meta.designName} — revision ${meta.revisionLabel}`),
 			el('defs', {}, defs),
+			substrate,
 			...layerGroups,
+			hiddenEdges,
 			drills,
 			dims,
 			title
@@ -115,28 +163,5 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
 	};
 }
 
-/** A dimension line offset 6 mm to one side of the span, with extension lines, end ticks and its label. */
-function dimension(d: ArtworkDimension, toSvgX: (x: number) => string, toSvgY: (y: number) => string): SvgElement {
-	const off = 6;
-	const horizontal = d.side === 'above' || d.side === 'below';
-	const sign = d.side === 'above' || d.side === 'right' ? 1 : -1;
-	const a: Point = horizontal ? [d.from[0], d.from[1] + sign * off] : [d.from[0] + sign * off, d.from[1]];
-	const b: Point = horizontal ? [d.to[0], d.from[1] + sign * off] : [d.from[0] + sign * off, d.to[1]];
-	const mid: Point = [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
-	const label = `${d.label} ${svgNumber(d.valueMm)}`;
-	const tick = (p: Point) =>
-		horizontal
-			? el('line', { x1: toSvgX(p[0]), y1: toSvgY(p[1] - 1), x2: toSvgX(p[0]), y2: toSvgY(p[1] + 1) })
-			: el('line', { x1: toSvgX(p[0] - 1), y1: toSvgY(p[1]), x2: toSvgX(p[0] + 1), y2: toSvgY(p[1]) });
-	const textAttrs: Record<string, string> = horizontal
-		? { x: toSvgX(mid[0]), y: toSvgY(mid[1] + sign * 1.2 + (sign < 0 ? -1.5 : 0)), 'text-anchor': 'middle' }
-		: { x: toSvgX(mid[0] + sign * 1.2), y: toSvgY(mid[1]), 'text-anchor': sign > 0 ? 'start' : 'end' };
-	return el('g', { id: `dimension-${d.id}` }, [
-		el('line', { x1: toSvgX(d.from[0]), y1: toSvgY(d.from[1]), x2: toSvgX(a[0]), y2: toSvgY(a[1]), 'stroke-dasharray': '0.5 0.5' }),
-		el('line', { x1: toSvgX(d.to[0]), y1: toSvgY(d.to[1]), x2: toSvgX(b[0]), y2: toSvgY(b[1]), 'stroke-dasharray': '0.5 0.5' }),
-		el('line', { x1: toSvgX(a[0]), y1: toSvgY(a[1]), x2: toSvgX(b[0]), y2: toSvgY(b[1]) }),
-		tick(a),
-		tick(b),
-		el('text', { ...textAttrs, 'font-size': '2.5', fill: '#202020', stroke: 'none' }, [], label)
-	]);
-}
+/** Monospaced, so the layout's text widths hold in any viewer. */
+const FONT = 'DejaVu Sans Mono, Noto Sans Mono, monospace';

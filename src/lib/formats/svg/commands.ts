@@ -1,6 +1,6 @@
 // A typed SVG element tree: the drawing's meaning before svg.js writes it.
 
-export type SvgElementName = 'g' | 'path' | 'circle' | 'line' | 'rect' | 'text' | 'mask' | 'defs' | 'title' | 'desc';
+export type SvgElementName = 'g' | 'path' | 'circle' | 'line' | 'rect' | 'text' | 'mask' | 'pattern' | 'defs' | 'title' | 'desc';
 
 export interface SvgElement {
 	readonly name: SvgElementName;

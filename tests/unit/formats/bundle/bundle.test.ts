@@ -23,8 +23,12 @@ import { goldenBundle, goldenDesign, goldenMeta } from '../../../fixtures/bundle
  * Re-recorded for sweep JSON version 2 (issue 17): only design.sweep.json (formatVersion 2, the v2 schema URL, a base
  * of the applicable fields, each point's solverSetup) and the manifest naming its hash changed; every Gerber, drill,
  * DXF, SVG and the notes kept their bytes (checked file by file against the previous build).
+ * Re-recorded for the dimensioned drawing (issue 17, the drafter): only drawing.svg (dimensions in tiers, the probe
+ * position from datum A, sizes to 0.01 mm, the title block, masks as outlines), drawing.dxf (the same dimensions and
+ * title block on the layers FF-DIMENSIONS and FF-TITLE; the board layers' geometry unchanged) and the manifest naming
+ * their hashes changed; every Gerber, drill, sweep and the notes kept their bytes (the writer goldens, file by file).
  */
-const GOLDEN_SHA256 = '5ffdc93eb2d7be0f52ea65f10b6ed7fe49a26d5cc4449858c92d27d5fb718096';
+const GOLDEN_SHA256 = 'b18596d49d78eb20c8b30bf6ac7de32033d467f3fb15219c7fd5ac863d549cc5';
 const sha = (b: Uint8Array) => createHash('sha256').update(b).digest('hex');
 
 describe('export bundle', () => {

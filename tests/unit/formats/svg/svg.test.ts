@@ -7,6 +7,8 @@ import { buildArtwork } from '../../../../src/lib/artwork';
 import { createExportMeta } from '../../../../src/lib/formats/export-meta';
 import { buildSvgTree, toSvg, type SvgElement } from '../../../../src/lib/formats/svg';
 import { allShapeFeedCases, sizedCase } from '../../../fixtures/designs/design-cases';
+import { layeredCases } from '../../../fixtures/designs/layered-cases';
+import { size } from '../../../../src/lib/rf';
 
 const meta = createExportMeta({ designName: 'Sunroof GNSS', revisionLabel: 'B', revisionDate: '2026-11-20' });
 const cases = allShapeFeedCases.map((c) => ({ ...c, artwork: buildArtwork(sizedCase(c.shape, c.feed, { solderMask: true })) }));
@@ -82,14 +84,79 @@ describe('SVG writer', () => {
 		const a = buildArtwork(sizedCase('rectangular', 'inset'));
 		const text = toSvg(a, meta);
 		const doc = parseXml(text);
-		for (const id of ['patch-width', 'patch-length', 'inset-depth', 'feed-width', 'ground-width', 'ground-length']) {
+		for (const id of ['patch-width', 'patch-length', 'inset-depth', 'notch-gap', 'feed-width', 'ground-width', 'ground-length']) {
 			expect(doc.querySelectorAll(`g#dimension-${id}`).length).toBe(1);
+		}
+		// each label prints its value to 0.01 mm (no fab profile: the default resolution)
+		for (const d of a.dimensions) {
+			expect(doc.querySelector(`g#dimension-${d.id} text`)!.textContent).toBe(`${d.label} ${d.valueMm.toFixed(2)}`);
 		}
 		const block = doc.querySelector('g#title-block')!.textContent!;
 		expect(block).toContain('Sunroof GNSS');
 		expect(block).toContain('Revision B');
 		expect(block).toContain('2026-11-20');
 		expect(block).toContain('εr 3.55');
+		expect(block).toContain('scale 1:1');
+		expect(block).toContain('First-pass estimate — verify by simulation and measurement');
+	});
+
+	it('dimensions the probe centre from datum A, the board corner: x and y equal the drill centre', () => {
+		const a = buildArtwork(sizedCase('rectangular', 'probe'));
+		const doc = parseXml(toSvg(a, meta));
+		const [x, y] = a.drills[0].center;
+		expect(doc.querySelector('g#dimension-probe-x text')!.textContent).toBe(`xp ${x.toFixed(2)}`);
+		expect(doc.querySelector('g#dimension-probe-y text')!.textContent).toBe(`yp ${y.toFixed(2)}`);
+		expect(doc.querySelector('g#datum-a text')!.textContent).toBe('A');
+	});
+
+	it('prints sizes to the resolution it is given', () => {
+		const a = buildArtwork(sizedCase('circular', 'edge'));
+		const doc = parseXml(toSvg(a, meta, { resolutionMm: 0.001 }));
+		expect(doc.querySelector('g#dimension-patch-diameter text')!.textContent).toMatch(/^D \d+\.\d{3}$/);
+	});
+
+	it('draws mask openings as dashed outlines over full-colour copper, never a tint', () => {
+		const a = buildArtwork(sizedCase('rectangular', 'inset', { solderMask: true }));
+		const doc = parseXml(toSvg(a, meta));
+		const mask = doc.querySelector('g#layer-mask-top')!;
+		expect(mask.getAttribute('opacity')).toBe('1');
+		for (const s of Array.from(mask.querySelectorAll('path, circle'))) {
+			expect(s.getAttribute('fill')).toBe('none');
+			expect(s.getAttribute('stroke-dasharray')).not.toBeNull();
+		}
+		const copper = doc.querySelector('g#layer-copper-top')!;
+		expect(copper.getAttribute('opacity')).toBe('1');
+		expect(copper.querySelector('path#patch')!.getAttribute('fill')).toBe('#d98f55');
+		// the ground is hatched, and drawn before (under) the top copper
+		const groups = Array.from(doc.querySelectorAll('g')).map((g) => g.getAttribute('id'));
+		expect(groups.indexOf('layer-copper-bottom')).toBeLessThan(groups.indexOf('layer-copper-top'));
+		expect(doc.querySelector('g#layer-copper-bottom path#ground')!.getAttribute('fill')).toBe('url(#ground-hatch)');
+	});
+
+	it('keeps a top copper over buried ones opaque and draws what lies under it as dashed hidden edges', () => {
+		const a = buildArtwork(size(layeredCases.find((c) => c.name === 'aperture-coupled patch')!.doc));
+		const doc = parseXml(toSvg(a, meta));
+		expect(doc.querySelector('g#layer-copper-top')!.getAttribute('opacity')).toBe('1');
+		const hidden = doc.querySelector('g#hidden-edges')!;
+		// the feed line on the bottom copper and the slot cut out of the inner ground
+		for (const id of ['hidden-feed-line', 'hidden-coupling-slot']) {
+			const edge = hidden.querySelector(`#${id}`)!;
+			expect(edge.getAttribute('fill')).toBe('none');
+			expect(edge.getAttribute('stroke-dasharray')).not.toBeNull();
+		}
+		// the ground itself is no hidden edge, and the hidden edges come after every layer
+		expect(hidden.querySelector('#hidden-ground')).toBeNull();
+		const groups = Array.from(doc.querySelectorAll('g')).map((g) => g.getAttribute('id'));
+		for (const layer of a.layers) expect(groups.indexOf(`layer-${layer.id}`)).toBeLessThan(groups.indexOf('hidden-edges'));
+	});
+
+	it('draws a layer of a kind it does not know as an outline group of its own', () => {
+		const a = buildArtwork(sizedCase('rectangular', 'edge'));
+		const extra = { id: 'legend-top', title: 'Legend', function: { kind: 'legend', side: 'top' }, voids: [], shapes: [{ id: 'mark', role: 'profile', polarity: 'dark', geometry: { kind: 'circle', center: [2, 2], diameterMm: 1 } }] };
+		const doc = parseXml(toSvg({ ...a, layers: [...a.layers, extra] } as unknown as typeof a, meta));
+		const circle = doc.querySelector('g#layer-legend-top circle#mark')!;
+		expect(circle.getAttribute('fill')).toBe('none');
+		expect(circle.getAttribute('stroke')).not.toBeNull();
 	});
 
 	it('flips y once: the feed, at y = 0 on the board, sits at the bottom of the drawing', () => {
