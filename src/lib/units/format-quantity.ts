@@ -61,6 +61,12 @@ export function formatGhz(frequencyHz: number): string {
 /** A length in mm as a number in `unit`, with `digits` significant figures (29.442 mm, 1159.1 mil). */
 export const formatLengthNumber = (mm: number, unit: LengthUnit, digits = 5): string => formatSignificant(lengthInUnit(mm, unit), digits);
 
+/**
+ * A small length (a fab rule, a tolerance) as a number in `unit`, trailing zeros dropped: mm to four significant figures
+ * (0.15, 0.075, 0.2032), mil to three (5.91, 8, 2.95: a tenth of a mil is finer than a board house works to).
+ */
+export const formatLengthCompact = (mm: number, unit: LengthUnit): string => formatTrimmed(lengthInUnit(mm, unit), unit === 'mil' ? 3 : 4);
+
 /** A length in mm as text with its symbol in `unit`: "0.150 mm", "5.91 mil". */
 export const formatLength = (mm: number, unit: LengthUnit, digits = 5): string => `${formatLengthNumber(mm, unit, digits)} ${lengthSymbol(unit)}`;
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatConductivity, formatCopper, formatGhz, formatLength, formatLossTangent, formatPermittivity, formatPowerOfTen, formatSignificant, formatTrimmed } from '../../../src/lib/units';
+import { formatConductivity, formatLengthCompact, formatCopper, formatGhz, formatLength, formatLossTangent, formatPermittivity, formatPowerOfTen, formatSignificant, formatTrimmed } from '../../../src/lib/units';
 
 describe('formatSignificant and formatTrimmed', () => {
 	// Each case: value, significant figures, text (rounding half away from zero as Number.prototype.toFixed does, ECMA-262 §21.1.3.3).
@@ -59,5 +59,13 @@ describe('physical values with sensible figures', () => {
 		expect(formatCopper(35, 'oz')).toBe('1 oz');
 		expect(formatCopper(17.5, 'oz')).toBe('0.5 oz');
 		expect(formatCopper(18, 'oz')).toBe('0.51 oz');
+	});
+
+	it('writes fab rules compactly: mm as stored, mil to three figures', () => {
+		expect(formatLengthCompact(0.15, 'mm')).toBe('0.15');
+		expect(formatLengthCompact(0.2032, 'mm')).toBe('0.2032');
+		expect(formatLengthCompact(0.2032, 'mil')).toBe('8');
+		expect(formatLengthCompact(0.15, 'mil')).toBe('5.91');
+		expect(formatLengthCompact(0.075, 'mil')).toBe('2.95');
 	});
 });
