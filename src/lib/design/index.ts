@@ -2,6 +2,7 @@
 export { prepare, prepareSized, gate, writeFiles, readBack, holdsFabFiles, bundle, type PreparedDesign, type WriteOptions } from './pipeline';
 export { sizeDocument, type SizingOutcome } from './live-sizing';
 export * from './design-form-fields';
+export * from './form-units';
 export * from './derived-quantities';
 export { revisionSummary } from './revision-summary';
 export { revisionTree, type TreeRevision, type TreeRow } from './revision-tree';
