@@ -1,6 +1,6 @@
 // The editor's form in the person's display units: lengths in mm or mil, copper foil in µm or oz. The form's text is in
 // those units (or names its own: "8 mil"); the document built from it is always in mm and µm.
-import { copperFormText, copperSymbol, lengthFormText, lengthSymbol, parseCopperUm, parseLengthMm, DEFAULT_DISPLAY_UNITS, isCopperUnit, isLengthUnit, type DisplayUnits } from '../units';
+import { copperFormText, copperSymbol, formatTrimmed, lengthFormText, milFromMm, ozFromUm, lengthSymbol, parseCopperUm, parseLengthMm, DEFAULT_DISPLAY_UNITS, isCopperUnit, isLengthUnit, type DisplayUnits } from '../units';
 import { designFormFields, type FieldIssue, type FormField, type FormValues } from './design-form-fields';
 
 /** The hidden controls that say which units a posted editor form was typed in. */
@@ -55,4 +55,21 @@ export function displayUnitsOfFormData(data: FormData): DisplayUnits {
 	const length = data.get(LENGTH_UNIT_FIELD);
 	const copper = data.get(COPPER_UNIT_FIELD);
 	return { length: isLengthUnit(length) ? length : DEFAULT_DISPLAY_UNITS.length, copper: isCopperUnit(copper) ? copper : DEFAULT_DISPLAY_UNITS.copper };
+}
+
+/**
+ * Issues as the person reads them: a length field's range (stated in mm, with or without the symbol) restated in mil
+ * when they read mil ("allowed range [0.1, 10]" → "allowed range [3.94, 394] mil"), a foil field's µm range in oz;
+ * other messages, and everything for a person in mm and µm, unchanged.
+ */
+export function issuesInUnits(issues: readonly FieldIssue[], units: DisplayUnits): FieldIssue[] {
+	return issues.map((issue) => {
+		const q = quantityOf(issue.field);
+		const restate = q === 'length' && units.length === 'mil' ? { from: 'mm', to: 'mil', convert: milFromMm } : q === 'copper' && units.copper === 'oz' ? { from: 'µm', to: 'oz', convert: ozFromUm } : null;
+		if (!restate) return issue;
+		// the schema states ranges in the stored unit, with or without its symbol
+		const range = new RegExp(String.raw`allowed range ([[(])([-\d.e+]+), ([-\d.e+]+)([\])])(?: ${restate.from})?`);
+		const message = issue.message.replace(range, (_m, open, lo, hi, close) => `allowed range ${open}${formatTrimmed(restate.convert(Number(lo)), 3)}, ${formatTrimmed(restate.convert(Number(hi)), 3)}${close} ${restate.to}`);
+		return { ...issue, message };
+	});
 }

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { displayUnitsOfFormData, documentFromFormValues, fieldUnitLabel, formValuesFromInput, formValuesInStoredUnits, formValuesInUnits, designFormFields } from '../../../src/lib/design';
+import { displayUnitsOfFormData, issuesInUnits, documentFromFormValues, fieldUnitLabel, formValuesFromInput, formValuesInStoredUnits, formValuesInUnits, designFormFields } from '../../../src/lib/design';
 import { parseDesignInput } from '../../../src/lib/schemas';
 import { layeredCases } from '../../fixtures/designs/layered-cases';
 
@@ -76,5 +76,24 @@ describe('the editor form in the person’s units', () => {
 		expect(displayUnitsOfFormData(data)).toEqual({ length: 'mil', copper: 'oz' });
 		data.set('lengthUnit', 'furlong');
 		expect(displayUnitsOfFormData(data).length).toBe('mm');
+	});
+
+	// 1000 mm / 0.0254 = 39 370 mil, 30.591 mm = 1204 mil, 100 mm = 3937 mil; 210 µm / 35 = 6 oz (NIST SP 811 B.9; 35 µm/oz common practice, no source)
+	it('restates a length field’s range in mil and a foil field’s in oz, and nothing for a person in mm', () => {
+		const issues = [
+			{ field: 'groundMarginMm', message: 'allowed range [0, 1000]' },
+			{ field: 'substrate.heightMm', message: 'must be less than λ0/4 = 30.591 mm at this frequency; allowed range (0, 30.591)' },
+			{ field: 'stack.1.heightMm', message: 'allowed range (0, 100] mm' },
+			{ field: 'substrate.copperThicknessUm', message: 'allowed range [1, 210]' },
+			{ field: 'targetImpedanceOhm', message: 'allowed range (0, 500]' }
+		];
+		expect(issuesInUnits(issues, { length: 'mil', copper: 'oz' }).map((i) => i.message)).toEqual([
+			'allowed range [0, 39370] mil',
+			'must be less than λ0/4 = 30.591 mm at this frequency; allowed range (0, 1204) mil',
+			'allowed range (0, 3937] mil',
+			'allowed range [0.0286, 6] oz',
+			'allowed range (0, 500]'
+		]);
+		expect(issuesInUnits(issues, { length: 'mm', copper: 'um' })).toEqual(issues);
 	});
 });
