@@ -80,6 +80,10 @@ test('a designer reads and types lengths in mil and foil in oz; everything is st
 	expect(input.substrate.heightMm).toBe(1.6);
 	expect(input.substrate.copperThicknessUm).toBe(35);
 
+	// The design's history names shape and feed and gives the patch size in mil
+	await page.goto(`/designs/${designId}`);
+	await expect(page.locator('main')).toContainText(/2\.450 GHz · Rectangular · Inset microstrip feed · \d+\.\d × \d+\.\d mil · εr 4\.4/);
+
 	// The fab-profile form in mil: "8 mil" is stored as 0.2032 mm (8 × 0.0254)
 	const profileName = `Eight mil house ${seeded.suffix}`;
 	await page.goto('/fab-profiles');
