@@ -1,14 +1,17 @@
 import { describe, expect, it } from 'vitest';
-import { choiceName, feedNames, handednessNames, probeModelNames, revisionPageLabel, revisionPages, shapeNames } from '../../../src/lib/design';
+import { backMountNames, choiceName, feedNames, launchKindNames, handednessNames, probeModelNames, revisionPageLabel, revisionPages, shapeNames } from '../../../src/lib/design';
 import { allFeedKinds, handednesses, patchShapes, probeModels } from '../../../src/lib/schemas';
+import { backMounts, launchKinds } from '../../../src/lib/schemas/launch';
 
 describe('the one table of names', () => {
-	it('names every shape, feed, polarisation sense and probe model, each name once', () => {
+	it('names every shape, feed, polarisation sense, probe model, launch and mount, each name once', () => {
 		for (const [ids, names] of [
 			[patchShapes, shapeNames],
 			[allFeedKinds, feedNames],
 			[handednesses, handednessNames],
-			[probeModels, probeModelNames]
+			[probeModels, probeModelNames],
+			[launchKinds, launchKindNames],
+			[backMounts, backMountNames]
 		] as const) {
 			const table = names as Record<string, string>;
 			expect(Object.keys(table).sort()).toEqual([...ids].sort());
