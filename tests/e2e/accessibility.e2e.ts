@@ -50,6 +50,7 @@ function signedInPaths(): string[] {
 		`/teams/${seeded.teamId}`,
 		'/laminates',
 		'/fab-profiles',
+		'/settings',
 		'/settings/tokens',
 		'/api/docs',
 		'/no-such-page'

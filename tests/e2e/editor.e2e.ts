@@ -43,7 +43,7 @@ test('editing the frequency updates the preview live, saves revision B from A, a
 	await page.getByRole('button', { name: 'Save as new revision' }).click();
 	await page.waitForURL(new RegExp(`/designs/${designId}/r/B$`));
 	await expect(page.getByRole('heading', { level: 1 })).toContainText('rev B');
-	await expect(page.locator('[data-input="frequencyGHz"] td').first()).toHaveText('2.2');
+	await expect(page.locator('[data-input="frequencyGHz"] td').first()).toHaveText('2.200'); // every frequency in GHz with the same three decimals (units/format-quantity.ts)
 
 	// A second save from A (a colleague's retune) forks the history instead of replacing B.
 	await page.goto(`/designs/${designId}/edit?from=A`);

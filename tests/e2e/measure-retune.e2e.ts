@@ -71,7 +71,7 @@ test('upload → plot with the resonance → confirm the retune → a new revisi
 	await expect(page.getByTestId('retuned-from')).toContainText('of A');
 	await page.screenshot({ path: '/work/shots/exportlog-retuned-revision.png', fullPage: true });
 	// B's measurements: nothing uploaded yet, and the picker is empty.
-	await page.getByRole('link', { name: 'Measured S11 and retune' }).click();
+	await page.getByRole('link', { name: 'Measured S11' }).click();
 	await page.waitForURL((url) => url.pathname === `/designs/${designId}/r/B/measurements`);
 	await expect(page.getByText('No measurements of this revision yet.')).toBeVisible();
 	await expect(page.getByLabel('Touchstone file')).toHaveValue('');

@@ -66,7 +66,7 @@ const LOCAL_DIMENSIONS = new Set(['inset-depth']);
  * Every dimension in screen coordinates. Outer ones are stacked per side of the board, the shortest
  * nearest the edge, `stepMm` apart, so their lines and texts never overlap.
  */
-export function previewDimensions(dims: readonly ArtworkDimension[], board: { widthMm: number; lengthMm: number }, stepMm: number): PreviewDimension[] {
+export function previewDimensions(dims: readonly ArtworkDimension[], board: { widthMm: number; lengthMm: number }, stepMm: number, formatMm: (mm: number) => string = (mm) => mm.toFixed(2)): PreviewDimension[] {
 	const L = board.lengthMm;
 	const rank = new Map<string, number>();
 	for (const side of ['above', 'below', 'left', 'right'] as const) {
@@ -103,7 +103,7 @@ export function previewDimensions(dims: readonly ArtworkDimension[], board: { wi
 			textX: (x1 + x2) / 2 + (vertical ? dx * textGap : 0),
 			textY: (y1 + y2) / 2 + (vertical ? 0 : dy * textGap),
 			vertical,
-			text: `${dim.label} ${dim.valueMm.toFixed(2)}`
+			text: `${dim.label} ${formatMm(dim.valueMm)}`
 		};
 	});
 }

@@ -9,6 +9,7 @@ export * from './plain-text';
 export * from './revision-note';
 export * from './waiver-reason';
 export * from './reflection-sample';
+export * from './display-units';
 import { designInputSchema, type DesignInput } from './design-input';
 import { parseWith } from './input-error';
 

@@ -24,3 +24,7 @@ export const powerRatioFromDb = (db: number): number => 10 ** (db / 10);
 
 /** Free-space wavelength λ0 in millimetres at a frequency in hertz. */
 export const freeSpaceWavelengthMm = (frequencyHz: number): number => mmFromM(SPEED_OF_LIGHT_M_PER_S / frequencyHz);
+
+export * from './display-units';
+export * from './parse-quantity';
+export * from './format-quantity';

@@ -13,3 +13,4 @@ export { formFailure, formFields, withoutSecrets, type FormProblem } from './for
 export { runTeamChange, teamChangeForms, type TeamChangeForm, type TeamChangeDone } from './team-changes';
 export { takeSignInAttempt, settleSuccessfulSignIn, clearSignInFailures, takeResetMailAllowance, takeInviteAllowance, THROTTLE_LIMITS, type Throttle } from './attempt-throttle';
 export { registerAccount, confirmEmail, resendEmailConfirmation, isEmailConfirmed, CONFIRM_LINK_LIFETIME_MS, type Registration } from './email-confirmation';
+export { findDisplayUnits, setDisplayUnits } from './display-units';

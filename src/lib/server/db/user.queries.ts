@@ -34,3 +34,11 @@ export async function deleteSessionsByUser(db: Kysely<Database>, userId: string)
 	const result = await db.deleteFrom('user_session').where('user_id', '=', userId).executeTakeFirst();
 	return Number(result.numDeletedRows);
 }
+
+export async function findDisplayUnitsById(db: Kysely<Database>, id: string) {
+	return db.selectFrom('app_user').select(['length_unit', 'copper_unit']).where('id', '=', id).executeTakeFirst();
+}
+
+export async function updateDisplayUnitsById(db: Kysely<Database>, id: string, units: { length_unit: string; copper_unit: string }): Promise<void> {
+	await db.updateTable('app_user').set(units).where('id', '=', id).execute();
+}

@@ -1,7 +1,7 @@
 // The editor's server side: it starts from exactly the revision named by ?from= (never a guess: without it, the design's
 // history to pick from); saving the form makes a new revision of it and goes there.
 import { error, fail, redirect } from '@sveltejs/kit';
-import { documentFromFormValues, fieldIssues, formValuesFromFormData } from '../../design';
+import { displayUnitsOfFormData, documentFromFormValues, fieldIssues, formValuesFromFormData, formValuesInStoredUnits, issuesInUnits } from '../../design';
 import { copperLayerCountOf, InputError } from '../../schemas';
 import { getDb } from '../db';
 import { listFabProfiles, matchingFabProfileId, resolveFabProfileChoice, revisionFabProfile } from '../fab-profiles';
@@ -32,13 +32,19 @@ export async function saveEditorForm(event: AccessEvent & { request: Request }, 
 	const values = formValuesFromFormData(data);
 	const note = String(data.get('note') ?? '');
 	const from = String(data.get('from') ?? '');
+	// the form's lengths and foil are in the units it was shown in (mm and µm unless it says otherwise)
+	const units = displayUnitsOfFormData(data);
+	const stored = formValuesInStoredUnits(values, units);
 	try {
-		const raw = documentFromFormValues(values);
+		const raw = documentFromFormValues(stored.values);
 		const fabProfile = await resolveFabProfileChoice(getDb(), design.teamId, String(data.get('fabProfileId') ?? '') || null, raw);
 		const saved = await saveRevision(getDb(), { designId: design.id, parentLabel: from, userId: user.id, raw, note, fabProfile });
 		redirect(303, `/designs/${design.id}/r/${saved.label}`);
 	} catch (err) {
-		if (err instanceof InputError) return fail(400, { values, note, issues: fieldIssues(err.issues) });
+		if (err instanceof InputError) {
+			const unreadable = new Set(stored.issues.map((i) => i.field));
+			return fail(400, { values, note, issues: [...stored.issues, ...issuesInUnits(fieldIssues(err.issues), units).filter((i) => !unreadable.has(i.field))] });
+		}
 		throw err;
 	}
 }

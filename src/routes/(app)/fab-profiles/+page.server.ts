@@ -2,11 +2,12 @@
 import { fail } from '@sveltejs/kit';
 import { authorize, can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
-import { requireUser } from '$lib/server/accounts';
+import { findDisplayUnits, requireUser } from '$lib/server/accounts';
 import { requireTeamRole } from '$lib/server/designs/design-access';
 import { addFabProfile, listFabProfiles } from '$lib/server/fab-profiles';
 import { currentTeam } from '$lib/server/teams/current-team';
 import { InputError } from '$lib/schemas';
+import { isLengthUnit, parseLengthMm } from '$lib/units';
 import type { Actions, PageServerLoad } from './$types';
 
 const lengthKeys = ['minTraceWidthMm', 'minSpacingMm', 'minDrillMm', 'minAnnularRingMm', 'copperToEdgeMm', 'minSlotWidthMm', 'etchToleranceMm', 'platedDrillToleranceMm', 'nonPlatedDrillToleranceMm'] as const;
@@ -30,9 +31,13 @@ export const actions: Actions = {
 		const { user } = await requireTeamRole(event, teamId, 'fab-profile.write');
 		const values = Object.fromEntries(['name', ...lengthKeys, ...processKeys].map((k) => [k, String(data.get(k) ?? '')]));
 		const num = (t: string) => (t.trim() === '' ? undefined : Number(t));
+		// Lengths: a bare number is in the unit the form was shown in (the person's), "8 mil" or "0.2 mm" say their own.
+		const posted = data.get('lengthUnit');
+		const unit = isLengthUnit(posted) ? posted : (await findDisplayUnits(user.id)).length;
+		const lengths = Object.fromEntries(lengthKeys.map((k) => [k, values[k].trim() === '' ? undefined : parseLengthMm(values[k], unit)]));
 		const raw = {
 			name: values.name,
-			...Object.fromEntries(lengthKeys.map((k) => [k, num(values[k])])),
+			...Object.fromEntries(lengthKeys.map((k) => [k, lengths[k] === undefined ? undefined : lengths[k].ok ? lengths[k].value : Number.NaN])),
 			maxCopperLayers: num(values.maxCopperLayers),
 			boardThicknessTolerancePercent: num(values.boardThicknessTolerancePercent),
 			mixedCores: values.mixedCores === 'on',
@@ -42,7 +47,14 @@ export const actions: Actions = {
 			const added = await addFabProfile(getDb(), { teamId, userId: user.id, raw });
 			return { added: added.profile.name };
 		} catch (err) {
-			if (err instanceof InputError) return fail(400, { values, issues: err.issues.map((i) => ({ path: i.path, message: i.message })) });
+			if (err instanceof InputError) {
+				// text the parser refused says why, then the range the schema allows
+				const message = (path: string, schemaMessage: string) => {
+					const parsed = lengths[path];
+					return parsed && !parsed.ok ? `${parsed.message}; ${schemaMessage.replace(/^must be a finite number; /, '')}` : schemaMessage;
+				};
+				return fail(400, { values, issues: err.issues.map((i) => ({ path: i.path, message: message(i.path, i.message) })) });
+			}
 			throw err;
 		}
 	}
