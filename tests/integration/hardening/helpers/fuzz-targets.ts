@@ -132,6 +132,7 @@ export function fuzzTargets(ws: HardeningWorkspace): FuzzTarget[] {
 		{ name: 'POST /confirm?/resend', kind: 'action', requests: post('/confirm?/resend', formBodies([]), editor) },
 		{ name: 'POST /confirm/[token]', kind: 'action', requests: fc.tuple(hostileSegment, formBodies([])).map(([t, b]): FuzzRequest => ({ method: 'POST', path: `/confirm/${t}`, caller: anonymous, ...b })) },
 		{ name: 'POST /laminates?/add', kind: 'action', requests: post('/laminates?/add', formBodies(laminateFormNames).map((b) => (b.form ? { form: { teamId: a.teamId, ...b.form } } : b)), editor) },
+		{ name: 'POST /settings?/units', kind: 'action', requests: post('/settings?/units', formBodies(['length', 'copper']), editor) },
 		{ name: 'POST /settings/tokens?/create', kind: 'action', requests: post('/settings/tokens?/create', formBodies(['name']), editor) },
 		{ name: 'POST /settings/tokens?/revoke', kind: 'action', requests: post('/settings/tokens?/revoke', formBodies(['tokenId']), editor) }
 	];
