@@ -7,8 +7,13 @@ import { buildLayeredStack, buildStack } from './build-stack';
 import { buildExtendedArtwork } from './build-extended-artwork';
 import { profileLayer } from './profile-layer';
 import { buildTopCopper } from './build-top-copper';
+import { withLegend } from './build-legend';
+import { withMountingHoles } from './build-mounting-holes';
 import { probeModelOf } from './probe-model';
 import type { Artwork, ArtworkDrill, ArtworkLayer, ArtworkShape } from './types';
+
+/** Top copper left under the mask when it covers the patch: the radiating copper. */
+const COVERED_ROLES: readonly ArtworkShape['role'][] = ['patch', 'notch', 'tuning-stub'];
 
 /** Pen width for the board profile line: the outline is its centre line; width only makes it visible. */
 
@@ -18,7 +23,8 @@ import type { Artwork, ArtworkDrill, ArtworkLayer, ArtworkShape } from './types'
  */
 export function buildArtwork(sized: SizedDesign): Artwork {
 	artworkBuilds += 1;
-	return drawArtwork(sized);
+	// the user's mounting holes, then the legend, which keeps clear of them
+	return withLegend(withMountingHoles(drawArtwork(sized), sized), sized);
 }
 
 /** Artworks built so far by this module instance (one per thread): lets a worker task report what it drew. */
@@ -55,7 +61,9 @@ function drawArtwork(sized: SizedDesign): Artwork {
 	];
 	if (sized.input.solderMask) {
 		// Mask off the antenna: solder mask over the patch would shift its resonance (common practice, no source).
-		const topOpenings = top.shapes.map((s): ArtworkShape => ({ ...s, id: `mask-top-${s.id}`, role: 'mask-opening', polarity: 'dark' }));
+		// Covered (maskCoverage "covered"): the patch stays under the mask, the sizing has allowed for it, and only the feed is opened.
+		const covered = sized.input.maskCoverage === 'covered';
+		const topOpenings = top.shapes.filter((s) => !(covered && COVERED_ROLES.includes(s.role))).map((s): ArtworkShape => ({ ...s, id: `mask-top-${s.id}`, role: 'mask-opening', polarity: 'dark' }));
 		const bottomOpenings: ArtworkShape[] = drills.map((d) => ({
 			id: `mask-bottom-${d.id}`,
 			role: 'mask-opening',

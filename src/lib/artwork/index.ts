@@ -8,3 +8,6 @@ export { copperLayerIds } from './build-stack';
 export { translateShape } from './translate-shape';
 export { DEFAULT_PLATING_THICKNESS_UM, probeModelOf } from './probe-model';
 export { layoutCorporateFeed, pieceShape, type CorporateFeedLayout, type NetworkPiece } from './build-corporate-feed';
+export { stampLegend, revisionLegendText, shapeBounds, LEGEND_STROKE_WIDTH_MM, LEGEND_TEXT_HEIGHT_MM, LEGEND_PATCH_KEEP_OUT_HEIGHTS, LEGEND_LAUNCH_KEEP_OUT } from './build-legend';
+export { MOUNTING_HOLE_KEEP_OUT_HEIGHTS, MOUNTING_HOLE_COPPER_PULLBACK_MM, mountingHoleKeepOutMm } from './build-mounting-holes';
+export { STROKE_GLYPHS, STROKE_FONT_CHARACTERS, textStrokes, textWidthMm } from './stroke-font';

@@ -7,6 +7,8 @@ import { checkEdgeClearance } from './check-edge-clearance';
 import { checkSlotWidth } from './check-slot-width';
 import { checkStackBuild } from './check-stack-build';
 import { checkTraceWidth } from './check-trace-width';
+import { checkLegendClearance, checkLegendEdge, checkLegendWidth } from './check-legend';
+import { checkMountingHoles } from './check-mounting-holes';
 import type { Violation } from './violation';
 
 /** Every violation of the profile, grouped by rule in a fixed order; empty when the artwork is buildable. */
@@ -18,6 +20,10 @@ export function checkArtwork(artwork: Artwork, profile: FabProfile): Violation[]
 		...checkDrillSize(artwork, profile),
 		...checkAnnularRing(artwork, profile),
 		...checkEdgeClearance(artwork, profile),
-		...checkSlotWidth(artwork, profile)
+		...checkSlotWidth(artwork, profile),
+		...checkMountingHoles(artwork, profile),
+		...checkLegendWidth(artwork, profile),
+		...checkLegendEdge(artwork, profile),
+		...checkLegendClearance(artwork, profile)
 	];
 }

@@ -6,6 +6,8 @@ export { checkDrillSize, checkAnnularRing } from './check-drills';
 export { checkEdgeClearance, FLUSH_TO_EDGE_ROLES } from './check-edge-clearance';
 export { checkSlotWidth } from './check-slot-width';
 export { checkStackBuild } from './check-stack-build';
+export { checkLegendWidth, checkLegendEdge, checkLegendClearance } from './check-legend';
+export { checkMountingHoles } from './check-mounting-holes';
 export { DRC_RULE_IDS, type DrcRuleId, type Violation } from './violation';
 export { boundaryPieces, type BoundaryPiece } from './boundary-piece';
 export { closestPair, type ClosestPair } from './piece-distance';

@@ -12,7 +12,8 @@ export type GeometryErrorCode =
 	/** A corporate-feed arm too short for its λg/4 transformer. */
 	| 'network-arm-too-short'
 	/** The corporate feed would pass too close to an element. */
-	| 'feed-network-crowded';
+	| 'feed-network-crowded'
+	| 'mounting-hole-outside-board';
 
 export class GeometryError extends Error {
 	readonly name = 'GeometryError';

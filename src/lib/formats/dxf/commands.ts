@@ -10,5 +10,5 @@ export interface DxfVertex {
 export type DxfCommand =
 	/** A layer with an AutoCAD colour index (1 red … 7 white). */
 	| { readonly type: 'layer'; readonly name: string; readonly colorIndex: number }
-	| { readonly type: 'polyline'; readonly layer: string; readonly vertices: readonly DxfVertex[]; readonly closed: true }
+	| { readonly type: 'polyline'; readonly layer: string; readonly vertices: readonly DxfVertex[]; readonly closed: boolean }
 	| { readonly type: 'circle'; readonly layer: string; readonly center: Point; readonly radiusMm: number };

@@ -13,7 +13,8 @@ const STYLE: Record<string, { fill: string; opacity: string }> = {
 	'copper-bottom': { fill: '#5a7fa8', opacity: '0.35' },
 	'copper-inner-1': { fill: '#8a5a9e', opacity: '0.55' },
 	'mask-top': { fill: '#2e8b57', opacity: '0.3' },
-	'mask-bottom': { fill: '#2e8b57', opacity: '0.3' }
+	'mask-bottom': { fill: '#2e8b57', opacity: '0.3' },
+	'legend-top': { fill: '#4a4a4a', opacity: '1' }
 };
 
 /** Fixed number format: 4 decimals (0.1 µm), no trailing zeros, no "-0". */
@@ -33,6 +34,7 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
 	const toSvgY = (y: number) => svgNumber(boardLengthMm - y);
 	const toSvgPoint = (p: Point) => `${toSvgX(p[0])} ${toSvgY(p[1])}`;
 
+	const strokePathOf = (points: readonly Point[]): string => points.map((p, i) => `${i === 0 ? 'M' : 'L'}${toSvgPoint(p)}`).join('');
 	const pathOf = (c: Contour): string => {
 		let d = `M${toSvgPoint(c.start)}`;
 		let from = c.start;
@@ -51,6 +53,7 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta): SvgDocument {
 	const shapeElement = (s: ArtworkShape, fill: string): SvgElement => {
 		const g = s.geometry;
 		if (g.kind === 'circle') return el('circle', { id: s.id, cx: toSvgX(g.center[0]), cy: toSvgY(g.center[1]), r: svgNumber(g.diameterMm / 2), fill });
+		if (g.kind === 'stroke') return el('path', { id: s.id, d: strokePathOf(g.points), fill: 'none', stroke: fill, 'stroke-width': svgNumber(g.strokeWidthMm), 'stroke-linecap': 'round', 'stroke-linejoin': 'round' });
 		if (g.kind === 'outline') return el('path', { id: s.id, d: pathOf(g.contour), fill: 'none', stroke: '#000000', 'stroke-width': svgNumber(g.strokeWidthMm) });
 		return el('path', { id: s.id, d: [g.region.outer, ...g.region.holes].map(pathOf).join(''), fill, 'fill-rule': 'evenodd' });
 	};
