@@ -138,8 +138,8 @@ const TOP_COPPER = '#d98f55';
 const INNER_COPPER = '#b0622b';
 const BOTTOM_COPPER = '#6e3a17';
 const GROUND = '#8594a8';
-/** Legend ink: an off-white, drawn over everything else. */
-const LEGEND_INK = '#f3efe2';
+/** Legend ink: a dark plum that reads on the light substrate, drawn over everything else. */
+const LEGEND_INK = '#2b2140';
 
 /** What a copper layer carries, in words: "ground", "patch", "patch + feed", "feed", "parasitic patch". */
 function copperContents(layer: ArtworkLayer): string {

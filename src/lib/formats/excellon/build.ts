@@ -28,7 +28,10 @@ export function buildExcellonCommands(artwork: Artwork, plated: boolean, meta: E
 	const diameters = [...new Set(drills.map((d) => d.diameterMm.toFixed(3)))].sort((a, b) => Number(a) - Number(b));
 	const toolOf = new Map(diameters.map((d, i) => [d, i + 1]));
 	for (const d of diameters) {
-		out.push({ type: 'attribute', name: 'TA.AperFunction', values: plated ? ['Plated', 'PTH', 'ComponentDrill'] : ['NonPlated', 'NPTH', 'ComponentDrill'] });
+		// a tool holding only mounting holes drills them for a screw: MechanicalDrill (Gerber Layer Format Specification, drill aperture functions, from memory)
+		const mechanical = drills.filter((h) => h.diameterMm.toFixed(3) === d).every((h) => h.role === 'mounting');
+		const use = mechanical ? 'MechanicalDrill' : 'ComponentDrill';
+		out.push({ type: 'attribute', name: 'TA.AperFunction', values: plated ? ['Plated', 'PTH', use] : ['NonPlated', 'NPTH', use] });
 		out.push({ type: 'define-tool', tool: toolOf.get(d)!, diameterMm: Number(d) });
 	}
 	out.push({ type: 'header-end' }, { type: 'absolute' }, { type: 'drill-mode' });
