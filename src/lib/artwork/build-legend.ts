@@ -119,35 +119,41 @@ function polarisationMark(sized: SizedDesign, h: number): Block {
 	const label = hand ? hand.toUpperCase() : 'LP';
 	const sign = h;
 	const gap = 0.5 * h;
-	const draw = (): Polyline[] => {
-		const r = sign / 2;
-		const c: Point = [r, r];
-		const lines: Polyline[] = [];
-		if (hand) {
-			const ccw = hand === 'rhcp';
-			const steps = 24;
-			const start = ccw ? -Math.PI / 2 : (3 * Math.PI) / 2;
-			const sweep = ccw ? 1.5 * Math.PI : -1.5 * Math.PI;
-			const arc: Point[] = [];
-			for (let i = 0; i <= steps; i++) {
-				const a = start + (sweep * i) / steps;
-				arc.push([c[0] + r * Math.cos(a), c[1] + r * Math.sin(a)]);
-			}
-			lines.push(arc);
-			const end = arc[arc.length - 1];
-			const a = start + sweep;
-			// tangent direction at the end of the arc, then an arrow head there
-			const t: Point = ccw ? [-Math.sin(a), Math.cos(a)] : [Math.sin(a), -Math.cos(a)];
-			const n: Point = [-t[1], t[0]];
-			const k = 0.4 * h;
-			lines.push([[end[0] - k * t[0] + 0.6 * k * n[0], end[1] - k * t[1] + 0.6 * k * n[1]], end, [end[0] - k * t[0] - 0.6 * k * n[0], end[1] - k * t[1] - 0.6 * k * n[1]]]);
-		} else {
-			const k = 0.35 * h;
-			lines.push([[r, 0], [r, sign]], [[r - 0.6 * k, k], [r, 0], [r + 0.6 * k, k]], [[r - 0.6 * k, sign - k], [r, sign], [r + 0.6 * k, sign - k]]);
+	const r = sign / 2;
+	const c: Point = [r, r];
+	const lines: Polyline[] = [];
+	if (hand) {
+		const ccw = hand === 'rhcp';
+		const steps = 24;
+		const start = ccw ? -Math.PI / 2 : (3 * Math.PI) / 2;
+		const sweep = ccw ? 1.5 * Math.PI : -1.5 * Math.PI;
+		const arc: Point[] = [];
+		for (let i = 0; i <= steps; i++) {
+			const a = start + (sweep * i) / steps;
+			arc.push([c[0] + r * Math.cos(a), c[1] + r * Math.sin(a)]);
 		}
-		return [...lines, ...textStrokes(label, [sign + gap, 0], h)];
-	};
-	return { key: 'polarisation-mark', widthMm: sign + gap + textWidthMm(label.length, h), heightMm: h, draw };
+		lines.push(arc);
+		const end = arc[arc.length - 1];
+		const a = start + sweep;
+		// tangent direction at the end of the arc, then an arrow head there
+		const t: Point = ccw ? [-Math.sin(a), Math.cos(a)] : [Math.sin(a), -Math.cos(a)];
+		const n: Point = [-t[1], t[0]];
+		const k = 0.4 * h;
+		lines.push([[end[0] - k * t[0] + 0.6 * k * n[0], end[1] - k * t[1] + 0.6 * k * n[1]], end, [end[0] - k * t[0] - 0.6 * k * n[0], end[1] - k * t[1] - 0.6 * k * n[1]]]);
+	} else {
+		const k = 0.35 * h;
+		lines.push([[r, 0], [r, sign]], [[r - 0.6 * k, k], [r, 0], [r + 0.6 * k, k]], [[r - 0.6 * k, sign - k], [r, sign], [r + 0.6 * k, sign - k]]);
+	}
+	// the mark's own extents (an arrow head may reach past the circle), moved to start at the block's corner
+	const xs = lines.flat().map((p) => p[0]);
+	const ys = lines.flat().map((p) => p[1]);
+	const [x0, y0] = [Math.min(...xs), Math.min(...ys)];
+	const markWidth = Math.max(...xs) - x0;
+	const markHeight = Math.max(...ys) - y0;
+	const height = Math.max(markHeight, h);
+	const mark = shift(lines, -x0, (height - markHeight) / 2 - y0);
+	const draw = (): Polyline[] => [...mark, ...textStrokes(label, [markWidth + gap, (height - h) / 2], h)];
+	return { key: 'polarisation-mark', widthMm: markWidth + gap + textWidthMm(label.length, h), heightMm: height, draw };
 }
 
 /** The default order line: copper count and the finished dielectric thickness, e.g. "2L 1.6MM". */

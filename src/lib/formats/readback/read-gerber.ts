@@ -31,25 +31,10 @@ function toContour(start: Point, segments: Segment[]): Contour {
 	return { start, segments };
 }
 
-/**
- * Sides of the polygon standing in for the round pen's disc at each vertex. A 32-gon inside the disc misses
- * 0.5 % of the disc's area (1 − sin(2π/32)·32/(2π)) at the very ends of a stroke; the same polygon is used for the
- * artwork's strokes and the file's, so the comparison sees the same ink, and a legend's hundreds of vertices stay
- * quick to join (a 0.1 µm-sag circle of a 0.15 mm pen would have about 60 sides).
- */
-const PEN_SIDES = 32;
-
-/** A round pen dragged along a polyline: the union of a rectangle per chord and a disc (a PEN_SIDES-gon) per vertex. */
+/** A round pen dragged along a polyline: the union of a rectangle per chord and a disc per vertex. */
 export function strokeItems(points: readonly Point[], widthMm: number, polarity: 'dark' | 'clear'): ImageItem[] {
 	const r = widthMm / 2;
-	// turned half a side, so no corner lands (almost) on a chord rectangle's corner, which would leave the
-	// boolean operations two nearly equal points to tell apart
-	const disc = (p: Point): Point[] =>
-		Array.from({ length: PEN_SIDES }, (_, k): Point => {
-			const a = (2 * Math.PI * (k + 0.5)) / PEN_SIDES;
-			return [p[0] + r * Math.cos(a), p[1] + r * Math.sin(a)];
-		});
-	const items: ImageItem[] = points.map((p) => ({ polarity, rings: [disc(p)] }));
+	const items: ImageItem[] = points.map((p) => ({ polarity, rings: [flattenContour(createCircleContour(p, r), CHORD_TOLERANCE_MM)] }));
 	for (let i = 0; i + 1 < points.length; i++) {
 		const [a, b] = [points[i], points[i + 1]];
 		const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
