@@ -54,7 +54,7 @@ export const mountingHolesCodec = {
 };
 
 export type FieldGroup = 'Design' | 'Substrate' | 'Feed' | 'Parasitic' | 'Array' | 'Board';
-export type FormSection = 'slot' | 'proximity' | 'parasitic' | 'array';
+export type FormSection = 'slot' | 'proximity' | 'parasitic' | 'array' | 'mask-cover';
 
 const ghz = { toForm: ghzFromHz, toDocument: hzFromGhz, factor: 1e-9 };
 
@@ -97,18 +97,19 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'groundMarginMm', path: 'groundMarginMm', label: 'Ground margin', unit: 'mm', kind: 'number', group: 'Board', optional: true, hint: 'blank = 3 h', step: 'any' },
 	{ name: 'solderMask', path: 'solderMask', label: 'Add solder-mask layers', unit: '', kind: 'flag', group: 'Board' },
 	{ name: 'maskCoverage', path: 'maskCoverage', label: 'Mask over the patch', unit: '', kind: 'choice', group: 'Board', optional: true, hint: 'with mask; blank = exposed (patch bare)', choices: ['', ...maskCoverages] },
-	{ name: 'maskCover.relativePermittivity', path: 'maskCover.relativePermittivity', label: 'Mask εr', unit: '', kind: 'number', group: 'Board', optional: true, hint: 'covered; blank = 3.8', step: 'any' },
-	{ name: 'maskCover.thicknessUm', path: 'maskCover.thicknessUm', label: 'Mask thickness', unit: 'µm', kind: 'number', group: 'Board', optional: true, hint: 'covered; blank = 20 µm', step: 'any' },
+	{ name: 'maskCover.relativePermittivity', path: 'maskCover.relativePermittivity', label: 'Mask εr', unit: '', kind: 'number', group: 'Board', section: 'mask-cover', optional: true, hint: 'blank = 3.8', step: 'any' },
+	{ name: 'maskCover.thicknessUm', path: 'maskCover.thicknessUm', label: 'Mask thickness', unit: 'µm', kind: 'number', group: 'Board', section: 'mask-cover', optional: true, hint: 'blank = 20 µm', step: 'any' },
 	{ name: 'legend', path: 'legend', label: 'Top legend (name, revision, date, feed and polarisation marks)', unit: '', kind: 'flag', group: 'Board', presence: true },
 	{ name: 'legend.orderText', path: 'legend.orderText', label: 'Legend order text', unit: '', kind: 'text', group: 'Board', optional: true, hint: 'A–Z 0–9 -./+:#(); blank = layers and thickness' },
-	{ name: 'mountingHoles', path: 'mountingHoles', label: 'Mounting holes (NPTH)', unit: 'mm', kind: 'text', group: 'Board', optional: true, hint: 'x y ⌀ per hole, ";" between; kept 5 h from the patch', codec: mountingHolesCodec }
+	{ name: 'mountingHoles', path: 'mountingHoles', label: 'Mounting holes (NPTH), kept 5 h from the patch', unit: 'mm', kind: 'text', group: 'Board', optional: true, hint: 'x y ⌀ each, ";" between; blank = none', codec: mountingHolesCodec }
 ];
 
 /** Whether the switch of an optional part of the document is on: from form values, or from a stored input. */
-export type SectionSwitch = (section: 'parasitic' | 'array') => boolean;
+export type SectionSwitch = (section: 'parasitic' | 'array' | 'mask-cover') => boolean;
 
-export const switchesOfValues = (values: FormValues): SectionSwitch => (section) => values[section] === 'on';
-export const switchesOfInput = (input: Pick<DesignInput, 'parasitic' | 'array'>): SectionSwitch => (section) => input[section] !== undefined;
+/** The mask-cover fields are on when the mask covers the patch (maskCoverage "covered"). */
+export const switchesOfValues = (values: FormValues): SectionSwitch => (section) => (section === 'mask-cover' ? values.maskCoverage === 'covered' : values[section] === 'on');
+export const switchesOfInput = (input: Pick<DesignInput, 'parasitic' | 'array' | 'maskCoverage'>): SectionSwitch => (section) => (section === 'mask-cover' ? input.maskCoverage === 'covered' : input[section] !== undefined);
 
 /**
  * Whether a field matters for this shape and feed (the editor hides the rest; tables leave them out).
@@ -117,7 +118,7 @@ export const switchesOfInput = (input: Pick<DesignInput, 'parasitic' | 'array'>)
 export function fieldApplies(field: FormField, shape: string, feed: string, switches?: SectionSwitch): boolean {
 	if (field.section === 'slot') return feed === 'aperture-coupled';
 	if (field.section === 'proximity') return feed === 'proximity-coupled';
-	if (field.section === 'parasitic' || field.section === 'array') return switches?.(field.section) ?? false;
+	if (field.section === 'parasitic' || field.section === 'array' || field.section === 'mask-cover') return switches?.(field.section) ?? false;
 	if (field.presence) return switches !== undefined;
 	if (field.name === 'handedness') return shape === 'truncated-corner' || shape === 'nearly-square';
 	if (field.name === 'inset.notchGapMm') return feed === 'inset';
