@@ -72,7 +72,7 @@ const entries: { readonly [K in FormatId]: FormatEntry & { readonly id: K } } = 
 	drill: {
 		id: 'drill',
 		title: 'Excellon drill',
-		detail: 'probe holes',
+		detail: 'probe and mounting holes',
 		extension: 'drl',
 		contentType: 'text/plain; charset=utf-8',
 		appliesTo: (artwork) => artwork.drills.length > 0,
