@@ -11,6 +11,9 @@ import type { Actions, PageServerLoad } from './$types';
 
 const lengthKeys = ['minTraceWidthMm', 'minSpacingMm', 'minDrillMm', 'minAnnularRingMm', 'copperToEdgeMm', 'minSlotWidthMm', 'etchToleranceMm', 'platedDrillToleranceMm', 'nonPlatedDrillToleranceMm'] as const;
 
+/** The legend rules: optional, blank takes the stated default (LEGEND_DEFAULTS). */
+const legendKeys = ['minLegendWidthMm', 'legendToOpeningMm', 'legendToEdgeMm'] as const;
+
 /** The process keys beside the lengths: copper layers, mixed cores (a checkbox), thickness ± %, finish. */
 const processKeys = ['maxCopperLayers', 'mixedCores', 'boardThicknessTolerancePercent', 'finish'] as const;
 
@@ -28,11 +31,12 @@ export const actions: Actions = {
 		const data = await event.request.formData();
 		const teamId = String(data.get('teamId') ?? '');
 		const { user } = await requireTeamRole(event, teamId, 'fab-profile.write');
-		const values = Object.fromEntries(['name', ...lengthKeys, ...processKeys].map((k) => [k, String(data.get(k) ?? '')]));
+		const values = Object.fromEntries(['name', ...lengthKeys, ...legendKeys, ...processKeys].map((k) => [k, String(data.get(k) ?? '')]));
 		const num = (t: string) => (t.trim() === '' ? undefined : Number(t));
 		const raw = {
 			name: values.name,
 			...Object.fromEntries(lengthKeys.map((k) => [k, num(values[k])])),
+			...Object.fromEntries(legendKeys.flatMap((k) => (num(values[k]) === undefined ? [] : [[k, num(values[k])]]))),
 			maxCopperLayers: num(values.maxCopperLayers),
 			boardThicknessTolerancePercent: num(values.boardThicknessTolerancePercent),
 			mixedCores: values.mixedCores === 'on',
