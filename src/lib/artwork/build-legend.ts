@@ -34,8 +34,6 @@ const REVISION_SLOT_CHARACTERS = 'REV XXXX YYYY-MM-DD'.length;
 
 /** Roles of radiating copper, kept LEGEND_PATCH_KEEP_OUT_HEIGHTS × h clear. */
 const RADIATING_ROLES: readonly ArtworkShape['role'][] = ['patch', 'parasitic-patch', 'tuning-stub'];
-/** Roles of a feed line that runs to the board edge. */
-const FEED_ROLES: readonly ArtworkShape['role'][] = ['feed-line', 'transformer', 'feed-network', 'network-transformer'];
 
 type Polyline = Point[];
 interface Block {
@@ -166,7 +164,8 @@ function defaultOrderText(artwork: Artwork): string {
 function keepOuts(artwork: Artwork, sized: SizedDesign): { boxes: Bounds[]; feedPoint: Point | null } {
 	const boxes: Bounds[] = [];
 	const h = artwork.stack.find((l) => l.kind === 'dielectric')?.thicknessMm ?? sized.input.substrate.heightMm;
-	let feedPoint: Point | null = null;
+	// copper that meets the board's lower edge and is neither plane nor patch: the feed's entry (its line, or pads placed there)
+	let entry: Bounds | null = null;
 	for (const layer of artwork.layers) {
 		const f = layer.function;
 		const topSide = (f.kind === 'copper' && f.side === 'top') || (f.kind === 'solder-mask' && f.side === 'top');
@@ -174,16 +173,19 @@ function keepOuts(artwork: Artwork, sized: SizedDesign): { boxes: Bounds[]; feed
 			if (s.polarity !== 'dark') continue;
 			const b = shapeBounds(s.geometry);
 			if (topSide) boxes.push(grow(b, RADIATING_ROLES.includes(s.role) ? Math.max(LEGEND_COPPER_CLEARANCE_MM, LEGEND_PATCH_KEEP_OUT_HEIGHTS * h) : LEGEND_COPPER_CLEARANCE_MM));
-			// a feed that reaches the board's lower edge on any copper: the launch is there
-			if (f.kind === 'copper' && FEED_ROLES.includes(s.role) && b.minYMm < 1e-6 && !feedPoint) feedPoint = [(b.minXMm + b.maxXMm) / 2, 0];
+			const atEdge = f.kind === 'copper' && s.role !== 'ground' && !RADIATING_ROLES.includes(s.role) && b.minYMm < 1e-6 && b.maxXMm - b.minXMm < artwork.board.widthMm / 2;
+			if (atEdge) entry = entry ? rect(Math.min(entry.minXMm, b.minXMm), 0, Math.max(entry.maxXMm, b.maxXMm), 0) : rect(b.minXMm, 0, b.maxXMm, 0);
 		}
 	}
 	for (const d of artwork.drills) boxes.push(grow(rect(d.center[0], d.center[1], d.center[0], d.center[1]), d.diameterMm / 2 + LEGEND_COPPER_CLEARANCE_MM));
 	const probe = artwork.drills.find((d) => d.role === 'probe');
+	let feedPoint: Point | null = null;
 	if (probe) feedPoint = probe.center;
-	else if (feedPoint) {
+	else if (entry) {
 		const { halfWidthMm, depthMm } = LEGEND_LAUNCH_KEEP_OUT;
-		boxes.push(rect(feedPoint[0] - halfWidthMm, -1, feedPoint[0] + halfWidthMm, depthMm));
+		const cx = (entry.minXMm + entry.maxXMm) / 2;
+		feedPoint = [cx, 0];
+		boxes.push(rect(Math.min(entry.minXMm, cx - halfWidthMm), -1, Math.max(entry.maxXMm, cx + halfWidthMm), depthMm));
 	}
 	return { boxes, feedPoint };
 }
