@@ -14,13 +14,15 @@ Sizes the design, builds its artwork and checks it against a fab capability prof
 JSON object: \`design\` (its name), \`profile\` (the profile's name and every value it was checked
 against), \`clean\` and \`violations\`, each with ruleId (trace-width, copper-spacing, drill-size,
 annular-ring, edge-clearance, slot-width, stack-build; a connector launch's launch-gap, launch-via-edge,
-launch-via-spacing, launch-annular-ring, launch-outside-board), layerId, shapeIds, location {xMm, yMm},
-measuredMm, requiredMm and a message.
+launch-via-spacing, launch-annular-ring, launch-outside-board; the legend's legend-width, legend-clearance,
+legend-edge; mounting holes' hole-keep-out), layerId, shapeIds, location {xMm, yMm}, measuredMm, requiredMm
+and a message.
 
   --profile FILE  a fab profile JSON (name, minTraceWidthMm, minSpacingMm, minDrillMm,
                   minAnnularRingMm, copperToEdgeMm, minSlotWidthMm, etchToleranceMm,
                   platedDrillToleranceMm, nonPlatedDrillToleranceMm; optional: maxCopperLayers,
-                  mixedCores, boardThicknessTolerancePercent, finish); default: the built-in
+                  mixedCores, boardThicknessTolerancePercent, finish, minLegendWidthMm,
+                  legendToOpeningMm, legendToEdgeMm); default: the built-in
                   "${STANDARD_QUICK_TURN_PROFILE.name}" profile, or "${STANDARD_MULTILAYER_PROFILE.name}"
                   for a stack of more than two coppers
 

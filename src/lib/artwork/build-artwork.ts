@@ -8,8 +8,13 @@ import { buildExtendedArtwork } from './build-extended-artwork';
 import { profileLayer } from './profile-layer';
 import { buildTopCopper } from './build-top-copper';
 import { withLaunch } from './build-launch';
+import { withLegend } from './build-legend';
+import { withMountingHoles } from './build-mounting-holes';
 import { probeModelOf } from './probe-model';
 import type { Artwork, ArtworkDrill, ArtworkLayer, ArtworkShape } from './types';
+
+/** Top copper left under the mask when it covers the patch: the radiating copper. */
+const COVERED_ROLES: readonly ArtworkShape['role'][] = ['patch', 'notch', 'tuning-stub'];
 
 /** Pen width for the board profile line: the outline is its centre line; width only makes it visible. */
 
@@ -19,7 +24,8 @@ import type { Artwork, ArtworkDrill, ArtworkLayer, ArtworkShape } from './types'
  */
 export function buildArtwork(sized: SizedDesign): Artwork {
 	artworkBuilds += 1;
-	return withLaunch(drawArtwork(sized), sized);
+	// the connector launch on the drawn element, then the user's mounting holes, then the legend, which keeps clear of both
+	return withLegend(withMountingHoles(withLaunch(drawArtwork(sized), sized), sized), sized);
 }
 
 /** Artworks built so far by this module instance (one per thread): lets a worker task report what it drew. */
@@ -56,7 +62,9 @@ function drawArtwork(sized: SizedDesign): Artwork {
 	];
 	if (sized.input.solderMask) {
 		// Mask off the antenna: solder mask over the patch would shift its resonance (common practice, no source).
-		const topOpenings = top.shapes.map((s): ArtworkShape => ({ ...s, id: `mask-top-${s.id}`, role: 'mask-opening', polarity: 'dark' }));
+		// Covered (maskCoverage "covered"): the patch stays under the mask, the sizing has allowed for it, and only the feed is opened.
+		const covered = sized.input.maskCoverage === 'covered';
+		const topOpenings = top.shapes.filter((s) => !(covered && COVERED_ROLES.includes(s.role))).map((s): ArtworkShape => ({ ...s, id: `mask-top-${s.id}`, role: 'mask-opening', polarity: 'dark' }));
 		const bottomOpenings: ArtworkShape[] = drills.map((d) => ({
 			id: `mask-bottom-${d.id}`,
 			role: 'mask-opening',

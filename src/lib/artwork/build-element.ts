@@ -85,7 +85,8 @@ function shapeBounds(shapes: readonly ArtworkShape[]): Bounds {
 		const g = s.geometry;
 		if (g.kind === 'region') b = mergeBounds(b, contourBounds(g.region.outer));
 		else if (g.kind === 'circle') b = boundsOfPoints([[g.center[0] - g.diameterMm / 2, g.center[1] - g.diameterMm / 2], [g.center[0] + g.diameterMm / 2, g.center[1] + g.diameterMm / 2]], b);
-		else b = mergeBounds(b, contourBounds(g.contour));
+		else if (g.kind === 'outline') b = mergeBounds(b, contourBounds(g.contour));
+		else b = boundsOfPoints(g.points, b);
 	}
 	return b;
 }

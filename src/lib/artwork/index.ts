@@ -23,3 +23,6 @@ export {
 	type DrawingSegment,
 	type PlacedDimension
 } from './dimension-layout';
+export { stampLegend, revisionLegendText, shapeBounds, LEGEND_STROKE_WIDTH_MM, LEGEND_TEXT_HEIGHT_MM, LEGEND_PATCH_KEEP_OUT_HEIGHTS, LEGEND_LAUNCH_KEEP_OUT } from './build-legend';
+export { MOUNTING_HOLE_KEEP_OUT_HEIGHTS, MOUNTING_HOLE_COPPER_PULLBACK_MM, mountingHoleKeepOutMm } from './build-mounting-holes';
+export { STROKE_GLYPHS, STROKE_FONT_CHARACTERS, textStrokes, textWidthMm as strokeTextWidthMm } from './stroke-font';

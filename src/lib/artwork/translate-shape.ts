@@ -9,6 +9,8 @@ export function translateShape(shape: ArtworkShape, dxMm: number, dyMm: number, 
 			? { kind: 'region', region: translateRegion(g.region, dxMm, dyMm) }
 			: g.kind === 'circle'
 				? { kind: 'circle', center: translatePoint(g.center, dxMm, dyMm), diameterMm: g.diameterMm }
-				: { kind: 'outline', contour: translateContour(g.contour, dxMm, dyMm), strokeWidthMm: g.strokeWidthMm };
+				: g.kind === 'outline'
+					? { kind: 'outline', contour: translateContour(g.contour, dxMm, dyMm), strokeWidthMm: g.strokeWidthMm }
+					: { kind: 'stroke', points: g.points.map((p) => translatePoint(p, dxMm, dyMm)), strokeWidthMm: g.strokeWidthMm };
 	return { ...shape, id, geometry };
 }

@@ -25,6 +25,14 @@ export function contourPath(c: Contour, boardLengthMm: number): string {
 	return `${d}Z`;
 }
 
+/** An open polyline (a legend stroke) as path data. */
+export function polylinePath(points: readonly Point[], boardLengthMm: number): string {
+	return points.map((p, i) => {
+		const [x, y] = toScreen(p, boardLengthMm);
+		return `${i === 0 ? 'M' : 'L'}${n(x)} ${n(y)}`;
+	}).join('');
+}
+
 export type PreviewShape =
 	| { kind: 'path'; id: string; role: ShapeRole; d: string; clear: boolean; stroke: number | null }
 	| { kind: 'circle'; id: string; role: ShapeRole; cx: number; cy: number; r: number; clear: boolean };
@@ -41,6 +49,8 @@ export function previewShape(shape: ArtworkShape, boardLengthMm: number): Previe
 			return { kind: 'path', id: shape.id, role: shape.role, d: [g.region.outer, ...g.region.holes].map((c) => contourPath(c, boardLengthMm)).join(''), clear, stroke: null };
 		case 'outline':
 			return { kind: 'path', id: shape.id, role: shape.role, d: contourPath(g.contour, boardLengthMm), clear, stroke: g.strokeWidthMm };
+		case 'stroke':
+			return { kind: 'path', id: shape.id, role: shape.role, d: polylinePath(g.points, boardLengthMm), clear, stroke: g.strokeWidthMm };
 	}
 }
 
@@ -128,6 +138,8 @@ const TOP_COPPER = '#d98f55';
 const INNER_COPPER = '#b0622b';
 const BOTTOM_COPPER = '#6e3a17';
 const GROUND = '#8594a8';
+/** Legend ink: a dark plum that reads on the light substrate, drawn over everything else. */
+const LEGEND_INK = '#2b2140';
 
 /** What a copper layer carries, in words: "ground", "patch", "patch + feed", "feed", "parasitic patch". */
 function copperContents(layer: ArtworkLayer): string {
@@ -149,6 +161,7 @@ export function previewLayerStyles(layers: readonly ArtworkLayer[]): Record<stri
 	for (const layer of layers) {
 		const fn = layer.function;
 		if (fn.kind === 'profile') out[layer.id] = { fill: '#242d3b', opacity: 1, pattern: 'solid', label: 'Profile', order: 2 };
+		else if (fn.kind === 'legend') out[layer.id] = { fill: LEGEND_INK, opacity: 1, pattern: 'solid', label: fn.side === 'top' ? 'Top legend' : 'Bottom legend', order: 30 };
 		else if (fn.kind === 'solder-mask') out[layer.id] = { fill: '#2f8f5b', opacity: fn.side === 'top' ? 0.35 : 0.25, pattern: 'solid', label: fn.side === 'top' ? 'Top mask openings' : 'Bottom mask openings', order: fn.side === 'top' ? 1 : 0 };
 		else {
 			const what = copperContents(layer);

@@ -115,6 +115,16 @@ export function derivedQuantities(s: SizedDesign): Quantity[] {
 	add('Board', 'groundWidthMm', `${per} width`, s.ground.widthMm, 'mm');
 	add('Board', 'groundLengthMm', `${per} length`, s.ground.lengthMm, 'mm');
 	add('Board', 'groundMarginMm', 'Ground margin', s.ground.marginMm, 'mm', 4);
+	if (s.maskCover) {
+		// the mask over the patch, as the sizing was told about it (rf/mask-cover.ts)
+		const c = s.maskCover;
+		add('Board', 'maskCoverRelativePermittivity', `Mask εr over the patch${c.assumed.relativePermittivity ? ' (assumed)' : ''}`, c.relativePermittivity, '', 3);
+		add('Board', 'maskCoverThicknessUm', `Mask thickness over the patch${c.assumed.thickness ? ' (assumed)' : ''}`, c.thicknessMm * 1000, 'µm', 3);
+		add('Board', 'maskUncoveredEffectivePermittivity', 'Patch εeff, bare', c.uncoveredEffectivePermittivity, '', 5);
+		add('Board', 'maskCoveredEffectivePermittivity', 'Patch εeff under the mask (sized on this)', c.coveredEffectivePermittivity, '', 5);
+		add('Board', 'maskEquivalentPermittivity', 'Equivalent substrate εr used', c.equivalentSubstratePermittivity, '', 5);
+		add('Board', 'maskUncoveredSizeMm', 'Patch length if bare', c.uncoveredResonantSizeMm, 'mm');
+	}
 
 	add('Model', 'frequencyGHz', 'Frequency f₀', ghzFromHz(s.frequencyHz), 'GHz', 6);
 	add('Model', 'freeSpaceWavelengthMm', 'Free-space wavelength λ₀', s.freeSpaceWavelengthMm, 'mm');

@@ -1,6 +1,6 @@
 // The editor's fields: how each maps to a path of the design-input document, with its label and unit.
 // Pure: the browser uses it for live validation and preview, the form action for parsing the post.
-import { allFeedKinds, backMounts, edgeLaunchFeeds, handednesses, launchKinds, patchShapes, probeModels, requiredCopperCount, type DesignInput, type DesignInputDocument, type InputIssue } from '../schemas';
+import { allFeedKinds, backMounts, edgeLaunchFeeds, handednesses, launchKinds, maskCoverages, patchShapes, probeModels, requiredCopperCount, type DesignInput, type DesignInputDocument, type InputIssue } from '../schemas';
 import { ghzFromHz, hzFromGhz } from '../units';
 
 export type FieldKind = 'text' | 'number' | 'choice' | 'flag';
@@ -29,10 +29,32 @@ export interface FormField {
 	scale?: { toForm: (v: number) => number; toDocument: (v: number) => number; factor: number };
 	hint?: string;
 	step?: string;
+	/** A value the form holds as one line of text (the mounting holes): how it is read and written. */
+	codec?: { toDocument: (text: string) => unknown; toForm: (value: unknown) => string };
 }
 
+/**
+ * Mounting holes as one line: "x y ⌀" per hole in mm, holes separated by ";" ("4 4 3.2; 49 4 3.2"). Blank: none.
+ * A hole that is not three numbers becomes NaN values, which the schema refuses with the hole's path.
+ */
+export const mountingHolesCodec = {
+	toDocument(text: string): unknown {
+		const holes = text.split(';').map((h) => h.trim()).filter((h) => h.length > 0);
+		if (holes.length === 0) return undefined;
+		return holes.map((h) => {
+			const parts = h.split(/[\s,]+/).map(Number);
+			const [xMm, yMm, diameterMm] = parts.length === 3 ? parts : [NaN, NaN, NaN];
+			return { xMm, yMm, diameterMm };
+		});
+	},
+	toForm(value: unknown): string {
+		if (!Array.isArray(value)) return '';
+		return value.map((h: { xMm: number; yMm: number; diameterMm: number }) => `${h.xMm} ${h.yMm} ${h.diameterMm}`).join('; ');
+	}
+};
+
 export type FieldGroup = 'Design' | 'Substrate' | 'Feed' | 'Parasitic' | 'Array' | 'Board';
-export type FormSection = 'slot' | 'proximity' | 'parasitic' | 'array' | 'launch-edge' | 'launch-back';
+export type FormSection = 'slot' | 'proximity' | 'parasitic' | 'array' | 'launch-edge' | 'launch-back' | 'mask-cover';
 
 const ghz = { toForm: ghzFromHz, toDocument: hzFromGhz, factor: 1e-9 };
 
@@ -85,18 +107,33 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'array.scanAngleDeg', path: 'array.scanAngleDeg', label: 'Scan angle from broadside', unit: '°', kind: 'number', group: 'Array', section: 'array', optional: true, hint: 'x–z plane; blank = 0', step: 'any' },
 	{ name: 'patchWidthMm', path: 'patchWidthMm', label: 'Fixed patch width W', unit: 'mm', kind: 'number', group: 'Board', optional: true, hint: 'rectangular only; blank = solved', step: 'any' },
 	{ name: 'groundMarginMm', path: 'groundMarginMm', label: 'Ground margin', unit: 'mm', kind: 'number', group: 'Board', optional: true, hint: 'blank = 3 h', step: 'any' },
-	{ name: 'solderMask', path: 'solderMask', label: 'Add solder-mask layers', unit: '', kind: 'flag', group: 'Board' }
+	{ name: 'solderMask', path: 'solderMask', label: 'Add solder-mask layers', unit: '', kind: 'flag', group: 'Board' },
+	{ name: 'maskCoverage', path: 'maskCoverage', label: 'Mask over the patch', unit: '', kind: 'choice', group: 'Board', optional: true, hint: 'with mask; blank = exposed (patch bare)', choices: ['', ...maskCoverages] },
+	{ name: 'maskCover.relativePermittivity', path: 'maskCover.relativePermittivity', label: 'Mask εr', unit: '', kind: 'number', group: 'Board', section: 'mask-cover', optional: true, hint: 'blank = 3.8', step: 'any' },
+	{ name: 'maskCover.thicknessUm', path: 'maskCover.thicknessUm', label: 'Mask thickness', unit: 'µm', kind: 'number', group: 'Board', section: 'mask-cover', optional: true, hint: 'blank = 20 µm', step: 'any' },
+	{ name: 'legend', path: 'legend', label: 'Top legend (name, revision, date, feed and polarisation marks)', unit: '', kind: 'flag', group: 'Board', presence: true },
+	{ name: 'legend.orderText', path: 'legend.orderText', label: 'Legend order text', unit: '', kind: 'text', group: 'Board', optional: true, hint: 'A–Z 0–9 -./+:#(); blank = layers and thickness' },
+	{ name: 'mountingHoles', path: 'mountingHoles', label: 'Mounting holes (NPTH), kept 5 h from the patch', unit: 'mm', kind: 'text', group: 'Board', optional: true, hint: 'x y ⌀ each, ";" between; blank = none', codec: mountingHolesCodec }
 ];
 
 /** Whether the switch of an optional part of the document is on: from form values, or from a stored input. */
-export type SectionSwitch = (section: 'parasitic' | 'array' | 'launch-edge' | 'launch-back') => boolean;
+export type SectionSwitch = (section: 'parasitic' | 'array' | 'launch-edge' | 'launch-back' | 'mask-cover') => boolean;
 
 const LAUNCH_SECTION_KIND = { 'launch-edge': 'edge', 'launch-back': 'back' } as const;
 
+/** The launch fields follow the chosen launch kind; the mask-cover fields are on when the mask covers the patch (maskCoverage "covered"). */
 export const switchesOfValues = (values: FormValues): SectionSwitch => (section) =>
-	section === 'launch-edge' || section === 'launch-back' ? values['launch.kind'] === LAUNCH_SECTION_KIND[section] : values[section] === 'on';
-export const switchesOfInput = (input: Pick<DesignInput, 'parasitic' | 'array' | 'launch'>): SectionSwitch => (section) =>
-	section === 'launch-edge' || section === 'launch-back' ? input.launch?.kind === LAUNCH_SECTION_KIND[section] : input[section] !== undefined;
+	section === 'launch-edge' || section === 'launch-back'
+		? values['launch.kind'] === LAUNCH_SECTION_KIND[section]
+		: section === 'mask-cover'
+			? values.maskCoverage === 'covered'
+			: values[section] === 'on';
+export const switchesOfInput = (input: Pick<DesignInput, 'parasitic' | 'array' | 'launch' | 'maskCoverage'>): SectionSwitch => (section) =>
+	section === 'launch-edge' || section === 'launch-back'
+		? input.launch?.kind === LAUNCH_SECTION_KIND[section]
+		: section === 'mask-cover'
+			? input.maskCoverage === 'covered'
+			: input[section] !== undefined;
 
 /**
  * Whether a field matters for this shape and feed (the editor hides the rest; tables leave them out).
@@ -105,7 +142,7 @@ export const switchesOfInput = (input: Pick<DesignInput, 'parasitic' | 'array' |
 export function fieldApplies(field: FormField, shape: string, feed: string, switches?: SectionSwitch): boolean {
 	if (field.section === 'slot') return feed === 'aperture-coupled';
 	if (field.section === 'proximity') return feed === 'proximity-coupled';
-	if (field.section === 'parasitic' || field.section === 'array') return switches?.(field.section) ?? false;
+	if (field.section === 'parasitic' || field.section === 'array' || field.section === 'mask-cover') return switches?.(field.section) ?? false;
 	// the launch: edge for a line at the board edge, back under a probe; its dimensions once its kind is chosen
 	if (field.section === 'launch-edge') return (edgeLaunchFeeds as readonly string[]).includes(feed) && (switches?.(field.section) ?? false);
 	if (field.section === 'launch-back') return feed === 'probe' && (switches?.(field.section) ?? false);
@@ -198,7 +235,8 @@ export function documentFromFormValues(values: FormValues): DesignInputDocument 
 			continue;
 		}
 		let value: unknown;
-		if (f.kind === 'flag') value = text === 'on' || text === 'true';
+		if (f.codec) value = f.codec.toDocument(text);
+		else if (f.kind === 'flag') value = text === 'on' || text === 'true';
 		else if (text === '') value = undefined;
 		else if (f.kind === 'number') value = numberOrJunk(text, f.scale);
 		else value = f.kind === 'text' ? values[f.name] : text;
@@ -224,7 +262,8 @@ export function formValuesFromInput(input: DesignInput): FormValues {
 	const out: FormValues = {};
 	for (const f of designFormFields) {
 		const v = getAt(input, f.path);
-		if (f.presence || f.kind === 'flag') out[f.name] = v ? 'on' : '';
+		if (f.codec) out[f.name] = f.codec.toForm(v);
+		else if (f.presence || f.kind === 'flag') out[f.name] = v ? 'on' : '';
 		else if (v === undefined || v === null) out[f.name] = '';
 		else if (typeof v === 'number') out[f.name] = String(f.scale ? roundForForm(f.scale.toForm(v)) : v);
 		else out[f.name] = String(v);
@@ -262,7 +301,12 @@ export function formValuesFromFormData(data: FormData): FormValues {
 
 /** Where an issue shows: the field it is about, or "" for the form as a whole. */
 export function fieldNameForPath(path: string): string {
-	return designFormFields.find((f) => f.path === path)?.name ?? (isStackPath(path) ? path : '');
+	return fieldOfPath(path)?.name ?? (isStackPath(path) ? path : '');
+}
+
+/** The field an issue's path belongs to: its own, or for a one-line value (the mounting holes) the line holding it. */
+function fieldOfPath(path: string): FormField | undefined {
+	return designFormFields.find((f) => f.path === path) ?? designFormFields.find((f) => f.codec && path.startsWith(`${f.path}.`));
 }
 
 /** "stack", or a stack row or one of its keys: shown in the stack-up section, beside the row. */
@@ -279,8 +323,8 @@ export interface FieldIssue {
 /** Input issues as the form shows them: per field, with ranges restated in the field's own unit. */
 export function fieldIssues(issues: readonly InputIssue[]): FieldIssue[] {
 	return issues.map((iss) => {
-		const field = designFormFields.find((f) => f.path === iss.path);
-		let message = iss.message;
+		const field = fieldOfPath(iss.path);
+		let message = field?.codec && iss.path !== field.path ? `${iss.path.slice(field.path.length + 1)}: ${iss.message}` : iss.message;
 		if (field?.scale) {
 			const factor = field.scale.factor;
 			message = message.replace(/(allowed range [[(])([-\d.e+]+), ([-\d.e+]+)([\])])/, (_m, open, lo, hi, close) => `${open}${roundForForm(Number(lo) * factor)}, ${roundForForm(Number(hi) * factor)}${close} ${field.unit}`);

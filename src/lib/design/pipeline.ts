@@ -1,7 +1,7 @@
 // The one design pipeline: prepare → gate → writeFiles → readBack → bundle. The artwork is built here, once per
 // request, and handed along; the server, the CLI, the browser preview and the bench all call these steps and no
 // other module chains the artwork builder and a writer (scripts/eslint.config.js checks it).
-import { buildArtwork } from '../artwork';
+import { buildArtwork, stampLegend } from '../artwork';
 import { checkArtwork, type Violation } from '../drc';
 import { buildBundle } from '../formats/bundle';
 import { exportFileName } from '../formats/bundle/file-names';
@@ -40,6 +40,16 @@ export function prepareSized(stored: SizedDesign): PreparedDesign {
 	return { input: sized.input, sized, artwork: buildArtwork(sized) };
 }
 
+/**
+ * The prepared design as its files draw it: a legend's revision slot filled with this export's revision label and
+ * date (never the clock). The check saw the slot's box, and the stamp stays inside it. Without a legend the same
+ * object comes back, so designs without one write exactly what they wrote before.
+ */
+export function stamped(prepared: PreparedDesign, meta: ExportMeta): PreparedDesign {
+	const artwork = stampLegend(prepared.artwork, meta);
+	return artwork === prepared.artwork ? prepared : { ...prepared, artwork };
+}
+
 /** The design-rule check of the prepared artwork against a fab profile. */
 export function gate(prepared: PreparedDesign, profile: FabProfile): Violation[] {
 	return checkArtwork(prepared.artwork, profile);
@@ -56,7 +66,8 @@ export interface WriteOptions {
  * The chosen formats' files in the write order (the fab notes last; formats that do not apply to the artwork write
  * nothing), each hashed once, with the manifest last.
  */
-export async function writeFiles(prepared: PreparedDesign, formats: readonly FormatId[], meta: ExportMeta, options: WriteOptions = {}): Promise<HashedFile[]> {
+export async function writeFiles(unstamped: PreparedDesign, formats: readonly FormatId[], meta: ExportMeta, options: WriteOptions = {}): Promise<HashedFile[]> {
+	const prepared = stamped(unstamped, meta);
 	const manifestName = exportFileName(meta, 'manifest', 'json');
 	const files: ExportFile[] = [];
 	for (const format of writeOrder.map(formatEntry)) {
@@ -74,7 +85,8 @@ export async function writeFiles(prepared: PreparedDesign, formats: readonly For
  * holding only some of them (a Gerber-only download) is judged with the rest of its Gerber + drill set,
  * written from the same artwork; a delivered file always wins over its twin, so what is checked is what is sent.
  */
-export function readBack(files: readonly ExportFile[], prepared: PreparedDesign, meta: ExportMeta): ReadBackResult {
+export function readBack(files: readonly ExportFile[], unstamped: PreparedDesign, meta: ExportMeta): ReadBackResult {
+	const prepared = stamped(unstamped, meta);
 	const fab = files.filter((f) => isFabFileName(f.name));
 	const names = new Set(fab.map((f) => f.name));
 	const fabFormats = [formatEntry('gerber'), formatEntry('drill')].filter((f) => f.appliesTo(prepared.artwork));

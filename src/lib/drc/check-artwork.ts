@@ -8,6 +8,8 @@ import { checkLaunch } from './check-launch';
 import { checkSlotWidth } from './check-slot-width';
 import { checkStackBuild } from './check-stack-build';
 import { checkTraceWidth } from './check-trace-width';
+import { checkLegendClearance, checkLegendEdge, checkLegendWidth } from './check-legend';
+import { checkMountingHoles } from './check-mounting-holes';
 import type { Violation } from './violation';
 
 /** Every violation of the profile, grouped by rule in a fixed order; empty when the artwork is buildable. */
@@ -20,6 +22,10 @@ export function checkArtwork(artwork: Artwork, profile: FabProfile): Violation[]
 		...checkAnnularRing(artwork, profile),
 		...checkEdgeClearance(artwork, profile),
 		...checkSlotWidth(artwork, profile),
-		...checkLaunch(artwork, profile)
+		...checkLaunch(artwork, profile),
+		...checkMountingHoles(artwork, profile),
+		...checkLegendWidth(artwork, profile),
+		...checkLegendEdge(artwork, profile),
+		...checkLegendClearance(artwork, profile)
 	];
 }

@@ -7,6 +7,8 @@ export { checkEdgeClearance, FLUSH_TO_EDGE_ROLES } from './check-edge-clearance'
 export { checkSlotWidth } from './check-slot-width';
 export { checkStackBuild } from './check-stack-build';
 export { checkLaunch, checkLaunchGap, checkLaunchViaEdge, checkLaunchViaSpacing, checkLaunchAnnularRing, checkLaunchInsideBoard } from './check-launch';
+export { checkLegendWidth, checkLegendEdge, checkLegendClearance } from './check-legend';
+export { checkMountingHoles } from './check-mounting-holes';
 export { DRC_RULE_IDS, type DrcRuleId, type Violation } from './violation';
 export { boundaryPieces, type BoundaryPiece } from './boundary-piece';
 export { closestPair, type ClosestPair } from './piece-distance';

@@ -79,7 +79,7 @@ const entries: { readonly [K in FormatId]: FormatEntry & { readonly id: K } } = 
 	drill: {
 		id: 'drill',
 		title: 'Excellon drill',
-		detail: 'probe holes',
+		detail: 'probe and mounting holes',
 		extension: 'drl',
 		contentType: 'text/plain; charset=utf-8',
 		appliesTo: (artwork) => artwork.drills.length > 0,
@@ -149,7 +149,7 @@ const entries: { readonly [K in FormatId]: FormatEntry & { readonly id: K } } = 
 			const fileNames = [...context.earlierFileNames, name, context.manifestName];
 			// the profile the design was checked against, named with its figures; without one, the built-in that can build the stack
 			const profile = context.profile ?? builtInFabProfileFor(artwork.metadata.copperLayerCount);
-			const extras = { fileNames, solderMask: sized.input.solderMask, profile, input: sized.input, ...(context.waiver ? { waiver: context.waiver } : {}) };
+			const extras = { fileNames, solderMask: sized.input.solderMask, profile, input: sized.input, ...(sized.maskCover ? { maskCover: sized.maskCover } : {}), ...(context.waiver ? { waiver: context.waiver } : {}) };
 			return [textFile(name, buildFabNotes(artwork, meta, extras))];
 		}
 	}

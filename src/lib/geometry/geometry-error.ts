@@ -14,7 +14,8 @@ export type GeometryErrorCode =
 	/** The corporate feed would pass too close to an element. */
 	| 'feed-network-crowded'
 	/** A connector launch the design cannot hold: no feed line at the board edge, or a line impedance no gap reaches. */
-	| 'launch-does-not-fit';
+	| 'launch-does-not-fit'
+	| 'mounting-hole-outside-board';
 
 export class GeometryError extends Error {
 	readonly name = 'GeometryError';

@@ -2,6 +2,7 @@
 export * from './sized-design';
 export { feedKindTraits, feedLineOf, isLayeredFeed, isLayeredFeedKind, type FeedKindTraits } from './feed-kinds';
 export { size, NOTCH_GAP_LINE_WIDTHS, PROBE_ANNULAR_RING_MM } from './size';
+export { DEFAULT_MASK_RELATIVE_PERMITTIVITY, DEFAULT_MASK_THICKNESS_UM, MASK_COVER_MODEL, maskCoverPermittivities, maskCoverValues, type SizedMaskCover } from './mask-cover';
 export { sizingReport, type SizingReport } from './sizing-report';
 export { resonantFrequencyHz, type SubstrateValues } from './resonant-frequency';
 export { toleranceStudy, type ToleranceOptions, type ToleranceStudy } from './tolerance-study';

@@ -1,4 +1,5 @@
 // Sizing one design: validated input in, every derived quantity and the warnings out.
+import { MASK_COVER_MODEL, maskCoverPermittivities, maskCoverValues, type SizedMaskCover } from './mask-cover';
 import { InputError, laminateClassFor, parseDesignInput, type DesignInput } from '../schemas';
 import { freeSpaceWavelengthMm, mmFromUm } from '../units';
 import { feedKindTraits } from './feed-kinds';
@@ -313,6 +314,28 @@ function sizeValid(d: DesignInput, assumed?: WarningFacts['assumedLossTangent'])
 	};
 }
 
+/** The patch's extent across and along the feed axis: W and L, a side, or the diameter 2a. */
+function patchExtentsMm(p: SizedDesign['patch']): { widthMm: number; lengthMm: number } {
+	if (p.kind === 'circular') return { widthMm: 2 * p.radiusMm, lengthMm: 2 * p.radiusMm };
+	if (p.kind === 'truncated-corner') return { widthMm: p.sideMm, lengthMm: p.sideMm };
+	return { widthMm: p.widthMm, lengthMm: p.lengthMm };
+}
+
+/**
+ * A patch under the solder mask: sized bare first for its width, then re-sized on the substrate εr whose bare
+ * εeff equals the covered one (see rf/mask-cover.ts), the width kept; the stored input stays the document.
+ */
+function sizeUnderMask(d: DesignInput, assumed?: WarningFacts['assumedLossTangent']): SizedDesign {
+	const bare = sizeValid(d, assumed);
+	const { widthMm, lengthMm } = patchExtentsMm(bare.patch);
+	const cover = maskCoverValues(d);
+	const p = maskCoverPermittivities(widthMm, d.substrate.heightMm, d.substrate.relativePermittivity, cover);
+	const onCovered: DesignInput = { ...d, substrate: { ...d.substrate, relativePermittivity: p.equivalentSubstratePermittivity } };
+	const covered = sizeValid(d.shape === 'rectangular' && d.patchWidthMm === undefined && d.overrides?.widthMm === undefined ? { ...onCovered, patchWidthMm: widthMm } : onCovered, assumed);
+	const maskCover: SizedMaskCover = { model: MASK_COVER_MODEL, relativePermittivity: cover.relativePermittivity, thicknessMm: cover.thicknessMm, assumed: cover.assumed, ...p, uncoveredResonantSizeMm: lengthMm };
+	return { ...covered, input: d, textbook: bare.textbook, maskCover };
+}
+
 /** The band a design is usable over: a CP patch's AR ≤ 3 dB and VSWR ≤ 2 overlap, else its VSWR ≤ 2 band. */
 function usableBandOf(d: DesignInput, estimates: SizedEstimates): FrequencyBand | null {
 	if (isCircularlyPolarisedShape(d.shape)) return polarisationBands(d.frequencyHz, estimates.qualityFactor).usableBand;
@@ -344,7 +367,8 @@ function toDocumentPaths(error: InputError): InputError {
 export function size(input: unknown): SizedDesign {
 	const { doc: d, assumed } = withLossTangent(parseDesignInput(input));
 	try {
-		return needsExtendedSizing(d) ? sizeExtended(d, (g) => sizeValid(g, assumed)) : sizeValid(d, assumed);
+		if (needsExtendedSizing(d)) return sizeExtended(d, (g) => sizeValid(g, assumed));
+		return d.solderMask && d.maskCoverage === 'covered' ? sizeUnderMask(d, assumed) : sizeValid(d, assumed);
 	} catch (error) {
 		if (error instanceof InputError) throw toDocumentPaths(error);
 		throw error;

@@ -1,6 +1,7 @@
 // What sizing returns: every derived quantity with its unit in its name, and the warnings.
 // This is the contract between src/lib/rf (producer) and src/lib/artwork (consumer).
 import type { DesignInput, FeedKind, Handedness, PatchShape } from '../schemas';
+import type { SizedMaskCover } from './mask-cover';
 
 export type WarningCode =
 	| 'thick-substrate'
@@ -312,6 +313,8 @@ export interface SizedDesign {
 	layerStack?: SizedStackEntry[];
 	/** Present for a stacked parasitic patch. */
 	parasitic?: SizedParasitic;
+	/** Present when the solder mask covers the patch (maskCoverage "covered"): what the sizing was told about it. */
+	maskCover?: SizedMaskCover;
 	/** Present for an array; the element is everything above, and `ground` is one element's ground. */
 	array?: SizedArray;
 	/**

@@ -119,5 +119,7 @@ export function sizingReport(sized: SizedDesign): SizingReport {
 	if (sized.layerStack) out.layerStack = sized.layerStack;
 	if (sized.parasitic) out.parasitic = sized.parasitic;
 	if (sized.array) out.array = sized.array;
+	// present only when the mask covers the patch, so other reports keep their keys
+	if (sized.maskCover) out.maskCover = sized.maskCover;
 	return out as SizingReport;
 }

@@ -35,11 +35,13 @@ export const shapeRoles = [
 	'network-transformer',
 	'launch-signal',
 	'launch-ground',
-	'launch-back-pad'
+	'launch-back-pad',
+	'legend',
+	'legend-slot'
 ] as const;
 
 /** What a hole is for: the probe's pin, a via of an edge launch (top ground pads to the bottom ground), a back-side launch's flange hole. */
-export const drillRoles = ['probe', 'launch-via', 'launch-flange'] as const;
+export const drillRoles = ['probe', 'launch-via', 'launch-flange', 'mounting'] as const;
 
 export const shapeGeometrySchema = z.discriminatedUnion('kind', [
 	/** A filled area bounded by line and arc segments. */
@@ -47,7 +49,9 @@ export const shapeGeometrySchema = z.discriminatedUnion('kind', [
 	/** An exact filled circle (a flash of a round aperture in Gerber). */
 	z.strictObject({ kind: z.literal('circle'), center: pointSchema, diameterMm: z.number().positive() }).readonly(),
 	/** A closed line drawn with a round pen, not filled (the board profile). */
-	z.strictObject({ kind: z.literal('outline'), contour: contourSchema, strokeWidthMm: z.number().positive() }).readonly()
+	z.strictObject({ kind: z.literal('outline'), contour: contourSchema, strokeWidthMm: z.number().positive() }).readonly(),
+	/** An open polyline drawn with a round pen: the ink is every point within strokeWidthMm/2 of it (legend text and marks). */
+	z.strictObject({ kind: z.literal('stroke'), points: z.array(pointSchema).min(2).readonly(), strokeWidthMm: z.number().positive() }).readonly()
 ]);
 
 export const artworkShapeSchema = z
@@ -62,12 +66,13 @@ export const artworkShapeSchema = z
 export const layerFunctionSchema = z.discriminatedUnion('kind', [
 	z.strictObject({ kind: z.literal('copper'), copperIndex: z.number().int().min(1), side: z.enum(['top', 'inner', 'bottom']) }).readonly(),
 	z.strictObject({ kind: z.literal('profile') }).readonly(),
-	z.strictObject({ kind: z.literal('solder-mask'), side: z.enum(['top', 'bottom']) }).readonly()
+	z.strictObject({ kind: z.literal('solder-mask'), side: z.enum(['top', 'bottom']) }).readonly(),
+	z.strictObject({ kind: z.literal('legend'), side: z.enum(['top', 'bottom']) }).readonly()
 ]);
 
 export const artworkLayerSchema = z
 	.strictObject({
-		id: z.string().meta({ description: 'File-name and group id: copper-top, copper-inner-1, copper-bottom, profile, mask-top, mask-bottom' }),
+		id: z.string().meta({ description: 'File-name and group id: copper-top, copper-inner-1, copper-bottom, profile, mask-top, mask-bottom, legend-top' }),
 		title: z.string(),
 		function: layerFunctionSchema,
 		shapes: z.array(artworkShapeSchema).readonly().meta({ description: 'Drawn in order: a clear shape removes only what dark shapes before it drew' }),
@@ -78,7 +83,7 @@ export const artworkLayerSchema = z
 export const artworkDrillSchema = z
 	.strictObject({
 		id: z.string(),
-		role: z.enum(drillRoles),
+		role: z.enum(drillRoles).meta({ description: 'probe: the plated feed pin hole; launch-via, launch-flange: the connector launch; mounting: a non-plated hole the user placed' }),
 		plated: z.boolean(),
 		center: pointSchema,
 		diameterMm: z.number().positive().meta({ description: 'Finished hole diameter' }),
@@ -185,6 +190,16 @@ export const artworkLaunchSchema = z.discriminatedUnion('kind', [
 		.readonly()
 ]);
 
+/** The legend's lettering and what it holds: items placed, items left out for want of room. */
+export const artworkLegendSchema = z
+	.strictObject({
+		textHeightMm: z.number().positive(),
+		strokeWidthMm: z.number().positive(),
+		placed: z.array(z.string()).readonly(),
+		omitted: z.array(z.string()).readonly()
+	})
+	.readonly();
+
 export const boardSchema = z.strictObject({ widthMm: z.number().min(0), lengthMm: z.number().min(0) }).readonly();
 
 export const artworkSchema = z
@@ -202,7 +217,9 @@ export const artworkSchema = z
 				frequencyHz: z.number().positive(),
 				copperLayerCount: z.number().int().min(2),
 				probe: artworkProbeSchema.optional().meta({ description: 'The probe model the design states (absent: not stated)' }),
-				launch: artworkLaunchSchema.optional().meta({ description: 'The connector launch as built (absent: none)' })
+				launch: artworkLaunchSchema.optional().meta({ description: 'The connector launch as built (absent: none)' }),
+				legend: artworkLegendSchema.optional().meta({ description: 'What the legend layer holds and what did not fit (absent: no legend)' }),
+				mountingHoleKeepOutMm: z.number().min(0).optional().meta({ description: 'Least distance a mounting hole keeps from the patch (absent: no mounting holes)' })
 			})
 			.readonly()
 	})

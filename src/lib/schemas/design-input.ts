@@ -231,6 +231,65 @@ export const bandToCoverSchema = z.strictObject({
 });
 export type BandToCover = z.infer<typeof bandToCoverSchema>;
 
+/**
+ * How the top solder mask meets the radiating copper: "exposed" opens the mask over all top copper (the patch
+ * stays bare, as the sizing assumes); "covered" leaves the patch and its feed under the mask and tells the sizing,
+ * which then sizes the patch on the covered εeff (see rf/mask-cover.ts). Absent: exposed (what a revision stored
+ * before the choice existed always meant).
+ */
+export const maskCoverages = ['exposed', 'covered'] as const;
+export type MaskCoverage = (typeof maskCoverages)[number];
+
+/** The mask's dielectric over covered copper; each absent value takes rf/mask-cover.ts's stated default. */
+export const maskCoverSchema = z.strictObject({
+	/** εr of the cured mask; absent: 3.8 (common practice, no source: liquid photoimageable masks state 3.5–4.2). */
+	relativePermittivity: bounded(1, 10, { exclusiveMin: true }).optional(),
+	/** Mask thickness over the copper; absent: 20 µm (common practice, no source: 10–30 µm over copper). */
+	thicknessUm: bounded(1, 200).optional()
+});
+export type MaskCover = z.infer<typeof maskCoverSchema>;
+
+/**
+ * Characters the legend's stroke font draws (artwork/stroke-font.ts): capital letters, digits, space and a few
+ * signs. Legend text is upper-cased and accents are dropped; other characters in the design name are left out.
+ */
+export const LEGEND_CHARACTERS = 'ABCDEFGHIJKLMNOPQRSTUVWXYZ0123456789 -./+:#()';
+
+/** Legend text as the stroke font draws it: upper case, accents dropped, other characters removed, spaces collapsed. */
+export function toLegendText(text: string): string {
+	const upper = text.normalize('NFKD').replace(/[\u0300-\u036f]/g, '').toUpperCase();
+	return [...upper]
+		.map((c) => (LEGEND_CHARACTERS.includes(c) ? c : ' '))
+		.join('')
+		.replace(/\s+/g, ' ')
+		.trim();
+}
+
+/** The legend (silkscreen) on the top side: the design name, revision and date, feed and polarisation marks, an order text. */
+export const legendOptionsSchema = z.strictObject({
+	/** A short line for the board house (e.g. "FR4 1.6MM ENIG"); absent: copper count and board thickness. */
+	orderText: z
+		.string()
+		.trim()
+		.min(1, { error: 'must not be empty' })
+		.max(32, { error: 'at most 32 characters' })
+		.refine((t) => [...t.toUpperCase()].every((c) => LEGEND_CHARACTERS.includes(c)), { error: `letters, digits, spaces and ${LEGEND_CHARACTERS.slice(37)} only (the legend font)` })
+		.optional()
+});
+export type LegendOptions = z.infer<typeof legendOptionsSchema>;
+
+/** Most mounting holes one design takes. */
+export const MAX_MOUNTING_HOLES = 8;
+
+/** A non-plated mounting hole the user places, board origin at its lower-left corner (x right, y up). */
+export const mountingHoleSchema = z.strictObject({
+	xMm: bounded(0, 2000),
+	yMm: bounded(0, 2000),
+	/** Finished hole diameter (M2 screw: 2.2 mm, M3: 3.2 mm). */
+	diameterMm: bounded(0.5, 10)
+});
+export type MountingHole = z.infer<typeof mountingHoleSchema>;
+
 /** A design's name: shown in every file of its exports (titles, comments, the fab notes). */
 export const designNameSchema = z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).superRefine(plainText('name'));
 
@@ -256,8 +315,16 @@ const designInputObject = z.strictObject({
 	probe: probeOptionsSchema.default({ drillDiameterMm: 1.3, clearanceDiameterMm: 4.1 }),
 	/** Sense of circular polarisation for truncated-corner and nearly-square patches. */
 	handedness: z.enum(handednesses).default('rhcp'),
-	/** Add solder-mask layers to the exports. */
+	/** Add solder-mask layers to the exports. A document without the key has none (new designs from the editor start with them on). */
 	solderMask: z.boolean().default(false),
+	/** With solder mask: the patch bare under an opening or covered (see maskCoverages); absent: exposed. */
+	maskCoverage: z.enum(maskCoverages).optional(),
+	/** The mask's εr and thickness over covered copper (maskCoverage "covered" only). */
+	maskCover: maskCoverSchema.optional(),
+	/** A top legend layer (see legendOptionsSchema); absent: none. */
+	legend: legendOptionsSchema.optional(),
+	/** Non-plated mounting holes (see mountingHoleSchema); absent: none. */
+	mountingHoles: z.array(mountingHoleSchema).max(MAX_MOUNTING_HOLES, { error: `at most ${MAX_MOUNTING_HOLES} mounting holes` }).optional(),
 	/** Explicit stack, top to bottom; absent: copper / substrate / copper. With a stack, its dielectrics' εr, tanδ and h are used instead of the substrate's. */
 	stack: layerStackSchema.optional(),
 	/** Aperture-coupled starting sizes (feed "aperture-coupled"). */
@@ -302,6 +369,7 @@ export const designInputSchema = designInputObject.superRefine((d, ctx) => {
 	overrideRules(d, ctx);
 	const misfit = launchMisfit(d.launch, d.feed, copperLayerCountOf(d));
 	if (misfit) ctx.addIssue({ code: 'custom', path: ['launch', 'kind'], input: d.launch?.kind, message: misfit });
+	boardFinishRules(d, ctx);
 	if (d.bandToCover && !(d.bandToCover.upperHz > d.bandToCover.lowerHz)) {
 		ctx.addIssue({ code: 'custom', path: ['bandToCover', 'upperHz'], input: d.bandToCover.upperHz, message: `must be above bandToCover.lowerHz (${d.bandToCover.lowerHz})` });
 	}
@@ -331,6 +399,15 @@ export function requiredCopperCount(d: Pick<ParsedDocument, 'feed' | 'parasitic'
 /** How many copper layers a validated document's board has: its explicit stack's, else what its feed needs. */
 export function copperLayerCountOf(d: Pick<ParsedDocument, 'feed' | 'parasitic' | 'stack'>): number {
 	return d.stack ? d.stack.filter((l) => l.kind === 'copper').length : requiredCopperCount(d);
+}
+
+/** Mask coverage needs the mask; a covered mask is sized for one single-layer element only. */
+function boardFinishRules(d: ParsedDocument, ctx: RefineContext): void {
+	if (d.maskCoverage !== undefined && !d.solderMask) ctx.addIssue({ code: 'custom', path: ['maskCoverage'], input: d.maskCoverage, message: 'needs solderMask: true' });
+	if (d.maskCover !== undefined && d.maskCoverage !== 'covered') ctx.addIssue({ code: 'custom', path: ['maskCover'], input: d.maskCover, message: 'only maskCoverage "covered" takes a mask cover' });
+	if (d.maskCoverage === 'covered' && (d.array || d.parasitic || (layeredFeedKinds as readonly string[]).includes(d.feed))) {
+		ctx.addIssue({ code: 'custom', path: ['maskCoverage'], input: d.maskCoverage, message: 'a covered patch is sized for one single-layer element only (no array, parasitic patch or layered feed); choose "exposed"' });
+	}
 }
 
 /** Which overrides apply to which shapes and feeds. */

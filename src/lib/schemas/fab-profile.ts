@@ -65,6 +65,12 @@ export const fabProfileSchema = z
 			.gte(0, { error: 'allowed range [0, 50] %' })
 			.lte(50, { error: 'allowed range [0, 50] %' })
 			.default(10),
+		/** Narrowest legend (silkscreen) line the house prints. Absent: LEGEND_DEFAULTS.minLegendWidthMm. */
+		minLegendWidthMm: lengthMm(0.01, 2).optional(),
+		/** Legend ink kept from a mask opening (bare copper the ink would not stick to or would smear onto). Absent: LEGEND_DEFAULTS. */
+		legendToOpeningMm: lengthMm(0, 5).optional(),
+		/** Legend ink kept from the routed board edge. Absent: LEGEND_DEFAULTS.legendToEdgeMm. */
+		legendToEdgeMm: lengthMm(0, 5).optional(),
 		/** The surface finish ordered from this house (see fabFinishes). Absent: ENIG. */
 		finish: z.enum(fabFinishes, { error: `must be one of: ${fabFinishes.join(', ')}` }).default('ENIG')
 	})
@@ -81,6 +87,22 @@ export const fabProfileSchema = z
 	});
 
 export type FabProfile = z.output<typeof fabProfileSchema>;
+
+/**
+ * The legend rules of a profile that states none: common practice, no source — typical of quick-turn houses,
+ * which print legend lines from about 0.12–0.15 mm, clip ink about 0.1–0.15 mm back from mask openings and keep
+ * it a quarter millimetre inside the routed edge.
+ */
+export const LEGEND_DEFAULTS = Object.freeze({ minLegendWidthMm: 0.15, legendToOpeningMm: 0.15, legendToEdgeMm: 0.25 });
+
+/** A profile's legend rules, its own values where it states them. */
+export function legendRulesOf(profile: FabProfile): { minLegendWidthMm: number; legendToOpeningMm: number; legendToEdgeMm: number } {
+	return {
+		minLegendWidthMm: profile.minLegendWidthMm ?? LEGEND_DEFAULTS.minLegendWidthMm,
+		legendToOpeningMm: profile.legendToOpeningMm ?? LEGEND_DEFAULTS.legendToOpeningMm,
+		legendToEdgeMm: profile.legendToEdgeMm ?? LEGEND_DEFAULTS.legendToEdgeMm
+	};
+}
 
 /**
  * The built-in profile. All values: common practice, no source — typical of low-cost quick-turn

@@ -2,7 +2,7 @@
 import { z } from 'zod';
 
 /** Our rule names. Stable: the UI, the API's 422 body and waivers refer to them. */
-export const drcRuleIds = ['trace-width', 'copper-spacing', 'drill-size', 'annular-ring', 'edge-clearance', 'slot-width', 'stack-build', 'launch-gap', 'launch-via-edge', 'launch-via-spacing', 'launch-annular-ring', 'launch-outside-board'] as const;
+export const drcRuleIds = ['trace-width', 'copper-spacing', 'drill-size', 'annular-ring', 'edge-clearance', 'slot-width', 'stack-build', 'launch-gap', 'launch-via-edge', 'launch-via-spacing', 'launch-annular-ring', 'launch-outside-board', 'legend-width', 'legend-clearance', 'legend-edge', 'hole-keep-out'] as const;
 export type DrcRuleId = (typeof drcRuleIds)[number];
 
 export const violationSchema = z

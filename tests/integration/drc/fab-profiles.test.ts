@@ -96,6 +96,24 @@ describe('the /fab-profiles page', () => {
 	});
 });
 
+describe('the legend rules on the /fab-profiles page', () => {
+	const form = (name: string) => ({ teamId: ws.teamId, name, ...Object.fromEntries(Object.entries(eightMil(name)).filter(([k]) => k !== 'name').map(([k, v]) => [k, String(v)])) });
+
+	it('stores the legend rules typed, leaves blank ones out (the defaults then apply) and refuses junk', async () => {
+		const who = await identityOf(ws, 'editor', 'session');
+		const name = `Legend ${ws.suffix}`;
+		const ok = await call(page.actions.add as never, { identity: who, path: '/fab-profiles?/add', form: { ...form(name), minLegendWidthMm: '0.12', legendToOpeningMm: '', legendToEdgeMm: '0.3' } });
+		expect(ok.outcome).toBe('ok');
+		const stored = (await listFabProfiles(getDb(), ws.teamId)).find((p) => p.profile.name === name)!.profile;
+		expect(stored.minLegendWidthMm).toBe(0.12);
+		expect(stored.legendToEdgeMm).toBe(0.3);
+		expect(stored).not.toHaveProperty('legendToOpeningMm');
+		const bad = await call(page.actions.add as never, { identity: who, path: '/fab-profiles?/add', form: { ...form(`Legend bad ${ws.suffix}`), minLegendWidthMm: '9' } });
+		expect(bad.outcome).toBe(400);
+		expect((bad.data as { issues: { path: string }[] }).issues[0].path).toBe('minLegendWidthMm');
+	});
+});
+
 describe('revision.fab_profile', () => {
 	it('defaults to the code’s built-in profile (the migration’s copy has not drifted)', async () => {
 		const row = await getDb().selectFrom('revision').select('fab_profile').where('design_id', '=', ws.designId).where('label', '=', 'A').executeTakeFirstOrThrow();

@@ -10,6 +10,11 @@ import { layeredCases } from '../../fixtures/designs/layered-cases';
 const boundsOf = (s: ArtworkShape): Bounds => {
 	const g = s.geometry;
 	if (g.kind === 'circle') return { minXMm: g.center[0] - g.diameterMm / 2, minYMm: g.center[1] - g.diameterMm / 2, maxXMm: g.center[0] + g.diameterMm / 2, maxYMm: g.center[1] + g.diameterMm / 2 };
+	if (g.kind === 'stroke') {
+		const xs = g.points.map((p) => p[0]);
+		const ys = g.points.map((p) => p[1]);
+		return { minXMm: Math.min(...xs), minYMm: Math.min(...ys), maxXMm: Math.max(...xs), maxYMm: Math.max(...ys) };
+	}
 	return contourBounds(g.kind === 'region' ? g.region.outer : g.contour);
 };
 const shape = (a: Artwork, id: string) => a.layers.flatMap((l) => l.shapes).find((s) => s.id === id)!;

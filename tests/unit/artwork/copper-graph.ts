@@ -15,6 +15,7 @@ function ringOf(shape: ArtworkShape): Point[] {
 		const r = g.diameterMm / 2;
 		return Array.from({ length: 64 }, (_, k): Point => [g.center[0] + r * Math.cos((2 * Math.PI * k) / 64), g.center[1] + r * Math.sin((2 * Math.PI * k) / 64)]);
 	}
+	if (g.kind === 'stroke') return [...g.points];
 	return flattenContour(g.contour);
 }
 

@@ -1,8 +1,8 @@
 // Each rule fires alone on an artwork that breaks it by 1 µm and stays quiet when nudged 1 µm inside.
 import { describe, expect, it } from 'vitest';
-import type { Artwork } from '../../../src/lib/artwork';
+import type { Artwork, ArtworkLayer } from '../../../src/lib/artwork';
 import { checkArtwork, DRC_RULE_IDS, type DrcRuleId } from '../../../src/lib/drc';
-import { STANDARD_QUICK_TURN_PROFILE as P } from '../../../src/lib/schemas/fab-profile';
+import { LEGEND_DEFAULTS, STANDARD_QUICK_TURN_PROFILE as P } from '../../../src/lib/schemas/fab-profile';
 import { BOARD_MM, craftArtwork, edgeFedArtwork, edgeLaunchedArtwork, insetFedArtwork, probeFedArtwork, rect, roundRegion, disc } from './crafted-artwork';
 
 const UM = 1e-3;
@@ -90,8 +90,39 @@ const cases: RuleCase[] = [
 	// two 0.4 mm launch vias whose walls are s apart
 	{ rule: 'launch-via-spacing', what: 'web between two launch vias', build: (s) => edgeLaunchedArtwork({ vias: [{ center: [17.5, 1] }, { center: [17.5, 1.4 + s] }] }), limitMm: P.minSpacingMm },
 	// a 0.4 mm launch via leaving a ring of a to the left pad's outer edge (x = 16.5)
-	{ rule: 'launch-annular-ring', what: 'launch via ring to its pad edge', build: (a) => edgeLaunchedArtwork({ vias: [{ center: [16.5 + 0.2 + a, 1.5] }] }), limitMm: P.minAnnularRingMm }
+	{ rule: 'launch-annular-ring', what: 'launch via ring to its pad edge', build: (a) => edgeLaunchedArtwork({ vias: [{ center: [16.5 + 0.2 + a, 1.5] }] }), limitMm: P.minAnnularRingMm },
+	// a legend line thinner than the least the profile prints (defaults: common practice, no source)
+	{ rule: 'legend-width', what: 'legend line width', build: (w) => withLegendStroke(edgeFedArtwork(), [[2, 30], [6, 30]], w), limitMm: LEGEND_DEFAULTS.minLegendWidthMm },
+	// legend ink too near the left board edge: the pen's edge, not its centre line, is measured
+	{ rule: 'legend-edge', what: 'legend ink to the left edge', build: (g) => withLegendStroke(edgeFedArtwork(), [[g + 0.1, 30], [g + 4, 30]], 0.2), limitMm: LEGEND_DEFAULTS.legendToEdgeMm },
+	// legend ink too near bare copper (no mask: the whole top copper is an opening)
+	{ rule: 'legend-clearance', what: 'legend ink to the patch', build: (g) => withLegendStroke(edgeFedArtwork(), [[10 - g - 0.1, 20], [10 - g - 0.1, 25]], 0.2), limitMm: LEGEND_DEFAULTS.legendToOpeningMm },
+	// a mounting hole inside the patch's near-field keep-out (8 mm stated in the artwork)
+	{ rule: 'hole-keep-out', what: 'mounting hole wall to the patch', build: (g) => withMountingHole(edgeFedArtwork(), [10 - g - 1, 25], 2, 8), limitMm: 8 },
+	// a mounting hole too near other copper: a drilled edge keeps the copper-to-edge distance
+	{ rule: 'hole-keep-out', what: 'mounting hole wall to the feed line', build: (g) => withMountingHole(edgeFedArtwork(), [21 + g + 0.5, 5], 1, 8), limitMm: P.copperToEdgeMm }
 ];
+
+/** The artwork with a top legend layer holding one stroke. */
+function withLegendStroke(a: Artwork, points: [number, number][], widthMm: number): Artwork {
+	const legend: ArtworkLayer = {
+		id: 'legend-top',
+		title: 'Top legend',
+		function: { kind: 'legend', side: 'top' },
+		shapes: [{ id: 'legend-mark', role: 'legend', polarity: 'dark', geometry: { kind: 'stroke', points, strokeWidthMm: widthMm } }],
+		voids: []
+	};
+	return { ...a, layers: [...a.layers, legend] };
+}
+
+/** The artwork with one non-plated mounting hole and the keep-out it states. */
+function withMountingHole(a: Artwork, center: [number, number], diameterMm: number, keepOutMm: number): Artwork {
+	return {
+		...a,
+		drills: [...a.drills, { id: 'mounting-hole-1', role: 'mounting', plated: false, center, diameterMm, fromCopper: 1, toCopper: 2 }],
+		metadata: { ...a.metadata, mountingHoleKeepOutMm: keepOutMm }
+	};
+}
 
 describe('checkArtwork, one rule at a time', () => {
 	it('covers every rule with at least one crafted case', () => {

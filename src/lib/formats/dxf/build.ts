@@ -50,6 +50,11 @@ export function buildDxfCommands(artwork: Artwork, meta?: ExportMeta, options: D
 				out.push({ type: 'circle', layer: name, center: g.center, radiusMm: g.diameterMm / 2 });
 				continue;
 			}
+			if (g.kind === 'stroke') {
+				// a legend stroke: its centre line, open (DXF draws no pen width)
+				out.push({ type: 'polyline', layer: name, vertices: g.points.map((at) => ({ at, bulge: 0 })), closed: false });
+				continue;
+			}
 			const contours = g.kind === 'region' ? [g.region.outer, ...g.region.holes] : [g.contour];
 			for (const c of contours) {
 				const circle = asCircle(c);

@@ -10,7 +10,7 @@ export interface DxfVertex {
 export type DxfCommand =
 	/** A layer with an AutoCAD colour index (1 red … 7 white). */
 	| { readonly type: 'layer'; readonly name: string; readonly colorIndex: number }
-	| { readonly type: 'polyline'; readonly layer: string; readonly vertices: readonly DxfVertex[]; readonly closed: true }
+	| { readonly type: 'polyline'; readonly layer: string; readonly vertices: readonly DxfVertex[]; readonly closed: boolean }
 	| { readonly type: 'circle'; readonly layer: string; readonly center: Point; readonly radiusMm: number }
 	/** A straight line (dimension and title-block linework). */
 	| { readonly type: 'line'; readonly layer: string; readonly from: Point; readonly to: Point }

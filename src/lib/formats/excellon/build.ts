@@ -28,9 +28,11 @@ export function buildExcellonCommands(artwork: Artwork, plated: boolean, meta: E
 	const diameters = [...new Set(drills.map((d) => d.diameterMm.toFixed(3)))].sort((a, b) => Number(a) - Number(b));
 	const toolOf = new Map(diameters.map((d, i) => [d, i + 1]));
 	for (const d of diameters) {
-		// a tool that drills only launch vias is a via drill (Gerber X2 spec §5.6.10, .AperFunction ViaDrill); every other hole is a component's
-		const vias = drills.filter((h) => h.diameterMm.toFixed(3) === d).every((h) => h.role === 'launch-via');
-		const use = vias ? 'ViaDrill' : 'ComponentDrill';
+		// a tool that drills only launch vias is a via drill (Gerber X2 spec §5.6.10, .AperFunction ViaDrill); one holding only
+		// mounting holes drills them for a screw: MechanicalDrill (Gerber Layer Format Specification, drill aperture functions,
+		// from memory); every other hole is a component's
+		const holes = drills.filter((h) => h.diameterMm.toFixed(3) === d);
+		const use = holes.every((h) => h.role === 'launch-via') ? 'ViaDrill' : holes.every((h) => h.role === 'mounting') ? 'MechanicalDrill' : 'ComponentDrill';
 		out.push({ type: 'attribute', name: 'TA.AperFunction', values: plated ? ['Plated', 'PTH', use] : ['NonPlated', 'NPTH', use] });
 		out.push({ type: 'define-tool', tool: toolOf.get(d)!, diameterMm: Number(d) });
 	}

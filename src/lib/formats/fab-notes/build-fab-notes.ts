@@ -6,7 +6,8 @@ import { fabNotesTemplate } from '../../../../templates/fab-notes';
 import type { Artwork } from '../../artwork';
 import type { DesignInput, OrderedLaminate } from '../../schemas/design-input';
 import { laminateClassFor, orderedLaminateOf } from '../../schemas/laminate';
-import type { FabProfile } from '../../schemas/fab-profile';
+import { legendRulesOf, type FabProfile } from '../../schemas/fab-profile';
+import type { SizedMaskCover } from '../../rf/mask-cover';
 import { replaceControlCharacters, toOneLine } from '../../schemas/plain-text';
 import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
 
@@ -24,6 +25,8 @@ export interface FabNotesExtras {
 	readonly profile: FabProfile;
 	/** The design input: the laminate that is bought (never a fitted εr) and whether the stack is explicit. */
 	readonly input: DesignInput;
+	/** What the sizing assumed of a mask over the patch (maskCoverage "covered"); absent: the patch is bare. */
+	readonly maskCover?: SizedMaskCover;
 	/** Design-rule violations the team waived for this export; absent for a clean design (the notes are then unchanged). */
 	readonly waiver?: FabNotesWaiver;
 }
@@ -51,6 +54,37 @@ function waiverCautions(w: FabNotesWaiver): string[] {
 }
 
 const n = (v: number, digits = 3) => String(Number(v.toFixed(digits)));
+
+/** The mask over the patch: what the sizing assumed of it, and how to keep the boards alike (RF: mask over the patch shifts resonance). */
+function coveredMaskAdvice(c: SizedMaskCover): string {
+	const said = (assumed: boolean) => (assumed ? 'assumed, not stated by the design' : 'as the design states');
+	return [
+		'Solder mask: it covers the patch on purpose; openings only as drawn on the mask layers.',
+		`   The patch was sized under ${n(c.thicknessMm * 1000, 1)} µm of mask (${said(c.assumed.thickness)}) of εr ${n(c.relativePermittivity, 2)} (${said(c.assumed.relativePermittivity)}):`,
+		`   its effective permittivity rises from ${n(c.uncoveredEffectivePermittivity, 4)} to ${n(c.coveredEffectivePermittivity, 4)}, and the resonance moves with it.`,
+		'   Mask colour and product (RF advice, common practice, no source): pigments change the mask\'s εr and loss a little;',
+		'   use one mask product and colour for every build of this design (green LPI is the most uniform), hold its',
+		'   thickness over the patch as even as the process allows, and tell the design team its datasheet εr and thickness.'
+	].join('\n');
+}
+
+/** Legend lines: the layer, where ink must not go, and anything left out for want of room. */
+function legendCautions(artwork: Artwork, profile: FabProfile): string[] {
+	const legend = artwork.metadata.legend;
+	if (!legend) return [];
+	const rules = legendRulesOf(profile);
+	return [
+		`Legend (silkscreen), top side only, as drawn on the legend layer: ${n(legend.strokeWidthMm)} mm lines, ${n(legend.textHeightMm)} mm text. Print it in the mask colour's usual contrasting ink; never over the patch, the feed or a mask opening (keep ${rules.legendToOpeningMm} mm clear, ${rules.legendToEdgeMm} mm inside the edge). Do not add your own marks or order numbers to the top side.`,
+		...(legend.omitted.length ? [`Legend items left out for want of room on the board: ${legend.omitted.join(', ')}.`] : [])
+	];
+}
+
+/** Mounting holes: non-plated, in their own drill file. */
+function mountingHoleCautions(artwork: Artwork): string[] {
+	const holes = artwork.drills.filter((d) => d.role === 'mounting');
+	if (holes.length === 0) return [];
+	return [`Mounting holes: ${holes.length} non-plated (NPTH) hole${holes.length === 1 ? '' : 's'} in the non-plated drill file; do not plate ${holes.length === 1 ? 'it' : 'them'}. Copper is pulled back around each on the planes, as drawn.`];
+}
 
 /** A nominal copper weight: µm → the nearest half ounce the trade orders by (at least ½ oz). */
 export function copperWeightOf(thicknessUm: number): string {
@@ -190,6 +224,8 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 		'Do not scale, mirror or rotate the artwork; top copper is viewed from the top.',
 		`Hold etched copper edges within ± ${profile.etchToleranceMm} mm on the patch and feed; report any over-etch.`,
 		'Do not add solder mask, silkscreen or copper over the patch and feed unless the mask layers say so.',
+		...legendCautions(artwork, profile),
+		...mountingHoleCautions(artwork),
 		...(extras.waiver ? waiverCautions(extras.waiver) : [])
 	]
 		.map((c) => `   - ${c}`)
@@ -225,7 +261,7 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 		thicknessToleranceMm: n((total * profile.boardThicknessTolerancePercent) / 100, 2),
 		copperPerLayer,
 		finish: profile.finish,
-		maskChoice: extras.solderMask ? 'yes, openings as drawn on the mask layers' : 'none',
+		maskChoice: extras.solderMask ? (extras.maskCover ? 'yes, over the patch too; openings as drawn on the mask layers' : 'yes, openings as drawn on the mask layers') : 'none',
 		laminateChoice,
 		fileCount: String(extras.fileNames.length),
 		fileList: extras.fileNames.map((f) => `       - ${f}`).join('\n'),
@@ -236,7 +272,9 @@ export function buildFabNotes(artwork: Artwork, meta: ExportMeta, extras: FabNot
 		laminate: laminateLines.join('\n'),
 		copperSides: `${layerCountWords(coppers.length)}.`,
 		copperTable,
-		maskAdvice: extras.solderMask
+		maskAdvice: extras.maskCover
+			? coveredMaskAdvice(extras.maskCover)
+			: extras.solderMask
 			? 'Solder mask: openings as drawn on the mask layers; the antenna copper stays bare.'
 			: 'No solder mask: leave the outer copper bare (mask over the patch would shift its resonance).',
 		toleranceTable,

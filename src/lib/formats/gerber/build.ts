@@ -14,12 +14,14 @@ export function gerberFileFunction(layer: ArtworkLayer): string[] {
 			return ['Profile', 'NP'];
 		case 'solder-mask':
 			return ['Soldermask', f.side === 'top' ? 'Top' : 'Bot'];
+		case 'legend':
+			return ['Legend', f.side === 'top' ? 'Top' : 'Bot'];
 	}
 }
 
 /** Aperture function of a flashed or stroked shape (Gerber spec §5.6.10), by role. */
 function apertureFunction(shape: ArtworkShape, layer: ArtworkLayer): string | null {
-	if (layer.function.kind === 'solder-mask') return null;
+	if (layer.function.kind === 'solder-mask' || layer.function.kind === 'legend') return null;
 	switch (shape.role) {
 		case 'probe-pad':
 			return 'ComponentPad';
@@ -59,7 +61,7 @@ export function buildGerberCommands(artwork: Artwork, layerId: string, meta: Exp
 	const apertureFor = (diameterMm: number, fn: string | null) => `${fmtKey(diameterMm)}|${fn ?? ''}`;
 	for (const shape of layer.shapes) {
 		const g = shape.geometry;
-		const d = g.kind === 'circle' ? g.diameterMm : g.kind === 'outline' ? g.strokeWidthMm : null;
+		const d = g.kind === 'circle' ? g.diameterMm : g.kind === 'outline' || g.kind === 'stroke' ? g.strokeWidthMm : null;
 		if (d === null) continue;
 		const fn = apertureFunction(shape, layer);
 		const key = apertureFor(d, fn);
@@ -119,7 +121,12 @@ export function buildGerberCommands(artwork: Artwork, layerId: string, meta: Exp
 			if (current !== code) out.push({ type: 'select-aperture', code });
 			current = code;
 			if (g.kind === 'circle') out.push({ type: 'flash', at: g.center });
-			else trace(g.contour);
+			else if (g.kind === 'outline') trace(g.contour);
+			else {
+				out.push({ type: 'move', to: g.points[0] });
+				setMode('linear');
+				for (const p of g.points.slice(1)) out.push({ type: 'line', to: p });
+			}
 		}
 	}
 	out.push({ type: 'end' });

@@ -1,9 +1,10 @@
 // The fab's view against the artwork: every layer present once, same copper within 0.5 %, same extents, same holes.
 import { createPolygonContour, type Bounds, type Region } from '../../geometry';
 import type { Artwork, ArtworkDrill } from '../../artwork';
-import { artworkImageItems, layerKeyOf } from './artwork-image';
+import { artworkImageItems, artworkStrokes, layerKeyOf } from './artwork-image';
 import { READ_BACK_TOLERANCE as TOL, type FabHole, type FabPolygon, type FabView, type ReadBackMismatch } from './fab-view';
 import { composeImage, differenceArea, imageArea, imagePerimeter } from './image-item';
+import { strokeDifference, strokeInkArea, strokeInkBounds } from './stroke-ink';
 
 const fmt = (v: number) => String(Math.round(v * 1e6) / 1e6);
 
@@ -54,6 +55,17 @@ export function compareFabView(artwork: Artwork, view: FabView): ReadBackMismatc
 		}
 		const file = found[0];
 		if (key === 'profile') continue; // judged as the board below
+		if (layer.function.kind === 'legend') {
+			// a legend is strokes: compared stroke by stroke, point by point, and by its ink's area and extents
+			const want = artworkStrokes(layer);
+			const diff = strokeDifference(want, file.strokes ?? [], TOL.extentsMm, TOL.drillDiameterMm);
+			if (diff) mismatch('layer-shape', `${key}: ${diff} (${file.fileName})`);
+			const wantArea = strokeInkArea(want);
+			if (Math.abs(file.areaMm2 - wantArea) > TOL.areaFraction * Math.max(wantArea, 1e-9)) mismatch('layer-area', `${key}: ${fmt(wantArea)} mm² of ink in the artwork, ${fmt(file.areaMm2)} mm² in ${file.fileName}`);
+			const ext = boundsDiffer(strokeInkBounds(want), file.bounds);
+			if (ext) mismatch('layer-extents', `${key}: ${ext}`);
+			continue;
+		}
 		const want = composeImage(artworkImageItems(layer));
 		const got = regionsOf(file.polygons);
 		const gotArea = imageArea(got);

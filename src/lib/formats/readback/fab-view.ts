@@ -24,6 +24,13 @@ export interface FabPolygon {
  */
 export type FabLayerKey = string;
 
+/** A line drawn with a round pen (a legend stroke): its centre line and the pen's width. */
+export interface FabStroke {
+	readonly points: FabRing;
+	readonly widthMm: number;
+	readonly polarity: 'dark' | 'clear';
+}
+
 export interface FabLayerImage {
 	readonly fileName: string;
 	readonly key: FabLayerKey;
@@ -32,6 +39,12 @@ export interface FabLayerImage {
 	readonly areaMm2: number;
 	/** Extents of the image; for the profile, of the outline's centre line. Null when empty. */
 	readonly bounds: Bounds | null;
+	/**
+	 * A legend layer's strokes, as drawn. Its polygons are then each pen position's disc and chord rectangle, not
+	 * joined (hundreds of overlapping pieces of ink join slowly and gain nothing), and its area is the pen-swept
+	 * area Σ (length × width + π width²/4) per stroke; it is compared stroke by stroke.
+	 */
+	readonly strokes?: readonly FabStroke[];
 }
 
 export interface FabHole {

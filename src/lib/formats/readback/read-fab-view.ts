@@ -4,6 +4,7 @@ import { layerKeyOfFileFunction } from './artwork-image';
 import { composeImage, toFabPolygons } from './image-item';
 import { readDrill } from './read-drill';
 import { readGerber } from './read-gerber';
+import { strokeInkArea, strokeInkBounds } from './stroke-ink';
 
 function textOf(f: FabFile): string {
 	const content = 'bytes' in f ? f.bytes : f.text;
@@ -42,6 +43,10 @@ export function readFabView(files: readonly FabFile[]): FabView {
 		if (key === 'profile') {
 			board = read.strokeBounds;
 			layers.push({ fileName: file.name, key, polygons: [], areaMm2: 0, bounds: read.strokeBounds });
+			continue;
+		}
+		if (key.startsWith('legend-')) {
+			layers.push({ fileName: file.name, key, polygons: read.items.map((i) => ({ outer: i.rings[0].map(([x, y]): [number, number] => [x, y]), holes: [] })), areaMm2: strokeInkArea(read.strokes), bounds: strokeInkBounds(read.strokes), strokes: read.strokes });
 			continue;
 		}
 		const image = composeImage(read.items);

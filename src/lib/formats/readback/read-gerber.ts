@@ -1,6 +1,7 @@
 // A Gerber file's text → its file function and image items, replayed from the @tracespace/parser syntax tree.
 import { createParser, type Root } from '@tracespace/parser';
 import { createCircleContour, flattenContour, contourBounds, mergeBounds, CHORD_TOLERANCE_MM, type Bounds, type Contour, type Point, type Segment } from '../../geometry';
+import type { FabStroke } from './fab-view';
 import type { ImageItem } from './image-item';
 import { lengthInMm, parseCoordinateMm, type NumberFormat } from './parse-coordinate';
 
@@ -10,6 +11,8 @@ export interface ReadGerber {
 	readonly items: ImageItem[];
 	/** Centre lines of strokes (the profile's outline), for extents. */
 	readonly strokeBounds: Bounds | null;
+	/** Every stroke drawn with a round aperture, in file order: its centre line (arcs flattened), pen width and polarity. */
+	readonly strokes: FabStroke[];
 	/** Why the file cannot be trusted, if it cannot. */
 	readonly problems: { readonly kind: 'file-unreadable' | 'file-unsupported'; readonly message: string }[];
 }
@@ -29,7 +32,7 @@ function toContour(start: Point, segments: Segment[]): Contour {
 }
 
 /** A round pen dragged along a polyline: the union of a rectangle per chord and a disc per vertex. */
-function strokeItems(points: readonly Point[], widthMm: number, polarity: 'dark' | 'clear'): ImageItem[] {
+export function strokeItems(points: readonly Point[], widthMm: number, polarity: 'dark' | 'clear'): ImageItem[] {
 	const r = widthMm / 2;
 	const items: ImageItem[] = points.map((p) => ({ polarity, rings: [flattenContour(createCircleContour(p, r), CHORD_TOLERANCE_MM)] }));
 	for (let i = 0; i + 1 < points.length; i++) {
@@ -59,6 +62,7 @@ export function readGerber(text: string): ReadGerber {
 	const tools = new Map<string, number>(); // code → diameter in file units
 	const items: ImageItem[] = [];
 	let strokeBounds: Bounds | null = null;
+	const strokes: FabStroke[] = [];
 	let regionStart: Point | null = null;
 	let regionSegments: Segment[] = [];
 	let strokeStart: Point | null = null;
@@ -80,6 +84,7 @@ export function readGerber(text: string): ReadGerber {
 				// a closing line back to the start makes the path a contour; flattenContour drops exactly that line's end
 				const pts = flattenContour({ start: strokeStart, segments: [...strokeSegments, { kind: 'line', to: strokeStart }] }, CHORD_TOLERANCE_MM);
 				for (const item of strokeItems(pts, lengthInMm(d, nf.units), polarity)) items.push(item);
+				strokes.push({ points: pts.map(([x, y]): [number, number] => [x, y]), widthMm: lengthInMm(d, nf.units), polarity });
 			}
 		}
 		strokeStart = null;
@@ -161,5 +166,5 @@ export function readGerber(text: string): ReadGerber {
 		}
 	}
 	closeStroke();
-	return { fileFunction, items, strokeBounds, problems };
+	return { fileFunction, items, strokeBounds, strokes, problems };
 }

@@ -69,7 +69,7 @@ const circleRegion = (center: Point, diameterMm: number): Region => polygonRegio
 function shapeRegions(shape: ArtworkShape): Region[] {
 	const g = shape.geometry;
 	if (g.kind === 'circle') return [circleRegion(g.center, g.diameterMm)];
-	if (g.kind === 'outline') return [];
+	if (g.kind === 'outline' || g.kind === 'stroke') return [];
 	const flat = (c: typeof g.region.outer) => createPolygonContour(flattenContour(c, STEP_CHORD_TOLERANCE_MM));
 	return [{ outer: flat(g.region.outer), holes: g.region.holes.map(flat) }];
 }

@@ -2,7 +2,7 @@
 // then the sheet shared with the DXF writer: dimensions in tiers, datum A and the title block.
 import type { Artwork, ArtworkLayer, ArtworkShape, DrawingLabel, DrawingSegment } from '../../artwork';
 import { replaceControlCharacters } from '../../schemas/plain-text';
-import type { Contour } from '../../geometry';
+import type { Contour, Point } from '../../geometry';
 import { buildDrawingSheet, type DrawingSheetOptions } from '../drawing-sheet';
 import type { ExportMeta } from '../export-meta';
 import type { SvgDocument, SvgElement } from './commands';
@@ -30,6 +30,7 @@ const GROUND_HATCH = { line: '#7d8ba0', paper: '#e6eaf0' } as const;
 const SUBSTRATE = '#f3f5ec';
 const MASK_OPENING = '#2f8f5b';
 const OTHER_LAYER = '#5c4a8a';
+const LEGEND_INK = '#3b3b46';
 const HATCH_ID = 'ground-hatch';
 
 const isGround = (layer: ArtworkLayer) => layer.function.kind === 'copper' && layer.shapes.some((s) => s.role === 'ground');
@@ -44,6 +45,9 @@ function lookOf(layer: ArtworkLayer): LayerLook {
 			return { fill: null, stroke: MASK_OPENING, dash: '0.6 0.4', opacity: '1' };
 		case 'profile':
 			return { fill: null, stroke: INK, opacity: '1' };
+		case 'legend':
+			// legend strokes in their pen width, in ink
+			return { fill: null, stroke: LEGEND_INK, opacity: '1' };
 		default:
 			return { fill: null, stroke: OTHER_LAYER, opacity: '1' };
 	}
@@ -67,12 +71,15 @@ export function buildSvgTree(artwork: Artwork, meta: ExportMeta, options: Drawin
 	const toSvgY = (y: number) => svgNumber(boardLengthMm - y);
 
 	const pathOf = (c: Contour): string => contourPathData(c, boardLengthMm);
+	const strokePathOf = (points: readonly Point[]): string => points.map((p, i) => `${i === 0 ? 'M' : 'L'}${toSvgX(p[0])} ${toSvgY(p[1])}`).join('');
 	const shapeElement = (s: ArtworkShape, look: LayerLook, fillOverride?: string): SvgElement => {
 		const g = s.geometry;
 		const fill = fillOverride ?? look.fill;
 		const paint: Record<string, string> =
 			fill === null ? { fill: 'none', stroke: look.stroke, 'stroke-width': '0.15', ...(look.dash ? { 'stroke-dasharray': look.dash } : {}) } : { fill };
 		if (g.kind === 'circle') return el('circle', { id: s.id, cx: toSvgX(g.center[0]), cy: toSvgY(g.center[1]), r: svgNumber(g.diameterMm / 2), ...paint });
+		if (g.kind === 'stroke')
+			return el('path', { id: s.id, d: strokePathOf(g.points), fill: 'none', stroke: fill ?? look.stroke, 'stroke-width': svgNumber(g.strokeWidthMm), 'stroke-linecap': 'round', 'stroke-linejoin': 'round' });
 		if (g.kind === 'outline') return el('path', { id: s.id, d: pathOf(g.contour), fill: 'none', stroke: look.fill ?? look.stroke, 'stroke-width': svgNumber(g.strokeWidthMm) });
 		return el('path', { id: s.id, d: [g.region.outer, ...g.region.holes].map(pathOf).join(''), ...paint, ...(fill === null ? {} : { 'fill-rule': 'evenodd' }) });
 	};

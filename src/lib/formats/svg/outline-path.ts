@@ -32,6 +32,8 @@ function shapePathData(s: ArtworkShape, boardLengthMm: number): string {
 	const g = s.geometry;
 	if (g.kind === 'circle') return circlePathData(g.center, g.diameterMm / 2, boardLengthMm);
 	if (g.kind === 'outline') return contourPathData(g.contour, boardLengthMm);
+	// an open pen stroke (legend lettering) as its centre line
+	if (g.kind === 'stroke') return g.points.map((p, i) => `${i === 0 ? 'M' : 'L'}${svgNumber(p[0])} ${svgNumber(boardLengthMm - p[1])}`).join('');
 	return [g.region.outer, ...g.region.holes].map((c) => contourPathData(c, boardLengthMm)).join('');
 }
 

@@ -38,7 +38,7 @@ export function diffRevisions(a: DiffSide, b: DiffSide): RevisionDiff {
 	const inputs = designFormFields.filter(applies).map((f) => {
 		const va = valueAtPath(a.input, f.path);
 		const vb = valueAtPath(b.input, f.path);
-		const show = (v: unknown) => (v === undefined || v === null ? '—' : typeof v === 'number' ? formatPlain(f.scale ? f.scale.toForm(v) : v) : typeof v === 'boolean' ? (v ? 'yes' : 'no') : String(v));
+		const show = (v: unknown) => (f.presence ? (v ? 'yes' : 'no') : v === undefined || v === null ? '—' : f.codec ? f.codec.toForm(v) : typeof v === 'number' ? formatPlain(f.scale ? f.scale.toForm(v) : v) : typeof v === 'boolean' ? (v ? 'yes' : 'no') : String(v));
 		return row(f.name, f.group, f.label, f.unit, va, vb, show(va), show(vb));
 	});
 

@@ -25,6 +25,11 @@ export async function startDesign(db: Kysely<Database>, opts: { teamId: string; 
 		frequencyHz: hzFromGhz(form.frequencyGHz),
 		shape: form.shape,
 		feed: defaultFeedFor(form.shape),
+		// a new design starts with mask layers (the patch left bare under an opening) and a top legend; a document
+		// without these keys (the API, the CLI, a stored revision) keeps its own meaning: no mask, no legend
+		solderMask: true,
+		maskCoverage: 'exposed',
+		legend: {},
 		substrate: { ...laminate.properties },
 		// named, so the fab notes order this laminate by name with its stated values
 		laminate: {

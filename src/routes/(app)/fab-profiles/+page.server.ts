@@ -12,6 +12,9 @@ import type { Actions, PageServerLoad } from './$types';
 
 const lengthKeys = ['minTraceWidthMm', 'minSpacingMm', 'minDrillMm', 'minAnnularRingMm', 'copperToEdgeMm', 'minSlotWidthMm', 'etchToleranceMm', 'platedDrillToleranceMm', 'nonPlatedDrillToleranceMm'] as const;
 
+/** The legend rules: optional, blank takes the stated default (LEGEND_DEFAULTS). */
+const legendKeys = ['minLegendWidthMm', 'legendToOpeningMm', 'legendToEdgeMm'] as const;
+
 /** The process keys beside the lengths: copper layers, mixed cores (a checkbox), thickness ± %, finish. */
 const processKeys = ['maxCopperLayers', 'mixedCores', 'boardThicknessTolerancePercent', 'finish'] as const;
 
@@ -29,15 +32,16 @@ export const actions: Actions = {
 		const data = await event.request.formData();
 		const teamId = String(data.get('teamId') ?? '');
 		const { user } = await requireTeamRole(event, teamId, 'fab-profile.write');
-		const values = Object.fromEntries(['name', ...lengthKeys, ...processKeys].map((k) => [k, String(data.get(k) ?? '')]));
+		const values = Object.fromEntries(['name', ...lengthKeys, ...legendKeys, ...processKeys].map((k) => [k, String(data.get(k) ?? '')]));
 		const num = (t: string) => (t.trim() === '' ? undefined : Number(t));
 		// Lengths: a bare number is in the unit the form was shown in (the person's), "8 mil" or "0.2 mm" say their own.
 		const posted = data.get('lengthUnit');
 		const unit = isLengthUnit(posted) ? posted : (await findDisplayUnits(user.id)).length;
-		const lengths = Object.fromEntries(lengthKeys.map((k) => [k, values[k].trim() === '' ? undefined : parseLengthMm(values[k], unit)]));
+		const lengths = Object.fromEntries([...lengthKeys, ...legendKeys].map((k) => [k, values[k].trim() === '' ? undefined : parseLengthMm(values[k], unit)]));
 		const raw = {
 			name: values.name,
 			...Object.fromEntries(lengthKeys.map((k) => [k, lengths[k] === undefined ? undefined : lengths[k].ok ? lengths[k].value : Number.NaN])),
+			...Object.fromEntries(legendKeys.flatMap((k) => (lengths[k] === undefined ? [] : [[k, lengths[k].ok ? lengths[k].value : Number.NaN]]))),
 			maxCopperLayers: num(values.maxCopperLayers),
 			boardThicknessTolerancePercent: num(values.boardThicknessTolerancePercent),
 			mixedCores: values.mixedCores === 'on',

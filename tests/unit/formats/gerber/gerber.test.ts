@@ -25,7 +25,7 @@ function artworkLayerArea(layer: ArtworkLayer): number {
 	let image: MultiPolygon = [];
 	for (const s of layer.shapes) {
 		const g = s.geometry;
-		if (g.kind === 'outline') continue;
+		if (g.kind === 'outline' || g.kind === 'stroke') continue;
 		const rings =
 			g.kind === 'circle'
 				? [circleRing([g.center[0], g.center[1]], g.diameterMm)]
