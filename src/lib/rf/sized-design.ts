@@ -259,6 +259,7 @@ export interface SizedTextbook {
 	insetDepthMm?: number;
 	/** Probe distance from the patch centre by cos² (J1² for a disc) on that edge resistance (probe feed). */
 	probeOffsetMm?: number;
+	transformerImpedanceOhm?: number;
 }
 
 /** The expected error of the first-pass resonance and the range of the data behind it. */
