@@ -259,7 +259,6 @@ export interface SizedTextbook {
 	insetDepthMm?: number;
 	/** Probe distance from the patch centre by cos² (J1² for a disc) on that edge resistance (probe feed). */
 	probeOffsetMm?: number;
-	transformerImpedanceOhm?: number;
 }
 
 /** The expected error of the first-pass resonance and the range of the data behind it. */
@@ -329,4 +328,5 @@ export interface FormulaValues {
 	radiusMm?: number;
 	insetDepthMm?: number;
 	probeOffsetMm?: number;
+	transformerImpedanceOhm?: number;
 }
