@@ -72,6 +72,18 @@ export function transformerStep(sized: SizedDesign, result: FieldCheckResult): n
 	return Math.sqrt(z0 * Math.hypot(atEdge.re, atEdge.im));
 }
 
+/**
+ * The next section impedance from the trials so far: each trial's own Zt and the Zt its transformerStep
+ * proposes. The first step takes the proposal; later steps take the secant root of the residual
+ * (proposal − Zt) through the last two trials, so a section the engine sees as longer or shorter than
+ * λg/4 (the junction, the patch edge's fringing) does not make the steps swing about the answer.
+ */
+export function nextTransformerImpedance(current: { impedanceOhm: number; proposedOhm: number }, previous: { impedanceOhm: number; proposedOhm: number } | null): number {
+	const r1 = current.proposedOhm - current.impedanceOhm;
+	if (!previous) return current.proposedOhm;
+	return secant(previous.impedanceOhm, previous.proposedOhm - previous.impedanceOhm, current.impedanceOhm, r1, current.proposedOhm);
+}
+
 /** Next value by the secant through the last two points, or `fallback` when they cannot give one. */
 export function secant(x0: number, y0: number, x1: number, y1: number, fallback: number): number {
 	const slope = (y1 - y0) / (x1 - x0);

@@ -3,7 +3,7 @@ import { size } from '../../lib/rf';
 import type { SizedDesign } from '../../lib/rf/sized-design';
 import type { FieldCheckOptions, FieldCheckResult, HomingIteration, HomingParameter, HomingResult } from '../../lib/schemas/field-check';
 import { InputError, parseDesignInput, type DesignInput, type DimensionOverrides } from '../../lib/schemas';
-import { cosineModelStep, feedPointResistance, secant, transformerStep, type FeedKey } from './homing-steps';
+import { cosineModelStep, feedPointResistance, nextTransformerImpedance, secant, transformerStep, type FeedKey } from './homing-steps';
 import { runFieldCheck, type FieldCheckContext } from './run-field-check';
 
 /** Resonance within this fraction of the target ends the first phase. */
@@ -126,8 +126,11 @@ export async function runHoming(input: unknown, options: Partial<FieldCheckOptio
 		const y1 = feedCur.overrides[feed.key]!;
 		let value: number;
 		if (feed.key === 'transformerImpedanceOhm') {
-			// the section's impedance from the de-embedded patch edge (a fixed point, no secant), within the schema's 10–300 Ω
-			value = Math.min(TRANSFORMER_MAX_OHM, Math.max(TRANSFORMER_MIN_OHM, clampFeedStep(y1, transformerStep(sizedAt(feedCur), feedCur.result))));
+			// the section's impedance from the de-embedded patch edge, by the secant on the step's residual once two
+			// trials exist (the bare step overshoots when the drawn section is not exactly λg/4), within 10–300 Ω
+			const point = (t: Trial) => ({ impedanceOhm: t.overrides.transformerImpedanceOhm!, proposedOhm: transformerStep(sizedAt(t), t.result) });
+			const next = nextTransformerImpedance(point(feedCur), feedPrev ? point(feedPrev) : null);
+			value = Math.min(TRANSFORMER_MAX_OHM, Math.max(TRANSFORMER_MIN_OHM, clampFeedStep(y1, next)));
 		} else {
 			const m1 = mismatch(feedCur);
 			const modelStep = cosineModelStep(sizedAt(feedCur), feed.key, y1, m1 + zRef, zRef);

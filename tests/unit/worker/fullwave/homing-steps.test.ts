@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { size } from '../../../../src/lib/rf';
 import type { FieldCheckResult } from '../../../../src/lib/schemas/field-check';
-import { cosineModelStep, feedPointResistance, loadThroughLine, secant, transformerStep } from '../../../../src/worker/fullwave/homing-steps';
+import { cosineModelStep, feedPointResistance, loadThroughLine, nextTransformerImpedance, secant, transformerStep } from '../../../../src/worker/fullwave/homing-steps';
 
 const inset = size({ frequencyHz: 2.45e9, feed: 'inset', substrate: { relativePermittivity: 4.3, heightMm: 1.6 } });
 const probe = size({ frequencyHz: 2.45e9, feed: 'probe', substrate: { relativePermittivity: 4.3, heightMm: 1.6 } });
@@ -118,5 +118,41 @@ describe('Homing on the quarter-wave feed', () => {
 		const moved = { re: 195, im: 20 };
 		const second = transformerStep(withSection(zt), resultSeeing(portSees(withSection(zt), moved)));
 		expect(s11Db(portSees(withSection(second), moved))).toBeLessThan(-20);
+	});
+
+	it('reaches −20 dB where the patch edge moves with the section: the secant settles what the bare step swings about', () => {
+		// A synthetic response shaped on the quick Homing run of the README's quarter-wave example: there the
+		// de-embedded edge fell from 142 Ω to 113 Ω as the section went from 77 Ω to 84 Ω (the section's width
+		// changes its junction with the radiating edge), |Z_L| ∝ Zt^−2.6, so the bare step Zt → √(Z0·|Z_L|)
+		// swings with a slope of −1.3 about its fixed point.
+		const edgeFor = (zt: number) => ({ re: 142 * (77.4 / zt) ** 2.6, im: 10 });
+		const study = (useSecant: boolean) => {
+			let zt = 88.6;
+			let previous: { impedanceOhm: number; proposedOhm: number } | null = null;
+			const s11: number[] = [];
+			for (let step = 0; step < 5; step++) {
+				const sized = withSection(zt);
+				const seen = portSees(sized, edgeFor(zt));
+				s11.push(s11Db(seen));
+				const current = { impedanceOhm: zt, proposedOhm: transformerStep(sized, resultSeeing(seen)) };
+				zt = useSecant ? nextTransformerImpedance(current, previous) : current.proposedOhm;
+				previous = current;
+			}
+			return s11;
+		};
+		const bare = study(false);
+		const settled = study(true);
+		expect(settled[0]).toBeGreaterThan(-20);
+		expect(Math.min(...settled.slice(1, 4))).toBeLessThan(-20);
+		expect(settled[4]).toBeLessThan(-25); // the edge's +10 Ω reactance bounds what one real Zt can do
+		// the bare step never gets there: each step overshoots the last
+		expect(Math.min(...bare)).toBeGreaterThan(-20);
+	});
+
+	it('takes the first proposal as it is and falls back on it when two trials give the same residual', () => {
+		expect(nextTransformerImpedance({ impedanceOhm: 80, proposedOhm: 92 }, null)).toBe(92);
+		// residual +12 at 80 Ω and −6 at 92 Ω: the secant root of a straight residual, 88 Ω
+		expect(nextTransformerImpedance({ impedanceOhm: 92, proposedOhm: 86 }, { impedanceOhm: 80, proposedOhm: 92 })).toBeCloseTo(88, 9);
+		expect(nextTransformerImpedance({ impedanceOhm: 92, proposedOhm: 95 }, { impedanceOhm: 80, proposedOhm: 83 })).toBe(95);
 	});
 });
