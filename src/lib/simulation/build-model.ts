@@ -15,8 +15,8 @@ export const END_CRITERION_DB = -40;
 export const CELLS_PER_WAVELENGTH: Record<FieldCheckMode, number> = { quick: 12, standard: 20, accurate: 20 };
 /**
  * Fewest cells through each dielectric layer, by mode (before the refinement factor). Four cells
- * put a 1.57 mm board's measured patch (R6 of the Accuracy table) 0.23 % lower than eight and
- * 0.29 % lower than twelve (Rmax 4.888 / 4.900 / 4.903 GHz on openEMS 0.0.35): the fields under
+ * put a 1.57 mm board's measured patch (R6 of the Accuracy table) 0.25 % lower than eight and
+ * 0.30 % lower than twelve (Rmax 4.888 / 4.900 / 4.903 GHz on openEMS 0.0.35): the fields under
  * the patch edge vary over a fraction of h, so standard and accurate take eight; quick, a first
  * look, keeps four.
  */
