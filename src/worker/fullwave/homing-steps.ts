@@ -74,14 +74,19 @@ export function transformerStep(sized: SizedDesign, result: FieldCheckResult): n
 
 /**
  * The next section impedance from the trials so far: each trial's own Zt and the Zt its transformerStep
- * proposes. The first step takes the proposal; later steps take the secant root of the residual
- * (proposal − Zt) through the last two trials, so a section the engine sees as longer or shorter than
- * λg/4 (the junction, the patch edge's fringing) does not make the steps swing about the answer.
+ * proposes (residual = proposal − Zt). The first step takes the proposal (exact when the patch edge does
+ * not move with the section). Once two residuals bracket the root, the secant between them; while they
+ * share a sign, half the way to the current proposal. A quick real run showed why: the edge load moves
+ * with the section's width, so the bare step swung 77 ↔ 85 Ω, and an unbracketed secant through two far
+ * trials jumped to the 40 % clamp.
  */
 export function nextTransformerImpedance(current: { impedanceOhm: number; proposedOhm: number }, previous: { impedanceOhm: number; proposedOhm: number } | null): number {
 	const r1 = current.proposedOhm - current.impedanceOhm;
 	if (!previous) return current.proposedOhm;
-	return secant(previous.impedanceOhm, previous.proposedOhm - previous.impedanceOhm, current.impedanceOhm, r1, current.proposedOhm);
+	const r0 = previous.proposedOhm - previous.impedanceOhm;
+	const halfWay = current.impedanceOhm + r1 / 2;
+	if (r0 * r1 >= 0) return halfWay;
+	return secant(previous.impedanceOhm, r0, current.impedanceOhm, r1, halfWay);
 }
 
 /** Next value by the secant through the last two points, or `fallback` when they cannot give one. */

@@ -149,10 +149,13 @@ describe('Homing on the quarter-wave feed', () => {
 		expect(Math.min(...bare)).toBeGreaterThan(-20);
 	});
 
-	it('takes the first proposal as it is and falls back on it when two trials give the same residual', () => {
+	it('takes the first proposal as it is, the secant inside a bracket, and half a step without one', () => {
 		expect(nextTransformerImpedance({ impedanceOhm: 80, proposedOhm: 92 }, null)).toBe(92);
-		// residual +12 at 80 Ω and −6 at 92 Ω: the secant root of a straight residual, 88 Ω
+		// residual +12 at 80 Ω and −6 at 92 Ω bracket the root: the secant root of a straight residual, 88 Ω
 		expect(nextTransformerImpedance({ impedanceOhm: 92, proposedOhm: 86 }, { impedanceOhm: 80, proposedOhm: 92 })).toBeCloseTo(88, 9);
-		expect(nextTransformerImpedance({ impedanceOhm: 92, proposedOhm: 95 }, { impedanceOhm: 80, proposedOhm: 83 })).toBe(95);
+		// the quick real run's first two feed trials, residuals −16.1 and −11.4 Ω: no bracket, half way to 77.2 Ω
+		expect(nextTransformerImpedance({ impedanceOhm: 88.6, proposedOhm: 77.2 }, { impedanceOhm: 104.7, proposedOhm: 88.6 })).toBeCloseTo(82.9, 9);
+		// equal residuals give no secant either
+		expect(nextTransformerImpedance({ impedanceOhm: 92, proposedOhm: 95 }, { impedanceOhm: 80, proposedOhm: 83 })).toBeCloseTo(93.5, 9);
 	});
 });
