@@ -52,13 +52,20 @@ export async function runFullwaveBench(argv: string[]): Promise<void> {
 		}
 	}
 	if (!argv.includes('--skip-homing')) {
-		console.error('Homing, rectangular-inset, quick…');
-		const started = performance.now();
-		const h = await runHoming(fixture('rectangular-inset'), { mode: 'quick', budgetSeconds: 7200 }, {});
-		const seconds = (performance.now() - started) / 1000;
-		lines.push('', `Homing (quick mode, rectangular-inset): ${h.iterations.length} rows, ${h.iterations[h.iterations.length - 1]?.simulations ?? 0} simulations, ${seconds.toFixed(0)} s; ${h.converged ? 'converged' : 'not converged'}: ${h.stoppedBecause}.`);
-		lines.push('', '| step | parameter | value mm | resonance GHz | S11 at target dB |', '| ---: | --- | ---: | ---: | ---: |');
-		for (const it of h.iterations) lines.push(`| ${it.step} | ${it.parameter} | ${it.value.toFixed(3)} | ${ghz(it.resonanceHz)} | ${it.s11AtTargetDb.toFixed(1)} |`);
+		// the inset case, and a quarter-wave feed (its λg/4 section's impedance is the feed dimension; value in Ω)
+		const studies = [
+			{ name: 'rectangular-inset', input: fixture('rectangular-inset') },
+			{ name: 'quarter-wave', input: JSON.parse(readFileSync(join(rootDir, 'tests/fixtures/simulation-homing/quarter-wave/input.json'), 'utf8')) }
+		];
+		for (const study of studies) {
+			console.error(`Homing, ${study.name}, quick…`);
+			const started = performance.now();
+			const h = await runHoming(study.input, { mode: 'quick', budgetSeconds: 7200 }, {});
+			const seconds = (performance.now() - started) / 1000;
+			lines.push('', `Homing (quick mode, ${study.name}): ${h.iterations.length} rows, ${h.iterations[h.iterations.length - 1]?.simulations ?? 0} simulations, ${seconds.toFixed(0)} s; ${h.converged ? 'converged' : 'not converged'}: ${h.stoppedBecause}.`);
+			lines.push('', '| step | parameter | value mm (Ω for the section) | resonance GHz | S11 at target dB |', '| ---: | --- | ---: | ---: | ---: |');
+			for (const it of h.iterations) lines.push(`| ${it.step} | ${it.parameter} | ${it.value.toFixed(3)} | ${ghz(it.resonanceHz)} | ${it.s11AtTargetDb.toFixed(1)} |`);
+		}
 	}
 	lines.push('', ...(await farFieldStudy(cases)));
 	console.log(lines.join('\n'));
