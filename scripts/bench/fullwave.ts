@@ -1,7 +1,8 @@
-// `npm run bench -- --fullwave [--cases a,b] [--skip-homing] [--pattern-only]`: Field check timings on the real openEMS,
+// `npm run bench -- --fullwave [--cases a,b] [--skip-homing] [--pattern-only] [--validation]`: Field check timings on the real openEMS,
 // printed as Markdown. Standard and accurate mode per case (accurate's shift is the mesh-convergence figure), one Homing
 // study (quick mode), and the far field against the textbook patch (validation: full-wave directivity against the
-// published design example's two-slot directivity) and against the sizing's estimate for every case.
+// published design example's two-slot directivity) and against the sizing's estimate for every case. `--validation` runs
+// only the measured patches (standard mode, one engine thread) against their published resonances.
 import { readFileSync } from 'node:fs';
 import { cpus } from 'node:os';
 import { join } from 'node:path';
@@ -10,6 +11,7 @@ import { ensureOpenEms } from '../lib/openems.ts';
 import { runFieldCheck, runHoming } from '../../src/worker/fullwave/index.ts';
 import { size } from '../../src/lib/rf/index.ts';
 import type { FieldCheckResult } from '../../src/lib/schemas/field-check.ts';
+import { impedanceResonance } from '../../src/lib/simulation/index.ts';
 
 const CASES = ['rectangular-inset', 'rectangular-probe', 'circular-probe'];
 
@@ -33,6 +35,7 @@ export async function runFullwaveBench(argv: string[]): Promise<void> {
 	const casesArg = argv.indexOf('--cases');
 	const cases = casesArg >= 0 ? argv[casesArg + 1].split(',') : CASES;
 	if (argv.includes('--pattern-only')) return console.log((await farFieldStudy(cases)).join('\n'));
+	if (argv.includes('--validation')) return console.log((await measuredPatchStudy()).join('\n'));
 	const lines = [
 		`Field check on openEMS, ${cpus().length} cores (${cpus()[0]?.model ?? 'unknown CPU'}), Node.js ${process.version}, ${new Date().toISOString().slice(0, 10)}.`,
 		'',
@@ -49,13 +52,20 @@ export async function runFullwaveBench(argv: string[]): Promise<void> {
 		}
 	}
 	if (!argv.includes('--skip-homing')) {
-		console.error('Homing, rectangular-inset, quick…');
-		const started = performance.now();
-		const h = await runHoming(fixture('rectangular-inset'), { mode: 'quick', budgetSeconds: 7200 }, {});
-		const seconds = (performance.now() - started) / 1000;
-		lines.push('', `Homing (quick mode, rectangular-inset): ${h.iterations.length} rows, ${h.iterations[h.iterations.length - 1]?.simulations ?? 0} simulations, ${seconds.toFixed(0)} s; ${h.converged ? 'converged' : 'not converged'}: ${h.stoppedBecause}.`);
-		lines.push('', '| step | parameter | value mm | resonance GHz | S11 at target dB |', '| ---: | --- | ---: | ---: | ---: |');
-		for (const it of h.iterations) lines.push(`| ${it.step} | ${it.parameter} | ${it.value.toFixed(3)} | ${ghz(it.resonanceHz)} | ${it.s11AtTargetDb.toFixed(1)} |`);
+		// the inset case, and a quarter-wave feed (its λg/4 section's impedance is the feed dimension; value in Ω)
+		const studies = [
+			{ name: 'rectangular-inset', input: fixture('rectangular-inset') },
+			{ name: 'quarter-wave', input: JSON.parse(readFileSync(join(rootDir, 'tests/fixtures/simulation-homing/quarter-wave/input.json'), 'utf8')) }
+		];
+		for (const study of studies) {
+			console.error(`Homing, ${study.name}, quick…`);
+			const started = performance.now();
+			const h = await runHoming(study.input, { mode: 'quick', budgetSeconds: 7200 }, {});
+			const seconds = (performance.now() - started) / 1000;
+			lines.push('', `Homing (quick mode, ${study.name}): ${h.iterations.length} rows, ${h.iterations[h.iterations.length - 1]?.simulations ?? 0} simulations, ${seconds.toFixed(0)} s; ${h.converged ? 'converged' : 'not converged'}: ${h.stoppedBecause}.`);
+			lines.push('', '| step | parameter | value mm (Ω for the section) | resonance GHz | S11 at target dB |', '| ---: | --- | ---: | ---: | ---: |');
+			for (const it of h.iterations) lines.push(`| ${it.step} | ${it.parameter} | ${it.value.toFixed(3)} | ${ghz(it.resonanceHz)} | ${it.s11AtTargetDb.toFixed(1)} |`);
+		}
 	}
 	lines.push('', ...(await farFieldStudy(cases)));
 	console.log(lines.join('\n'));
@@ -94,6 +104,36 @@ async function farFieldStudy(cases: string[]): Promise<string[]> {
 		const offsetYMm = sized.feed.kind === 'probe' ? sized.feed.offsetYMm : undefined;
 		const atResonance = { ...input, frequencyHz: first.resonance.frequencyHz, overrides: { ...input.overrides, ...(offsetYMm === undefined ? {} : { probeOffsetMm: offsetYMm }) } };
 		add('textbook 10 GHz patch, at its simulated resonance', atResonance, await runFieldCheck(atResonance, { mode: 'standard', budgetSeconds: 7200 }, {}));
+	}
+	return lines;
+}
+
+/**
+ * Measured patches from the Accuracy table (Chang, Long & Richards 1986 as tabulated by Kara 1996; from memory), W × L
+ * pinned as overrides, probe-fed at the sizing's offset, on a ground 15 mm beyond the patch (the papers' boards are
+ * not recalled); tanδ 0.001 assumed. Each is run at its measured frequency and read three ways: the S11 minimum
+ * (50 Ω), the local peak of the input resistance and the reactance's + to − zero.
+ */
+const MEASURED_PATCHES = [
+	{ row: 'R6', dir: 'simulation-validation/measured-r6', measuredHz: 5.06e9 },
+	{ row: 'R8', dir: 'simulation-validation/measured-r8', measuredHz: 6.56e9 }
+];
+
+async function measuredPatchStudy(): Promise<string[]> {
+	const lines = [
+		'| row | measured GHz | S11 minimum GHz | error | S11 there dB | largest Re Zin GHz | error | Re Zin Ω | reactance zero GHz | cells | seconds |',
+		'| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |'
+	];
+	const err = (hz: number | null | undefined, measured: number) => (hz ? `${(((hz - measured) / measured) * 100).toFixed(2)} %` : '—');
+	for (const p of MEASURED_PATCHES) {
+		console.error(`measured patch ${p.row}, standard…`);
+		const input = JSON.parse(readFileSync(join(rootDir, 'tests/fixtures', p.dir, 'input.json'), 'utf8'));
+		const r = await runFieldCheck(input, { mode: 'standard', budgetSeconds: 7200 }, { threads: 1 });
+		const z = impedanceResonance(r.samples, r.resonance?.frequencyHz ?? p.measuredHz);
+		lines.push(
+			`| ${p.row} | ${ghz(p.measuredHz)} | ${ghz(r.resonance?.frequencyHz)} | ${err(r.resonance?.frequencyHz, p.measuredHz)} | ${r.resonance ? r.resonance.s11Db.toFixed(1) : '—'} | ${ghz(z.maxResistanceHz)} | ${err(z.maxResistanceHz, p.measuredHz)} | ${z.maxResistanceOhm.toFixed(0)} | ${ghz(z.zeroReactanceHz)} | ${r.mesh.cellCount} | ${r.runSeconds.toFixed(0)} |`
+		);
+		console.error(lines[lines.length - 1]);
 	}
 	return lines;
 }

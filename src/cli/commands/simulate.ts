@@ -26,9 +26,9 @@ E/H-plane cuts are in the app and the API, not on the terminal).
 
   --quick             coarse mesh (λ/12 in the dielectric): a first look in about a minute
   --accurate          standard mesh and 1.5× refined; reports how far refinement moved the resonance
-  --tune              Homing: moves the patch length (or radius), then the inset depth or probe
-                      offset, at most 8 simulations; prints the iterations and the tuned
-                      design-input document (with "overrides")
+  --tune              Homing: moves the patch length (or radius), then the inset depth, probe
+                      offset or quarter-wave section's impedance, at most 8 simulations; prints
+                      the iterations and the tuned design-input document (with "overrides")
   --touchstone FILE   also write the simulated S11 as a Touchstone 1.1 file (.s1p)
   --budget-seconds N  wall-clock budget of each engine run (default 900)
   --threads N         engine threads (default: all cores; or FRINGEFIELD_OPENEMS_THREADS)

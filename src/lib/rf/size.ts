@@ -97,8 +97,11 @@ function formulaValuesOf(d: DesignInput, fed: SizedFeed, core: Core): FormulaVal
 		case 'probe':
 			if (o.probeOffsetMm !== undefined) out.probeOffsetMm = probeFormulaOffset(d, core);
 			return out;
-		case 'edge':
 		case 'quarter-wave':
+			// the λg/4 section's own rule: Zt = √(R_edge·Z0)
+			if (o.transformerImpedanceOhm !== undefined) out.transformerImpedanceOhm = Math.sqrt(core.edgeResistanceOhm * d.targetImpedanceOhm);
+			return out;
+		case 'edge':
 		case 'aperture-coupled':
 		case 'proximity-coupled':
 			return out; // no feed dimension of these can be overridden
@@ -213,8 +216,10 @@ function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
 			};
 		}
 		case 'quarter-wave': {
+			// an overridden section impedance Zt is the √(load·source) of the load Zt²/Z0
+			const zt = d.overrides?.transformerImpedanceOhm;
 			const transformer = quarterWaveTransformer({
-				loadResistanceOhm: core.edgeResistanceOhm,
+				loadResistanceOhm: zt === undefined ? core.edgeResistanceOhm : (zt * zt) / d.targetImpedanceOhm,
 				sourceResistanceOhm: d.targetImpedanceOhm,
 				frequencyHz,
 				heightMm: s.heightMm,

@@ -331,4 +331,5 @@ export interface FormulaValues {
 	radiusMm?: number;
 	insetDepthMm?: number;
 	probeOffsetMm?: number;
+	transformerImpedanceOhm?: number;
 }

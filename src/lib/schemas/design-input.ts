@@ -212,7 +212,9 @@ export const dimensionOverridesSchema = z.strictObject({
 	/** Inset notch depth y0 from the radiating edge (feed "inset"). */
 	insetDepthMm: bounded(0, 1000).optional(),
 	/** Probe distance from the patch centre along the feed axis (feed "probe"). */
-	probeOffsetMm: bounded(0, 1000).optional()
+	probeOffsetMm: bounded(0, 1000).optional(),
+	/** Characteristic impedance of the λg/4 section (feed "quarter-wave"); its width and λg/4 length follow from it. */
+	transformerImpedanceOhm: bounded(10, 300).optional()
 });
 export type DimensionOverrides = z.infer<typeof dimensionOverridesSchema>;
 
@@ -421,6 +423,7 @@ function overrideRules(d: ParsedDocument, ctx: RefineContext): void {
 	if (o.radiusMm !== undefined && d.shape !== 'circular') issue('radiusMm', 'only a circular patch takes a radius override');
 	if (o.insetDepthMm !== undefined && d.feed !== 'inset') issue('insetDepthMm', 'only an inset feed takes an inset depth override');
 	if (o.probeOffsetMm !== undefined && d.feed !== 'probe') issue('probeOffsetMm', 'only a probe feed takes a probe offset override');
+	if (o.transformerImpedanceOhm !== undefined && d.feed !== 'quarter-wave') issue('transformerImpedanceOhm', 'only a quarter-wave feed takes a transformer impedance override');
 	if (o.probeOffsetMm !== undefined && d.shape === 'nearly-square') issue('probeOffsetMm', 'a nearly-square patch is fed on its diagonal; its probe offset cannot be overridden');
 }
 

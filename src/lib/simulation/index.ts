@@ -7,4 +7,4 @@ export { serializeFieldModel, formatNumber, nearFieldDumpFile, PORT_VOLTAGE_FILE
 export { serializeFarFieldRequest, FAR_FIELD_RESULT_FILE, type FarFieldRequest } from './serialize-far-field';
 export { analyzeFarField, radiationIntensity, acceptedPower, FarFieldError, FAR_FIELD_THETA_DEG, FAR_FIELD_PHI_DEG, CUT_FLOOR_DB, type FarFieldSphere } from './far-field';
 export { buildMesh, buildAxis, meshStatistics, thirdsLines, largestGradingRatio, MAX_GRADING_RATIO } from './mesh';
-export { analyzePortSeries, parsePortSeries, dft, type PortAnalysis, type PortAnalysisInput } from './post-process';
+export { analyzePortSeries, impedanceResonance, parsePortSeries, dft, type ImpedanceResonance, type PortAnalysis, type PortAnalysisInput } from './post-process';

@@ -129,3 +129,46 @@ export function parsePortSeries(text: string): PortSeries {
 	if (timeS.length < 2) throw new RangeError('port series: fewer than two samples');
 	return { timeS, values };
 }
+
+/** The resonance of a sampled Zin by its two impedance definitions. */
+export interface ImpedanceResonance {
+	maxResistanceHz: number | null;
+	maxResistanceOhm: number;
+	zeroReactanceHz: number | null;
+}
+
+/**
+ * The resonance of a sampled Zin by the two impedance definitions (beside the S11 minimum, which
+ * depends on the reference impedance): the local maximum of the input resistance nearest to
+ * `nearHz` (the cavity's parallel resonance; a probe's series reactance does not move it; a higher
+ * mode or the probe's own rise at the band's top is another maximum) refined by a parabola through
+ * it and its neighbours, and the zero crossing of the reactance from + to − nearest to it (linear
+ * between samples; null when the reactance never crosses, as behind an inductive probe).
+ */
+export function impedanceResonance(samples: readonly Pick<S11Sample, 'frequencyHz' | 'resistanceOhm' | 'reactanceOhm'>[], nearHz: number): ImpedanceResonance {
+	if (samples.length < 3) throw new RangeError('impedance resonance: fewer than three samples');
+	const r = samples.map((s) => s.resistanceOhm);
+	let iR = -1;
+	for (let i = 1; i + 1 < samples.length; i++) {
+		if (!(r[i] >= r[i - 1] && r[i] > r[i + 1])) continue;
+		if (iR < 0 || Math.abs(samples[i].frequencyHz - nearHz) < Math.abs(samples[iR].frequencyHz - nearHz)) iR = i;
+	}
+	let maxResistanceHz: number | null = null;
+	let maxResistanceOhm = Math.max(...r);
+	if (iR > 0) {
+		// the vertex of a maximum: the parabola of the negated values
+		const v = parabolaVertex(-r[iR - 1], -r[iR], -r[iR + 1]);
+		maxResistanceHz = samples[iR].frequencyHz + v.offset * (samples[iR + 1].frequencyHz - samples[iR].frequencyHz);
+		maxResistanceOhm = -v.value;
+	}
+	let zeroReactanceHz: number | null = null;
+	const near = maxResistanceHz ?? nearHz;
+	for (let i = 0; i + 1 < samples.length; i++) {
+		const a = samples[i];
+		const b = samples[i + 1];
+		if (!(a.reactanceOhm > 0 && b.reactanceOhm <= 0)) continue;
+		const f = a.frequencyHz + (a.reactanceOhm / (a.reactanceOhm - b.reactanceOhm)) * (b.frequencyHz - a.frequencyHz);
+		if (zeroReactanceHz === null || Math.abs(f - near) < Math.abs(zeroReactanceHz - near)) zeroReactanceHz = f;
+	}
+	return { maxResistanceHz, maxResistanceOhm, zeroReactanceHz };
+}

@@ -3,7 +3,7 @@ import { size } from '../../lib/rf';
 import type { SizedDesign } from '../../lib/rf/sized-design';
 import type { FieldCheckOptions, FieldCheckResult, HomingIteration, HomingParameter, HomingResult } from '../../lib/schemas/field-check';
 import { InputError, parseDesignInput, type DesignInput, type DimensionOverrides } from '../../lib/schemas';
-import { cosineModelStep, feedPointResistance, secant, type FeedKey } from './homing-steps';
+import { cosineModelStep, feedPointResistance, nextTransformerImpedance, secant, transformerStep, type FeedKey } from './homing-steps';
 import { runFieldCheck, type FieldCheckContext } from './run-field-check';
 
 /** Resonance within this fraction of the target ends the first phase. */
@@ -30,6 +30,9 @@ const clampFeedStep = (from: number, to: number) => {
 	const base = Math.max(from, 0.5);
 	return Math.min(base * (1 + MAX_FEED_STEP_FRACTION), Math.max(base * (1 - MAX_FEED_STEP_FRACTION), to));
 };
+/** The bounds of overrides.transformerImpedanceOhm. */
+const TRANSFORMER_MIN_OHM = 10;
+const TRANSFORMER_MAX_OHM = 300;
 const clampStep = (from: number, to: number) => Math.min(from * (1 + MAX_STEP_FRACTION), Math.max(from * (1 - MAX_STEP_FRACTION), to));
 
 function resonantDimension(sized: SizedDesign): { key: ResonantKey; valueMm: number } {
@@ -45,8 +48,9 @@ function feedDimension(sized: SizedDesign): { key: FeedKey; valueMm: number } | 
 			return { key: 'insetDepthMm', valueMm: feed.insetDepthMm };
 		case 'probe':
 			return { key: 'probeOffsetMm', valueMm: Math.hypot(feed.offsetXMm, feed.offsetYMm) };
-		case 'edge':
 		case 'quarter-wave':
+			return { key: 'transformerImpedanceOhm', valueMm: feed.transformer.impedanceOhm };
+		case 'edge':
 		case 'aperture-coupled':
 		case 'proximity-coupled':
 			return null; // no feed position to move
@@ -57,9 +61,9 @@ function feedDimension(sized: SizedDesign): { key: FeedKey; valueMm: number } | 
 
 /**
  * Moves the resonant dimension (length or radius) until the simulated resonance is within 0.3 % of
- * the target, then the feed (inset depth, probe offset) until S11 ≤ −20 dB at the target; at most 8
+ * the target, then the feed (inset depth, probe offset, a quarter-wave section's impedance) until S11 ≤ −20 dB at the target; at most 8
  * simulations. Returns the iterations and the tuned design-input document (its overrides set).
- * Feeds Homing cannot move (edge, quarter-wave) stop after the first phase.
+ * Feeds Homing cannot move (edge) stop after the first phase.
  */
 export async function runHoming(input: unknown, options: Partial<FieldCheckOptions>, context: Omit<FieldCheckContext, 'workDir'> = {}): Promise<HomingResult> {
 	const document: DesignInput = parseDesignInput(input);
@@ -120,11 +124,20 @@ export async function runHoming(input: unknown, options: Partial<FieldCheckOptio
 	let feedCur = tuned;
 	while (!done(feedCur) && trials.length < MAX_HOMING_SIMULATIONS) {
 		const y1 = feedCur.overrides[feed.key]!;
-		const m1 = mismatch(feedCur);
-		const modelStep = cosineModelStep(sizedAt(feedCur), feed.key, y1, m1 + zRef, zRef);
-		const next = feedPrev ? secant(feedPrev.overrides[feed.key]!, mismatch(feedPrev), y1, m1, modelStep) : modelStep;
+		let value: number;
+		if (feed.key === 'transformerImpedanceOhm') {
+			// the section's impedance from the de-embedded patch edge, by the secant on the step's residual once two
+			// trials exist (the bare step overshoots when the drawn section is not exactly λg/4), within 10–300 Ω
+			const point = (t: Trial) => ({ impedanceOhm: t.overrides.transformerImpedanceOhm!, proposedOhm: transformerStep(sizedAt(t), t.result) });
+			const next = nextTransformerImpedance(point(feedCur), feedPrev ? point(feedPrev) : null);
+			value = Math.min(TRANSFORMER_MAX_OHM, Math.max(TRANSFORMER_MIN_OHM, clampFeedStep(y1, next)));
+		} else {
+			const m1 = mismatch(feedCur);
+			const modelStep = cosineModelStep(sizedAt(feedCur), feed.key, y1, m1 + zRef, zRef);
+			const next = feedPrev ? secant(feedPrev.overrides[feed.key]!, mismatch(feedPrev), y1, m1, modelStep) : modelStep;
+			value = Math.max(0, clampFeedStep(y1, next));
+		}
 		feedPrev = feedCur;
-		const value = Math.max(0, clampFeedStep(y1, next));
 		const x1 = feedCur.overrides[resonant.key]!;
 		const e1 = errorOf(feedCur);
 		const resonantValue = e1 !== null && Math.abs(e1) > RESONANCE_TOLERANCE_FRACTION ? clampStep(x1, x1 * (1 + e1)) : x1;

@@ -99,3 +99,21 @@ describe('field-check runs recorded in the README (openEMS 0.0.35 through `simul
 		}
 	});
 });
+
+describe('field checks of measured patches recorded in the README', () => {
+	it('ran the measured rows’ own patches: W × L, h and εr of R6 and R8 at their measured frequency', async () => {
+		const { readFileSync } = await import('node:fs');
+		const { measuredPatchRuns } = await import('../../fixtures/rf/field-check-runs');
+		expect(measuredPatchRuns.map((r) => r.row)).toEqual(['R6', 'R8']);
+		for (const r of measuredPatchRuns) {
+			const p = measuredRectangularPatches[Number(r.row.slice(1)) - 1];
+			const input = JSON.parse(readFileSync(new URL(`../../fixtures/${r.fixture}/input.json`, import.meta.url), 'utf8'));
+			expect(input.overrides).toEqual({ widthMm: p.widthMm, lengthMm: p.lengthMm });
+			expect(input.substrate.heightMm).toBe(p.heightMm);
+			expect(input.substrate.relativePermittivity).toBe(p.relativePermittivity);
+			expect(input.frequencyHz).toBe(p.measuredHz);
+			expect(r.measuredHz).toBe(p.measuredHz);
+			expect(size(input).feed.kind).toBe('probe');
+		}
+	});
+});

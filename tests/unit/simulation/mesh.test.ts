@@ -53,12 +53,13 @@ describe('Field check mesh', () => {
 		});
 	});
 
-	it.each(fixtureCases().flatMap((name) => [[name, 'quick', 1], [name, 'standard', 1], [name, 'accurate', 1.5]] as const))('%s %s ×%s: ≥ 4 cells through the dielectric and neighbouring cells within 1.4×', (name, mode, refinement) => {
+	it.each(fixtureCases().flatMap((name) => [[name, 'quick', 1], [name, 'standard', 1], [name, 'accurate', 1.5]] as const))('%s %s ×%s: the mode’s fewest cells through the dielectric (4 quick, 8 standard) and neighbouring cells within 1.4×', (name, mode, refinement) => {
 		const model = fixtureModel(name, mode, refinement);
 		const sheetZ = model.properties.filter((p) => p.kind === 'sheet').map((p) => (p.primitives[0] as { zMm: number }).zMm);
 		const [bottom, top] = [Math.min(...sheetZ), Math.max(...sheetZ)];
 		const inside = model.mesh.zMm.filter((z) => z >= bottom - 1e-9 && z <= top + 1e-9);
-		expect(inside.length - 1).toBeGreaterThanOrEqual(Math.ceil(MIN_CELLS_PER_LAYER * refinement));
+		expect(inside.length - 1).toBeGreaterThanOrEqual(Math.ceil(MIN_CELLS_PER_LAYER[mode] * refinement));
+		expect(inside.length - 1).toBeGreaterThanOrEqual(mode === 'quick' ? 4 : 8);
 		// common practice for FDTD meshes, no source: neighbouring cells differ by at most 1.4×
 		for (const lines of [model.mesh.xMm, model.mesh.yMm, model.mesh.zMm]) expect(largestGradingRatio(lines)).toBeLessThanOrEqual(MAX_GRADING_RATIO);
 	});

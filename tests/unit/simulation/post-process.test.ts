@@ -1,6 +1,6 @@
 // The post-processor against an analytic series-RLC resonator driven by a Gaussian current pulse.
 import { describe, expect, it } from 'vitest';
-import { analyzePortSeries, parsePortSeries, type PortSeries } from '../../../src/lib/simulation';
+import { analyzePortSeries, impedanceResonance, parsePortSeries, type PortSeries } from '../../../src/lib/simulation';
 
 /**
  * A series RLC: Z(f) = R + j(2πfL − 1/(2πfC)), resonant at f0 = 1/(2π√(LC)) with Q = 2πf0L/R
@@ -82,6 +82,65 @@ describe('analyzePortSeries', () => {
 		const r = analyzePortSeries({ ...off, referenceImpedanceOhm: 50, targetFrequencyHz: 2.45e9, band: { lowHz: 1.715e9, highHz: 3.185e9 } });
 		expect(r.resonance).toBeNull();
 		expect(r.deviationFraction).toBeNull();
+	});
+});
+
+/**
+ * A probe-fed patch near its resonance: the probe's series inductance Lp in front of a parallel RLC,
+ * Zin = j2πf·Lp + R/(1 + jQ(f/f0 − f0/f)) (the cavity model's single-mode circuit, Pozar, Microwave
+ * Engineering 4th ed., §6.1 for the parallel RLC; probe as a series inductance, Balanis, Antenna Theory
+ * 4th ed., §14.2; both from memory). Re Zin peaks at f0 whatever Lp is; Im Zin crosses zero at f0 only
+ * without it, and above f0 (the parallel circuit turns capacitive there) where 2πf·Lp = R·Qν/(1 + Q²ν²), ν = f/f0 − f0/f.
+ */
+function probePatchSamples(opts: { resistanceOhm: number; resonanceHz: number; quality: number; probeNh: number; lowHz: number; highHz: number; count: number }) {
+	const { resistanceOhm: r, resonanceHz: f0, quality: q, probeNh, lowHz, highHz, count } = opts;
+	return Array.from({ length: count }, (_, i) => {
+		const f = lowHz + ((highHz - lowHz) * i) / (count - 1);
+		const nu = f / f0 - f0 / f;
+		const den = 1 + (q * nu) ** 2;
+		return { frequencyHz: f, resistanceOhm: r / den, reactanceOhm: 2 * Math.PI * f * probeNh * 1e-9 - (r * q * nu) / den };
+	});
+}
+
+describe('impedanceResonance', () => {
+	const band = { lowHz: 3.5e9, highHz: 6.5e9, count: 301 };
+	it('finds the resistance peak at f0 within 0.01 % with and without a probe inductance, and its height R', () => {
+		for (const probeNh of [0, 0.8]) {
+			const z = impedanceResonance(probePatchSamples({ resistanceOhm: 120, resonanceHz: 5e9, quality: 25, probeNh, ...band }), 5e9);
+			expect(Math.abs(z.maxResistanceHz! - 5e9) / 5e9).toBeLessThan(1e-4);
+			expect(z.maxResistanceOhm).toBeCloseTo(120, 0);
+		}
+	});
+
+	it('puts the reactance zero at f0 without a probe, and above it with one where 2πf·Lp = R·Qν/(1 + Q²ν²)', () => {
+		const bare = impedanceResonance(probePatchSamples({ resistanceOhm: 120, resonanceHz: 5e9, quality: 25, probeNh: 0, ...band }), 5e9);
+		expect(Math.abs(bare.zeroReactanceHz! - 5e9) / 5e9).toBeLessThan(1e-4);
+		const fed = impedanceResonance(probePatchSamples({ resistanceOhm: 120, resonanceHz: 5e9, quality: 25, probeNh: 0.8, ...band }), 5e9);
+		const f = fed.zeroReactanceHz!;
+		expect(f).toBeGreaterThan(5e9 * 1.002);
+		const nu = f / 5e9 - 5e9 / f;
+		const residual = 2 * Math.PI * f * 0.8e-9 - (120 * 25 * nu) / (1 + (25 * nu) ** 2);
+		expect(Math.abs(residual)).toBeLessThan(0.5); // Ω, linear interpolation between 10 MHz samples
+	});
+
+	it('reports no reactance zero behind a probe too inductive for one, and picks the peak nearest the one asked for', () => {
+		const steep = impedanceResonance(probePatchSamples({ resistanceOhm: 40, resonanceHz: 5e9, quality: 15, probeNh: 1.5, ...band }), 5e9);
+		expect(steep.zeroReactanceHz).toBeNull();
+		expect(Math.abs(steep.maxResistanceHz! - 5e9) / 5e9).toBeLessThan(1e-4);
+		// two modes: the peak nearest to 6 GHz is the second one
+		const a = probePatchSamples({ resistanceOhm: 60, resonanceHz: 4.5e9, quality: 30, probeNh: 0, ...band });
+		const b = probePatchSamples({ resistanceOhm: 90, resonanceHz: 6e9, quality: 30, probeNh: 0, ...band });
+		const two = a.map((s, i) => ({ frequencyHz: s.frequencyHz, resistanceOhm: s.resistanceOhm + b[i].resistanceOhm, reactanceOhm: s.reactanceOhm + b[i].reactanceOhm }));
+		expect(Math.abs(impedanceResonance(two, 6.1e9).maxResistanceHz! - 6e9) / 6e9).toBeLessThan(2e-3);
+		expect(Math.abs(impedanceResonance(two, 4.4e9).maxResistanceHz! - 4.5e9) / 4.5e9).toBeLessThan(2e-3);
+	});
+
+	it('gives no peak when the resistance only rises, and rejects fewer than three samples', () => {
+		const rising = [1, 2, 3, 4].map((k) => ({ frequencyHz: k * 1e9, resistanceOhm: 10 * k, reactanceOhm: 5 }));
+		const z = impedanceResonance(rising, 2e9);
+		expect(z.maxResistanceHz).toBeNull();
+		expect(z.zeroReactanceHz).toBeNull();
+		expect(() => impedanceResonance(rising.slice(0, 2), 2e9)).toThrow(RangeError);
 	});
 });
 
