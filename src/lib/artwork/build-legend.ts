@@ -1,5 +1,5 @@
 // The top legend (silkscreen): name, a slot for revision and date, order text, feed and polarisation marks, placed clear of copper.
-import { createRectangleContour, contourBounds, type Bounds, type Point } from '../geometry';
+import { createRectangleContour, contourBounds, maxOf, minOf, type Bounds, type Point } from '../geometry';
 import { toLegendText } from '../schemas/design-input';
 import type { SizedDesign } from '../rf/sized-design';
 import { textStrokes, textWidthMm } from './stroke-font';
@@ -63,7 +63,7 @@ export function shapeBounds(g: ShapeGeometry): Bounds {
 		case 'stroke': {
 			const xs = g.points.map((p) => p[0]);
 			const ys = g.points.map((p) => p[1]);
-			return grow(rect(Math.min(...xs), Math.min(...ys), Math.max(...xs), Math.max(...ys)), g.strokeWidthMm / 2);
+			return grow(rect(minOf(xs), minOf(ys), maxOf(xs), maxOf(ys)), g.strokeWidthMm / 2);
 		}
 	}
 }
@@ -145,9 +145,9 @@ function polarisationMark(sized: SizedDesign, h: number): Block {
 	// the mark's own extents (an arrow head may reach past the circle), moved to start at the block's corner
 	const xs = lines.flat().map((p) => p[0]);
 	const ys = lines.flat().map((p) => p[1]);
-	const [x0, y0] = [Math.min(...xs), Math.min(...ys)];
-	const markWidth = Math.max(...xs) - x0;
-	const markHeight = Math.max(...ys) - y0;
+	const [x0, y0] = [minOf(xs), minOf(ys)];
+	const markWidth = maxOf(xs) - x0;
+	const markHeight = maxOf(ys) - y0;
 	const height = Math.max(markHeight, h);
 	const mark = shift(lines, -x0, (height - markHeight) / 2 - y0);
 	const draw = (): Polyline[] => [...mark, ...textStrokes(label, [markWidth + gap, (height - h) / 2], h)];

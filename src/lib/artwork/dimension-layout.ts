@@ -1,6 +1,6 @@
 // Dimension layout shared by the drawing writers (SVG, DXF): every dimension placed outside the board in tiers per
 // side, so that no two labels overlap and each label sits beside its own dimension line. Board coordinates, y up, mm.
-import type { Bounds, Point } from '../geometry';
+import { maxOf, type Bounds, type Point } from '../geometry';
 import type { ArtworkDimension } from './types';
 
 /**
@@ -194,7 +194,7 @@ export function layoutDimensions(board: { widthMm: number; lengthMm: number }, d
 		// distance of each tier's line from the board edge
 		let offset = FIRST_GAP_EM * th;
 		tiers.forEach((tier, k) => {
-			const depth = horizontal ? boxH : Math.max(...tier.map((p) => p.widthMm));
+			const depth = horizontal ? boxH : maxOf(tier.map((p) => p.widthMm));
 			for (const p of tier) placed.push(place(p, k, offset));
 			offset += LABEL_GAP_EM * th + depth + TIER_GAP_EM * th + FIRST_GAP_EM * th * 0.5;
 		});

@@ -1,5 +1,5 @@
 // legend-width, legend-edge and legend-clearance: the legend's ink against the profile's least line, the board edge and the mask openings.
-import { LENGTH_EPSILON_MM, type Point } from '../geometry';
+import { LENGTH_EPSILON_MM, minOf, type Point } from '../geometry';
 import type { Artwork, ArtworkLayer, ArtworkShape } from '../artwork';
 import { legendRulesOf, type FabProfile } from '../schemas/fab-profile';
 import { boundaryPieces, type BoundaryPiece } from './boundary-piece';
@@ -41,7 +41,7 @@ export function checkLegendWidth(artwork: Artwork, profile: FabProfile): Violati
 		const thin = layer.shapes.filter((s) => s.geometry.kind === 'stroke' && s.geometry.strokeWidthMm < minLegendWidthMm - LENGTH_EPSILON_MM);
 		if (thin.length === 0) continue;
 		const widths = thin.map((s) => (s.geometry.kind === 'stroke' ? s.geometry.strokeWidthMm : Infinity));
-		const w = Math.min(...widths);
+		const w = minOf(widths);
 		const first = thin[widths.indexOf(w)];
 		const at = first.geometry.kind === 'stroke' ? first.geometry.points[0] : ([0, 0] as Point);
 		out.push({

@@ -12,3 +12,4 @@ export * from './geometry-error';
 export * from './ring-is-simple';
 export * from './point-in-ring';
 export * from './translate';
+export * from './extremes';

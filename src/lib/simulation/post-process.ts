@@ -1,6 +1,7 @@
 // Port time series → S11, Zin, resonance, −10 dB band and VSWR, by a direct DFT of voltage and current.
 import type { FieldCheckResult, S11Sample } from '../schemas/field-check';
 import type { PortSeries } from './types';
+import { maxOf } from '../geometry';
 
 /** Frequencies evaluated across the check band. */
 export const DEFAULT_POINT_COUNT = 301;
@@ -154,7 +155,7 @@ export function impedanceResonance(samples: readonly Pick<S11Sample, 'frequencyH
 		if (iR < 0 || Math.abs(samples[i].frequencyHz - nearHz) < Math.abs(samples[iR].frequencyHz - nearHz)) iR = i;
 	}
 	let maxResistanceHz: number | null = null;
-	let maxResistanceOhm = Math.max(...r);
+	let maxResistanceOhm = maxOf(r);
 	if (iR > 0) {
 		// the vertex of a maximum: the parabola of the negated values
 		const v = parabolaVertex(-r[iR - 1], -r[iR], -r[iR + 1]);

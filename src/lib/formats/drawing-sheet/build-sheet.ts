@@ -1,6 +1,6 @@
 // The drawing sheet shared by the SVG and DXF writers: dimensions in tiers, datum A, the title block, the sheet's extent.
 import { boxesOverlap, decimalsForResolution, DRAWING_TEXT_METRICS, formatLengthMm, labelAt, layoutDimensions, PROBE_DATUM, textWidthMm, type Artwork, type DrawingLabel, type DrawingSegment, type PlacedDimension } from '../../artwork';
-import type { Bounds } from '../../geometry';
+import { maxOf, minOf, type Bounds } from '../../geometry';
 import type { FabProfile } from '../../schemas/fab-profile';
 import type { ExportMeta } from '../export-meta';
 
@@ -43,7 +43,7 @@ export function drawingResolutionMm(profile: FabProfile | undefined): number {
 	if (!profile) return DEFAULT_DRAWING_RESOLUTION_MM;
 	const tolerances = [profile.etchToleranceMm, profile.platedDrillToleranceMm, profile.nonPlatedDrillToleranceMm].filter((t) => t > 0);
 	if (!tolerances.length) return DEFAULT_DRAWING_RESOLUTION_MM;
-	const finest = Math.min(...tolerances);
+	const finest = minOf(tolerances);
 	const step = 10 ** Math.floor(Math.log10(finest) - 1e-9);
 	return Math.min(0.1, Math.max(0.001, step));
 }
@@ -78,7 +78,7 @@ export function buildDrawingSheet(artwork: Artwork, meta: ExportMeta, options: D
 	// datum A: its letter framed in the corner below and left of the board (no dimension label reaches there), a leader to the corner
 	const boxH = DRAWING_TEXT_METRICS.boxEm * th;
 	// (a board narrower than a label below it lets that label pass its left edge: the letter moves further left)
-	const belowLeft = Math.min(0, ...layout.dimensions.filter((d) => d.label.box.maxYMm < 0).map((d) => d.label.box.minXMm));
+	const belowLeft = minOf([0, ...layout.dimensions.filter((d) => d.label.box.maxYMm < 0).map((d) => d.label.box.minXMm)]);
 	const letter = labelAt(PROBE_DATUM.name, belowLeft - 1.2 * th - textWidthMm(PROBE_DATUM.name, th), -1.2 * th - boxH, th);
 	const pad = 0.2 * th;
 	const frame: Bounds = { minXMm: letter.box.minXMm - pad, minYMm: letter.box.minYMm - pad, maxXMm: letter.box.maxXMm + pad, maxYMm: letter.box.maxYMm + pad };
@@ -100,7 +100,7 @@ export function buildDrawingSheet(artwork: Artwork, meta: ExportMeta, options: D
 	];
 	const inner = 0.6 * th;
 	const rowGap = 0.45 * th;
-	const width = Math.max(...rows.map((r) => textWidthMm(r.text, r.height))) + 2 * inner;
+	const width = maxOf(rows.map((r) => textWidthMm(r.text, r.height))) + 2 * inner;
 	const top = drawn.minYMm - 2 * th;
 	const left = drawn.minXMm;
 	const labels: DrawingLabel[] = [];

@@ -66,7 +66,7 @@ export function buildDxfCommands(artwork: Artwork, meta?: ExportMeta, options: D
 	for (const d of [...plated, ...nonPlated]) {
 		out.push({ type: 'circle', layer: d.plated ? DXF_PLATED_DRILL_LAYER : DXF_NON_PLATED_DRILL_LAYER, center: d.center, radiusMm: d.diameterMm / 2 });
 	}
-	if (meta) out.push(...sheetCommands(artwork, meta, options));
+	if (meta) for (const c of sheetCommands(artwork, meta, options)) out.push(c);
 	return out;
 }
 

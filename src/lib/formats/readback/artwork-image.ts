@@ -36,7 +36,7 @@ export function artworkImageItems(layer: ArtworkLayer): ImageItem[] {
 	for (const s of layer.shapes) {
 		const g = s.geometry;
 		if (g.kind === 'circle') items.push({ polarity: s.polarity, rings: [flattenContour(createCircleContour(g.center, g.diameterMm / 2), CHORD_TOLERANCE_MM)] });
-		else if (g.kind === 'stroke') items.push(...strokeItems(g.points, g.strokeWidthMm, s.polarity));
+		else if (g.kind === 'stroke') for (const item of strokeItems(g.points, g.strokeWidthMm, s.polarity)) items.push(item);
 		else if (g.kind === 'region') items.push({ polarity: s.polarity, rings: [g.region.outer, ...g.region.holes].map((c) => flattenContour(c, CHORD_TOLERANCE_MM)) });
 	}
 	return items;

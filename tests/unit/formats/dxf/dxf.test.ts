@@ -9,7 +9,7 @@ import { allShapeFeedCases, sizedCase } from '../../../fixtures/designs/design-c
 
 const cases = allShapeFeedCases.map((c) => ({ ...c, artwork: buildArtwork(sizedCase(c.shape, c.feed, { solderMask: true })) }));
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
+ 
 const parse = (text: string): any => new DxfParser().parseSync(text);
 
 describe('DXF writer', () => {

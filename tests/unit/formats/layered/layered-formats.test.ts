@@ -38,7 +38,7 @@ describe('layered designs and arrays in every format', () => {
 	});
 
 	it.each(cases)('$name: DXF read back by dxf-parser holds every layer with its entity count', ({ artwork }) => {
-		// eslint-disable-next-line @typescript-eslint/no-explicit-any
+		 
 		const dxf: any = new DxfParser().parseSync(toDxf(artwork));
 		const expected = buildDxfCommands(artwork).flatMap((c) => (c.type === 'layer' ? [] : [c]));
 		expect(dxf.entities.length).toBe(expected.length);
