@@ -7,6 +7,7 @@ import { building } from '$app/environment';
 import { SettingError, startAppMode } from '$lib/server/app-mode';
 import { identify } from '$lib/server/auth/request-identity';
 import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from '$lib/server/db';
+import { drainUnreadBody } from '$lib/server/http/drain-body';
 import { refuseUnreadableForm, refuseUnstorableAddress, refuseUnstorableJson } from '$lib/server/http/form-body-guard';
 
 const RETRY_AFTER_SECONDS = '5';
@@ -17,13 +18,22 @@ function unavailable(pathname: string): Response | null {
 }
 
 /**
- * Under /api/ every answer is JSON: SvelteKit's own HTML refusals (an address that is not valid
- * percent-encoded UTF-8, a method no route has) become { error, issues } with the same status.
+ * Under /api/ every answer is JSON: SvelteKit's own HTML or plain-text refusals (an address that is not valid
+ * percent-encoded UTF-8, a method the route does not have) become { error, issues } with the same status.
  */
-function apiJson(pathname: string, response: Response): Response {
-	if (!pathname.startsWith('/api/') || response.status < 400 || !(response.headers.get('content-type') ?? '').startsWith('text/html')) return response;
-	const message = response.status === 400 ? 'the address could not be read: it must be valid percent-encoded UTF-8' : response.status === 404 ? 'Not found' : `The request was refused (${response.status})`;
-	return json({ error: message, issues: response.status === 400 ? [{ path: 'url', message }] : [] }, { status: response.status });
+function apiJson(pathname: string, response: Response, method: string): Response {
+	const type = response.headers.get('content-type') ?? '';
+	if (!pathname.startsWith('/api/') || response.status < 400 || type.startsWith('application/json') || !(type.startsWith('text/html') || response.status === 405)) return response;
+	const allow = response.headers.get('allow');
+	const message =
+		response.status === 400
+			? 'the address could not be read: it must be valid percent-encoded UTF-8'
+			: response.status === 404
+				? 'Not found'
+				: response.status === 405
+					? `${method} is not accepted at this address${allow ? `; it answers ${allow}` : ''}`
+					: `The request was refused (${response.status})`;
+	return json({ error: message, issues: response.status === 400 ? [{ path: 'url', message }] : [] }, { status: response.status, headers: allow ? { allow } : undefined });
 }
 
 function secure(response: Response): Response {
@@ -54,7 +64,9 @@ export const handle: Handle = async ({ event, resolve }) => {
 		event.locals.identity = identity;
 		const unreadable = refuseUnstorableAddress(event) ?? (await refuseUnreadableForm(event)) ?? (await refuseUnstorableJson(event));
 		if (unreadable) return secure(unreadable);
-		return secure(apiJson(event.url.pathname, await resolve(event)));
+		const response = await resolve(event);
+		await drainUnreadBody(event.request);
+		return secure(apiJson(event.url.pathname, response, event.request.method));
 	} catch (err) {
 		// identify() could not reach PostgreSQL: a JSON 503 for the API; pages get kit's 503 error page.
 		if (isDatabaseUnavailable(err)) {

@@ -102,7 +102,9 @@ export async function fuzzTarget(origin: string, ws: HardeningWorkspace, target:
 				judged = await send(origin, req, target.kind);
 			} catch (err) {
 				// The connection itself failed: count it as a server error.
-				judged = { status: 599, accepted: false, explained: false, message: `request failed: ${(err as Error).message}` };
+				// Its cause (a reset, a refused connection, a timeout) says which.
+				const cause = (err as { cause?: { code?: string; message?: string } }).cause;
+				judged = { status: 599, accepted: false, explained: false, message: `request failed: ${(err as Error).message}${cause ? ` (${[cause.code, cause.message].filter(Boolean).join(': ')})` : ''}` };
 			}
 			report.cases++;
 			report.statuses[judged.status] = (report.statuses[judged.status] ?? 0) + 1;
