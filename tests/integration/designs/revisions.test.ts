@@ -59,7 +59,7 @@ describe('creating a design', () => {
 		const found = await designs.findDesignWithRevisions(db, design.id);
 		expect(found!.revisions.map((r) => [r.label, r.parentLabel])).toEqual([['A', null]]);
 		const a = found!.revisions[0];
-		expect(a.input.probe.drillDiameterMm).toBe(1.3); // defaults filled by the schema
+		expect(a.input).toMatchObject({ feed: 'inset', inset: {}, targetImpedanceOhm: 50 }); // defaults filled by the schema
 		expect(a.results.patch.kind).toBe('rectangular');
 		expect(a.results.frequencyHz).toBe(2.45e9);
 	});
