@@ -113,7 +113,7 @@ describe('field checks of measured patches recorded in the README', () => {
 			expect(input.substrate.relativePermittivity).toBe(p.relativePermittivity);
 			expect(input.frequencyHz).toBe(p.measuredHz);
 			expect(r.measuredHz).toBe(p.measuredHz);
-			expect(size(input).feed.kind).toBe('probe');
+			expect(sizeDocument(input).feed.kind).toBe('probe');
 		}
 	});
 });
