@@ -110,7 +110,7 @@ describe('the legend rules on the /fab-profiles page', () => {
 		expect(stored).not.toHaveProperty('legendToOpeningMm');
 		const bad = await call(page.actions.add as never, { identity: who, path: '/fab-profiles?/add', form: { ...form(`Legend bad ${ws.suffix}`), minLegendWidthMm: '9' } });
 		expect(bad.outcome).toBe(400);
-		expect((bad.data as { issues: { path: string }[] }).issues[0].path).toBe('minLegendWidthMm');
+		expect((bad.data as { fieldErrors: { field: string }[] }).fieldErrors[0].field).toBe('minLegendWidthMm');
 	});
 });
 
