@@ -59,18 +59,18 @@ function sweepPlan(points: number) {
 export async function coreRows(): Promise<BenchRow[]> {
 	const rows: BenchRow[] = [];
 
-	const r1 = await medianUs({ size: () => size(input), validate: () => parseDesignInput(input) });
+	const r1 = await medianUs({ size: () => size(parseDesignInput(input)), validate: () => parseDesignInput(input) });
 	rows.push({ work: 'sizing one design', ours: r1.size, floor: r1.validate, unit: 'µs', floorName: 'zod validation alone', ratio: r1.size / r1.validate, target: '≤ 50 µs', pass: r1.size <= 50 });
 
 	const r2 = await medianUs({
 		preview: () => toSvg(prepare(parseDesignInput(input)).artwork, meta),
-		size: () => size(input)
+		size: () => size(parseDesignInput(input))
 	});
 	rows.push({ work: 'live preview: size + artwork + SVG', ours: r2.preview, floor: r2.size, unit: 'µs', floorName: 'sizing alone', ratio: r2.preview / r2.size, target: '≤ 1000 µs', pass: r2.preview <= 1000 });
 
 	// One bundle download's pure work: gate, files, read-back, zip and hashes. "before" is the old chain
 	// (artwork ×4, hand-written SHA-256 plus node:crypto), "after" the pipeline (artwork once, Web Crypto once per file).
-	const sized = size(input);
+	const sized = size(parseDesignInput(input));
 	const afterDownload = async () => {
 		const prepared = prepareSized(sized);
 		gate(prepared, STANDARD_QUICK_TURN_PROFILE);

@@ -10,6 +10,7 @@ import { rootDir } from '../lib/config.ts';
 import { ensureOpenEms } from '../lib/openems.ts';
 import { runFieldCheck, runHoming } from '../../src/worker/fullwave/index.ts';
 import { size } from '../../src/lib/rf/index.ts';
+import { parseDesignInput } from '../../src/lib/schemas/index.ts';
 import type { FieldCheckResult } from '../../src/lib/schemas/field-check.ts';
 import { impedanceResonance } from '../../src/lib/simulation/index.ts';
 
@@ -83,7 +84,7 @@ async function farFieldStudy(cases: string[]): Promise<string[]> {
 		'| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |'
 	];
 	const add = (name: string, input: unknown, r: FieldCheckResult) => {
-		const est = size(input).estimates;
+		const est = size(parseDesignInput(input)).estimates;
 		const p = r.pattern;
 		const peak = (cut: NonNullable<FieldCheckResult['pattern']>['ePlane']) => cut.levels.reduce((b, l) => (l.levelDb > b.levelDb ? l : b), cut.levels[0]).thetaDeg;
 		lines.push(

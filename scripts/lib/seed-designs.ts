@@ -28,7 +28,8 @@ interface DemoDesign {
 	revisions: DemoRevision[];
 }
 
-function demoDesigns(): DemoDesign[] {
+/** The demo designs and their revisions (exported for the test that parses every demo document). */
+export function demoDesigns(): DemoDesign[] {
 	const gnss = {
 		name: 'Kestrel GNSS L1 puck',
 		frequencyHz: 1575.42e6,

@@ -1,5 +1,6 @@
 // The landing page's worked example is sized by the same pure core the editor and the exports use.
 import { size } from '$lib/rf';
+import { parseDesignInput } from '$lib/schemas';
 import type { PageLoad } from './$types';
 
 /**
@@ -17,7 +18,7 @@ export const _landingExample = {
 const example = _landingExample;
 
 export const load: PageLoad = () => {
-	const sized = size(example);
+	const sized = size(parseDesignInput(example));
 	const patch = sized.patch.kind === 'rectangular' ? sized.patch : undefined;
 	const inset = sized.feed.kind === 'inset' ? sized.feed : undefined;
 	return {

@@ -1,17 +1,18 @@
 // `schema`: prints the JSON Schema of a document the product accepts, generated from its zod schema.
 import { z } from 'zod';
-import { designInputSchema } from '../../lib/schemas';
+import { designInputOutline } from '../../lib/schemas';
 
 /** Documents whose schema can be printed, by the name used on the command line. */
-const SCHEMAS: Record<string, z.ZodType> = { 'design-input': designInputSchema };
+const SCHEMAS: Record<string, z.ZodType> = { 'design-input': designInputOutline };
 
 export const summary = 'print the JSON Schema of an input document (design-input)';
 
 export const help = [
 	'Usage: npm run cli -- schema <name>',
 	'',
-	'Prints the JSON Schema (draft 2020-12) of an input document, generated from the zod schema that',
-	'validates it (z.toJSONSchema, input side: fields with defaults are optional).',
+	'Prints the JSON Schema (draft 2020-12) of an input document, generated from its zod outline',
+	'(z.toJSONSchema, input side: fields with defaults are optional). The parser checks more: which',
+	'feed suits which shape, ranges that depend on other fields; it drops another feed\'s option object.',
 	'',
 	`Names: ${Object.keys(SCHEMAS).join(', ')}`,
 	'Exit codes: 0 ok; 2 unknown or missing name.'

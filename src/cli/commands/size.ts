@@ -1,6 +1,6 @@
 // `size`: sizes one design from a design-input JSON file, stdin or flags, and prints one JSON object.
 import { readFileSync } from 'node:fs';
-import { defaultFeedFor, formatIssue, InputError, patchShapes, type PatchShape } from '../../lib/schemas';
+import { defaultFeedFor, formatIssue, InputError, parseDesignInput, patchShapes, type PatchShape } from '../../lib/schemas';
 import { size, sizingReport } from '../../lib/rf';
 import { hzFromGhz } from '../../lib/units';
 import { UsageError } from '../usage-error';
@@ -134,7 +134,7 @@ export function documentFromArgs(argv: string[]): Record<string, unknown> {
 
 export async function run(argv: string[]): Promise<number> {
 	try {
-		const sized = size(documentFromArgs(argv));
+		const sized = size(parseDesignInput(documentFromArgs(argv)));
 		process.stdout.write(`${JSON.stringify(sizingReport(sized), null, 2)}\n`);
 		return 0;
 	} catch (err) {

@@ -10,8 +10,10 @@ export const DEFAULT_PLATING_THICKNESS_UM = 25;
 
 /** The stated probe model of a probe-fed design; undefined when none is stated or the feed is not a probe. */
 export function probeModelOf(sized: SizedDesign): ArtworkProbe | undefined {
-	const probe = sized.input.probe;
-	if (sized.feed.kind !== 'probe' || !probe.model) return undefined;
+	const input = sized.input;
+	if (sized.feed.kind !== 'probe' || input.feed !== 'probe') return undefined;
+	const probe = input.probe;
+	if (!probe.model) return undefined;
 	return {
 		model: probe.model,
 		drillDiameterMm: sized.feed.drillDiameterMm,

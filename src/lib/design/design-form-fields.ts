@@ -1,6 +1,6 @@
 // The editor's fields: how each maps to a path of the design-input document, with its label and unit.
 // Pure: the browser uses it for live validation and preview, the form action for parsing the post.
-import { allFeedKinds, backMounts, edgeLaunchFeeds, handednesses, launchKinds, maskCoverages, patchShapes, probeModels, requiredCopperCount, type DesignInput, type DesignInputDocument, type InputIssue } from '../schemas';
+import { allFeedKinds, backMounts, edgeLaunchFeeds, handednesses, insetOptionsSchema, launchKinds, maskCoverages, patchShapes, probeModels, probeOptionsSchema, requiredCopperCount, type DesignInput, type DesignInputDocument, type InputIssue } from '../schemas';
 import { ghzFromHz, hzFromGhz } from '../units';
 
 export type FieldKind = 'text' | 'number' | 'choice' | 'flag';
@@ -257,11 +257,21 @@ export function documentFromFormValues(values: FormValues): DesignInputDocument 
 	return doc as DesignInputDocument;
 }
 
+/**
+ * The input as the form and the revision diff show it: it holds only its own feed's option object, and the other
+ * feeds' option fields show their defaults, so switching the feed in the form finds them filled and two revisions on
+ * different feeds compare as before the input was a union on its feed.
+ */
+export function withOtherFeedDefaults(input: DesignInput): DesignInput & Record<'inset' | 'probe', object> {
+	return { inset: insetOptionsSchema.parse({}), probe: probeOptionsSchema.parse({}), ...input };
+}
+
 /** A stored input as form text (the form's starting values). */
 export function formValuesFromInput(input: DesignInput): FormValues {
 	const out: FormValues = {};
+	const source = withOtherFeedDefaults(input);
 	for (const f of designFormFields) {
-		const v = getAt(input, f.path);
+		const v = getAt(source, f.path);
 		if (f.codec) out[f.name] = f.codec.toForm(v);
 		else if (f.presence || f.kind === 'flag') out[f.name] = v ? 'on' : '';
 		else if (v === undefined || v === null) out[f.name] = '';

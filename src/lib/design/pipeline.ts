@@ -12,7 +12,7 @@ import { writeOrder, type FormatId } from '../formats/format-ids';
 import { buildManifest, hashFiles, serializeManifest, type ExportFile, type HashedFile } from '../formats/manifest';
 import { checkReadBack, isFabFileName, type ReadBackResult } from '../formats/readback';
 import { size, type SizedDesign } from '../rf';
-import type { DesignInput } from '../schemas';
+import { parseDesignInput, type DesignInput } from '../schemas';
 import type { FabProfile } from '../schemas/fab-profile';
 import { canonicalJson } from './canonical-json';
 
@@ -32,8 +32,11 @@ export function prepare(input: DesignInput): PreparedDesign {
 export function prepareSized(stored: SizedDesign): PreparedDesign {
 	let sized = stored;
 	try {
-		const fresh = size(stored.input);
-		if (canonicalJson(fresh) === canonicalJson(stored)) sized = fresh;
+		// the stored input is parsed here (this is where a stored revision enters the pipeline): in code key order, and
+		// an input stored with another feed's option objects compares by what it means
+		const input = parseDesignInput(stored.input);
+		const fresh = size(input);
+		if (canonicalJson(fresh) === canonicalJson({ ...stored, input })) sized = fresh;
 	} catch {
 		// a revision today's rules refuse keeps its stored results
 	}

@@ -157,7 +157,8 @@ export function proposeRetune(design: unknown, measuredFrequencyHz: number, opti
 		substrate: { ...original.substrate, relativePermittivity: apparentEr },
 		...(holdWidth && built.patch.kind === 'rectangular' ? { patchWidthMm: built.patch.widthMm } : {})
 	};
-	const retuned = size(proposedDocument);
+	// validated again: the apparent εr must still be in the document's range (InputError with its field path)
+	const retuned = size(parseDesignInput(proposedDocument));
 
 	return {
 		targetFrequencyHz: original.frequencyHz,

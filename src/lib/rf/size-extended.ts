@@ -1,5 +1,5 @@
 // Sizing beyond one substrate and one element: explicit stacks, aperture- and proximity-coupled feeds, a stacked parasitic patch, arrays.
-import { InputError, type DesignInput } from '../schemas';
+import { InputError, sharedFieldsOf, type DesignInput } from '../schemas';
 import { dbFromPowerRatio, mmFromUm } from '../units';
 import { isLayeredFeedKind } from './feed-kinds';
 import { apertureStart } from './aperture-coupling';
@@ -24,9 +24,8 @@ export function needsExtendedSizing(d: DesignInput): boolean {
 
 type SizeSingle = (d: DesignInput) => SizedDesign;
 
-const onGroup = (d: DesignInput, g: DielectricGroup, feed: DesignInput['feed'] = d.feed): DesignInput => ({
+const onGroup = (d: DesignInput, g: DielectricGroup): DesignInput => ({
 	...d,
-	feed,
 	substrate: { ...d.substrate, relativePermittivity: g.relativePermittivity, heightMm: g.heightMm, lossTangent: g.lossTangent }
 });
 
@@ -72,7 +71,7 @@ export function sizeExtended(d: DesignInput, sizeSingle: SizeSingle): SizedDesig
 		const [upper, lower] = groups;
 		// the slot couples through the upper dielectric alone; the buried line sees both above it
 		const patchGroup = layered === 'aperture-coupled' ? upper : combineDielectrics([upper, lower]);
-		const base = sizeSingle(onGroup(d, patchGroup, 'edge'));
+		const base = sizeSingle(onGroup({ ...sharedFieldsOf(d), feed: 'edge' }, patchGroup));
 		const margin = base.ground.marginMm;
 		const probeLine = microstripSection(d.feedLineImpedanceOhm, d.frequencyHz, lower.heightMm, lower.relativePermittivity, t, 0);
 		const lambdaG = 4 * quarterGuidedWavelengthMm(d.frequencyHz, probeLine.effectivePermittivity);

@@ -1,6 +1,6 @@
 // Sizing one design: validated input in, every derived quantity and the warnings out.
 import { MASK_COVER_MODEL, maskCoverPermittivities, maskCoverValues, type SizedMaskCover } from './mask-cover';
-import { InputError, laminateClassFor, parseDesignInput, type DesignInput } from '../schemas';
+import { InputError, laminateClassFor, type DesignInput } from '../schemas';
 import { freeSpaceWavelengthMm, mmFromUm } from '../units';
 import { feedKindTraits } from './feed-kinds';
 import { circularPatch } from './circular-patch';
@@ -259,7 +259,7 @@ function attachFeed(d: DesignInput, core: Core, marginMm: number): FeedResult {
 			return { feed: { kind: 'probe', offsetXMm: 0, offsetYMm: offset, ...common }, feedRoomMm: 0, facts: { probe: { edgeDistanceMm: edge, padRadiusMm: pad / 2, drillDiameterMm: common.drillDiameterMm } } };
 		}
 		default:
-			return d.feed satisfies never;
+			return d satisfies never;
 	}
 }
 
@@ -364,13 +364,13 @@ function toDocumentPaths(error: InputError): InputError {
 }
 
 /**
- * Sizes one design: validates the document (defaults filled) and computes the patch, the feed,
- * the ground, the estimates and the warnings. Throws only InputError, with document field paths
- * (e.g. "substrate.heightMm" for a substrate too thick for the patch, "targetImpedanceOhm" when no
- * inset depth reaches the target).
+ * Sizes one validated design (parse it once at the edge with parseDesignInput): computes the patch, the feed, the
+ * ground, the estimates and the warnings. Throws only InputError, with document field paths (e.g.
+ * "substrate.heightMm" for a substrate too thick for the patch, "targetImpedanceOhm" when no inset depth reaches the
+ * target).
  */
-export function size(input: unknown): SizedDesign {
-	const { doc: d, assumed } = withLossTangent(parseDesignInput(input));
+export function size(input: DesignInput): SizedDesign {
+	const { doc: d, assumed } = withLossTangent(input);
 	try {
 		if (needsExtendedSizing(d)) return sizeExtended(d, (g) => sizeValid(g, assumed));
 		return d.solderMask && d.maskCoverage === 'covered' ? sizeUnderMask(d, assumed) : sizeValid(d, assumed);

@@ -40,7 +40,7 @@ export function textbookModel(d: DesignInput, firstPass: SizedPatch): SizedTextb
 			case 'proximity-coupled':
 				return out; // the textbook places only a probe on a disc
 			default:
-				return d.feed satisfies never;
+				return d satisfies never;
 		}
 	}
 	const base = { frequencyHz, relativePermittivity: s.relativePermittivity, heightMm: s.heightMm, model: 'textbook' as const };
@@ -60,6 +60,6 @@ export function textbookModel(d: DesignInput, firstPass: SizedPatch): SizedTextb
 		case 'proximity-coupled':
 			return out; // no feed position to place by cos²
 		default:
-			return d.feed satisfies never;
+			return d satisfies never;
 	}
 }

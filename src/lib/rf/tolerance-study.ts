@@ -1,5 +1,5 @@
 // Seeded Monte Carlo over εr, thickness and etch tolerances: the spread of the resonant frequency and the share of boards in band.
-import { InputError } from '../schemas';
+import { InputError, type DesignInput } from '../schemas';
 import { requireInRange } from './guard';
 import { resonantFrequencyHz } from './resonant-frequency';
 import type { SizedPatch } from './sized-design';
@@ -94,7 +94,7 @@ function optionsOf(options: unknown): Required<ToleranceOptions> {
  * normal with σ = tolerance/3, and recomputes each board's resonance from its dimensions. The
  * same input and seed always give the same numbers; zero tolerances give zero spread.
  */
-export function toleranceStudy(input: unknown, options?: ToleranceOptions): ToleranceStudy {
+export function toleranceStudy(input: DesignInput, options?: ToleranceOptions): ToleranceStudy {
 	const opts = optionsOf(options);
 	const sized = size(input);
 	const s = sized.input.substrate;

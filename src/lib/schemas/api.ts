@@ -1,14 +1,14 @@
 // zod schemas of the /api/v1 surface: path parameters, queries, bodies and answers. The OpenAPI document is generated from these.
 import { z } from 'zod';
 import { formatIds } from '../formats/format-ids';
-import { designInputSchema, designNameSchema } from './design-input';
+import { documentedDesignInputSchema, designNameSchema } from './design-input';
 import { revisionNoteSchema } from './revision-note';
 import { sizedDesignSchema } from './sized-design';
 import { waiverReasonSchema } from './waiver-reason';
 import { fieldCheckModes, fieldCheckProgressSchema, fieldCheckResultSchema, homingResultSchema } from './field-check';
 
-/** The design-input document, named for the OpenAPI components. */
-export const designInputDocumentSchema = designInputSchema.meta({ id: 'DesignInput', description: 'The design-input document (see src/lib/schemas/design-input.ts)' });
+/** The design-input document, named for the OpenAPI components (described by its outline, parsed by the union on feed). */
+export const designInputDocumentSchema = documentedDesignInputSchema.meta({ id: 'DesignInput', description: 'The design-input document (see src/lib/schemas/design-input.ts)' });
 
 /** What a download can be: the zip bundle, or one format of the registry (formats/format-ids.ts, the registry's ids). */
 export const exportKinds = ['bundle', ...formatIds] as const;

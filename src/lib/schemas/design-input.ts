@@ -295,7 +295,13 @@ export type MountingHole = z.infer<typeof mountingHoleSchema>;
 /** A design's name: shown in every file of its exports (titles, comments, the fab notes). */
 export const designNameSchema = z.string().trim().min(1, { error: 'must not be empty' }).max(120, { error: 'at most 120 characters' }).superRefine(plainText('name'));
 
-const designInputObject = z.strictObject({
+/**
+ * Every field the document may hold, in the order a parsed document lists them (writers that print the document keep
+ * that order): the shared fields and every feed's option object. It is the document's published outline (JSON Schema,
+ * OpenAPI), what old documents look like; the parser is designInputSchema, one branch of it per feed kind. A new
+ * optional field shared by every feed goes here and reaches every branch.
+ */
+export const designInputOutline = z.strictObject({
 	schemaVersion: z.literal(1).default(1),
 	name: designNameSchema.default('Untitled patch'),
 	/** Target resonant frequency f0. */
@@ -345,7 +351,60 @@ const designInputObject = z.strictObject({
 	launch: launchSchema.optional()
 });
 
-export const designInputSchema = designInputObject.superRefine((d, ctx) => {
+/** The option object each feed kind carries in the document (none for the edge and quarter-wave feeds). */
+export const feedOptionKeys = {
+	inset: 'inset',
+	probe: 'probe',
+	edge: undefined,
+	'quarter-wave': undefined,
+	'aperture-coupled': 'slot',
+	'proximity-coupled': 'proximity'
+} as const satisfies Record<FeedKind, FeedOptionKey | undefined>;
+export type FeedOptionKey = 'inset' | 'probe' | 'slot' | 'proximity';
+const allFeedOptionKeys: readonly FeedOptionKey[] = ['inset', 'probe', 'slot', 'proximity'];
+
+/** The fields every branch shares: the outline without the feed option objects (feed keeps its place). */
+const sharedFields = designInputOutline.omit({ inset: true, probe: true, slot: true, proximity: true });
+
+// One branch per feed kind, each with only its own option object. Built by omitting the others from the outline so the
+// parsed document keeps the outline's key order.
+const insetBranch = designInputOutline.omit({ probe: true, slot: true, proximity: true }).extend({ feed: z.literal('inset').default('inset') });
+const probeBranch = designInputOutline.omit({ inset: true, slot: true, proximity: true }).extend({ feed: z.literal('probe') });
+const edgeBranch = sharedFields.extend({ feed: z.literal('edge') });
+const quarterWaveBranch = sharedFields.extend({ feed: z.literal('quarter-wave') });
+const apertureCoupledBranch = designInputOutline.omit({ inset: true, probe: true, proximity: true }).extend({ feed: z.literal('aperture-coupled') });
+const proximityCoupledBranch = designInputOutline.omit({ inset: true, probe: true, slot: true }).extend({ feed: z.literal('proximity-coupled') });
+
+const feedError = `must be one of: ${allFeedKinds.join(', ')}`;
+const feedBranches = z.discriminatedUnion('feed', [insetBranch, probeBranch, edgeBranch, quarterWaveBranch, apertureCoupledBranch, proximityCoupledBranch], {
+	error: (iss) => (iss.code === 'invalid_union' && iss.path?.[0] === 'feed' ? feedError : undefined)
+});
+
+/**
+ * The parse-time upgrade of documents written before the input was a union on its feed: every parsed document then
+ * carried an inset and a probe option object whatever its feed (their defaults were filled in), and stored revisions,
+ * CLI files and API clients still send them. The option object of another feed is dropped, so such a document parses
+ * as before. A slot or proximity object on another feed was never accepted and is still refused, by name.
+ */
+export function upgradeFeedOptions(raw: unknown, ctx?: z.core.$RefinementCtx<unknown>): unknown {
+	if (!raw || typeof raw !== 'object' || Array.isArray(raw)) return raw;
+	const doc = raw as Record<string, unknown>;
+	const feed = doc.feed === undefined ? 'inset' : doc.feed;
+	if (!(allFeedKinds as readonly unknown[]).includes(feed)) return raw;
+	const own: FeedOptionKey | undefined = feedOptionKeys[feed as FeedKind];
+	const out = { ...doc };
+	for (const key of allFeedOptionKeys) {
+		if (key === own || out[key] === undefined) continue;
+		if (key === 'slot' || key === 'proximity') {
+			const owner = key === 'slot' ? 'an aperture-coupled' : 'a proximity-coupled';
+			ctx?.addIssue({ code: 'custom', path: [key], input: out[key], message: `only ${owner} feed takes ${key} options` });
+		}
+		delete out[key];
+	}
+	return out;
+}
+
+export const designInputSchema = z.preprocess(upgradeFeedOptions, feedBranches).superRefine((d, ctx) => {
 	const wavelengthMm = (SPEED_OF_LIGHT_M_PER_S / d.frequencyHz) * 1000;
 	if (d.substrate.heightMm >= wavelengthMm / 4) {
 		ctx.addIssue({
@@ -375,7 +434,7 @@ export const designInputSchema = designInputObject.superRefine((d, ctx) => {
 	if (d.bandToCover && !(d.bandToCover.upperHz > d.bandToCover.lowerHz)) {
 		ctx.addIssue({ code: 'custom', path: ['bandToCover', 'upperHz'], input: d.bandToCover.upperHz, message: `must be above bandToCover.lowerHz (${d.bandToCover.lowerHz})` });
 	}
-	if (d.probe.clearanceDiameterMm <= d.probe.drillDiameterMm) {
+	if (d.feed === 'probe' && d.probe.clearanceDiameterMm <= d.probe.drillDiameterMm) {
 		ctx.addIssue({
 			code: 'custom',
 			path: ['probe', 'clearanceDiameterMm'],
@@ -385,12 +444,35 @@ export const designInputSchema = designInputObject.superRefine((d, ctx) => {
 	}
 });
 
-/** The document as written by a user (defaults may be missing). */
-export type DesignInputDocument = z.input<typeof designInputSchema>;
+/**
+ * The parser described by the outline's JSON Schema (input side), for documents generated from the zod schemas (the
+ * OpenAPI document): JSON Schema cannot state the parse-time upgrade and the union behind it, and the outline is the
+ * document's public shape, the same before and after the input became a union on its feed.
+ */
+export const documentedDesignInputSchema = designInputSchema.meta(outlineJsonSchema());
+
+function outlineJsonSchema(): Record<string, unknown> {
+	const json: Record<string, unknown> = z.toJSONSchema(designInputOutline, { target: 'draft-2020-12', io: 'input' });
+	delete json.$schema;
+	return json;
+}
+
+/** The document as written by a user (defaults may be missing; the outline, so an option object of another feed is let in and dropped). */
+export type DesignInputDocument = z.input<typeof designInputOutline>;
 /** The document after validation: every default filled in. */
 export type DesignInput = z.output<typeof designInputSchema>;
 
-type ParsedDocument = z.output<typeof designInputObject>;
+type ParsedDocument = z.output<typeof feedBranches>;
+/** What every feed kind's document holds: a validated document without its feed's option object. */
+export type SharedDesignFields = z.output<typeof sharedFields>;
+
+/** The document without its feed's option object: the start of the same design on another feed. */
+export function sharedFieldsOf(d: DesignInput): SharedDesignFields {
+	const shared: SharedDesignFields & Partial<Record<FeedOptionKey, unknown>> = { ...d };
+	const own = feedOptionKeys[d.feed];
+	if (own !== undefined) delete shared[own];
+	return shared;
+}
 type RefineContext = z.core.$RefinementCtx<ParsedDocument>;
 
 /** How many copper layers a document's feed and parasitic patch need. */
@@ -446,8 +528,6 @@ function layeredRules(d: ParsedDocument, ctx: RefineContext): void {
 	} else if (need === 3) {
 		issue(['stack'], undefined, `required: a ${d.feed} feed${d.parasitic ? ' with a parasitic patch' : ''} needs a stack of 3 copper layers (copper, dielectric, copper, dielectric, copper)`);
 	}
-	if (d.slot && d.feed !== 'aperture-coupled') issue(['slot'], d.slot, 'only an aperture-coupled feed takes slot options');
-	if (d.proximity && d.feed !== 'proximity-coupled') issue(['proximity'], d.proximity, 'only a proximity-coupled feed takes proximity options');
 	if (d.parasitic && !['inset', 'edge', 'quarter-wave'].includes(d.feed)) {
 		issue(['parasitic'], d.parasitic, 'a parasitic patch takes a driven patch fed by microstrip on the inner copper: feed inset, edge or quarter-wave');
 	}

@@ -2,7 +2,7 @@
 // the way out), and the `derived` part of every sweep point. Open at the leaves: later sizing models add fields, and
 // a stored revision keeps every field it was saved with.
 import { z } from 'zod';
-import { allFeedKinds, designInputSchema, patchShapes } from './design-input';
+import { allFeedKinds, documentedDesignInputSchema, patchShapes } from './design-input';
 
 export const sizingWarningSchema = z.object({ code: z.string(), message: z.string() }).meta({ description: 'A sizing caution: a stable code and one sentence' });
 
@@ -21,7 +21,7 @@ export const sizedDerivedSchema = z.looseObject({
 
 export const sizedDesignSchema = sizedDerivedSchema
 	.extend({
-		input: designInputSchema,
+		input: documentedDesignInputSchema,
 		warnings: z.array(sizingWarningSchema)
 	})
 	.meta({ id: 'SizedDesign', description: 'Every derived quantity with its unit in its name (mm, Hz, Ω, S), and the sizing warnings' });

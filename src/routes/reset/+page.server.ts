@@ -1,5 +1,5 @@
 // Asking for a password-reset link: the same answer whether or not the e-mail has an account.
-import { fail } from '@sveltejs/kit';
+import { formFail } from '$lib/server/http/form-failure';
 import { formFailure, formFields, requestPasswordReset, takeResetMailAllowance, type FormProblem } from '$lib/server/accounts';
 import type { Actions } from './$types';
 
@@ -9,7 +9,7 @@ export const actions: Actions = {
 		// The allowance counts every e-mail alike, so running out of it says nothing about an account.
 		const { retryAfterSeconds } = await takeResetMailAllowance(values.email ?? '', getClientAddress());
 		if (retryAfterSeconds > 0) {
-			return fail(429, { form: 'reset', message: `Several links were asked for already; try again in ${Math.ceil(retryAfterSeconds / 60)} minute(s).`, issues: {}, values } as FormProblem);
+			return formFail(429, { action: 'reset', message: `Several links were asked for already; try again in ${Math.ceil(retryAfterSeconds / 60)} minute(s).`, values } satisfies FormProblem);
 		}
 		try {
 			const { delivery } = await requestPasswordReset({ email: values.email });

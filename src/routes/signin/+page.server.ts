@@ -1,6 +1,7 @@
 // Sign-in: one generic refusal, slowed down after repeated attempts (counted before the password is checked);
 // a fresh session id on success (the old one, if any, ends).
-import { fail, redirect } from '@sveltejs/kit';
+import { redirect } from '@sveltejs/kit';
+import { formFail } from '$lib/server/http/form-failure';
 import {
 	checkCredentials,
 	formFailure,
@@ -28,7 +29,7 @@ export const actions: Actions = {
 		const { retryAfterSeconds } = await takeSignInAttempt(email, address);
 		if (retryAfterSeconds > 0) {
 			const message = `Too many failed attempts. Try again in ${Math.ceil(retryAfterSeconds / 60)} minute(s), or set a new password.`;
-			return fail(429, { form: 'signin', message, issues: {}, values: withoutSecrets(values) } as FormProblem);
+			return formFail(429, { action: 'signin', message, values: withoutSecrets(values) } satisfies FormProblem);
 		}
 		let userId: string;
 		try {

@@ -8,6 +8,7 @@ import { size } from '../../lib/rf';
 import type { SizedDesign } from '../../lib/rf/sized-design';
 import { fieldCheckOptionsSchema, type FieldCheckOptions, type FieldCheckProgress, type FieldCheckResult } from '../../lib/schemas/field-check';
 import { parseWith } from '../../lib/schemas/input-error';
+import { parseDesignInput } from '../../lib/schemas';
 import {
 	ACCURATE_REFINEMENT,
 	PORT_CURRENT_FILE,
@@ -193,7 +194,7 @@ function resultOf(run: EngineRun, engineVersion: string, mode: FieldCheckOptions
  */
 export async function runFieldCheck(input: unknown, options: Partial<FieldCheckOptions>, context: FieldCheckContext = {}): Promise<FieldCheckResult> {
 	const opts = parseWith(fieldCheckOptionsSchema, options);
-	const sized = size(input);
+	const sized = size(parseDesignInput(input));
 	const artwork = buildArtwork(sized);
 	const zRef = referenceImpedanceOf(sized);
 	const models =

@@ -117,7 +117,7 @@ export async function runHoming(input: unknown, options: Partial<FieldCheckOptio
 	// phase 2: the feed, from the best resonant trial; each step also corrects the resonant
 	// dimension by the scaling rule, since moving the feed pulls the resonance a little
 	const zRef = tuned.result.referenceImpedanceOhm;
-	const sizedAt = (t: Trial) => size({ ...document, overrides: t.overrides });
+	const sizedAt = (t: Trial) => size(parseDesignInput({ ...document, overrides: t.overrides }));
 	const mismatch = (t: Trial) => feedPointResistance(sizedAt(t), t.result) - zRef;
 	const done = (t: Trial) => t.result.s11AtTargetDb <= MATCH_GOAL_DB && errorOf(t) !== null && Math.abs(errorOf(t)!) <= RESONANCE_TOLERANCE_FRACTION;
 	let feedPrev: Trial | null = null;

@@ -57,7 +57,7 @@ describe('the display-units preference', () => {
 		const user = await person(`bad-${field}-${Object.values(form).join('')}`, suffix);
 		const res = await postUnits(await sessionFor(user.id), form as Record<string, string>);
 		expect(res.outcome).toBe(400);
-		expect((res.data as { issues: Record<string, string> }).issues[field]).toMatch(/must be one of/);
+		expect((res.data as { fieldErrors: { field: string; message: string }[] }).fieldErrors.find((e) => e.field === field)?.message).toMatch(/must be one of/);
 		expect(await findDisplayUnits(user.id)).toEqual({ length: 'mm', copper: 'um' });
 	});
 

@@ -35,11 +35,11 @@ describe('team changes', () => {
 		expect((await findTeam(team.teamId))?.name).toBe(`Renamed team ${suffix}`);
 	});
 
-	it('answers bad input with 400 and the one failure shape the page reads: form, message, issues, values', async () => {
+	it('answers bad input with 400 and the one failure shape the page reads: action, message, fieldErrors, values', async () => {
 		const result = await asOwner('rename', { name: '' });
 		expect(result.outcome).toBe(400);
-		expect(result.data).toMatchObject({ form: 'rename', message: 'Please correct the marked fields.', values: { name: '' } });
-		expect(Object.keys((result.data as { issues: Record<string, string> }).issues)).toContain('name');
+		expect(result.data).toMatchObject({ action: 'rename', message: 'Please correct the marked fields.', values: { name: '' } });
+		expect((result.data as { fieldErrors: { field: string }[] }).fieldErrors.map((e) => e.field)).toContain('name');
 	});
 
 	it('sends an owner who removes themself (another owner stays) to the team list', async () => {

@@ -6,8 +6,8 @@ import { join, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { writeTouchstone, type TouchstoneNetwork } from '../../../src/lib/formats/touchstone/index';
 import { resonantFrequencyHz } from '../../../src/lib/rf/resonant-frequency';
-import { size } from '../../../src/lib/rf/size';
 import type { DesignInputDocument } from '../../../src/lib/schemas';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 const ROOT = resolve(__dirname, '../../..');
 let dir: string;
@@ -45,7 +45,7 @@ function sweepNetwork(resonanceHz: number, startHz: number, stepHz: number, coun
 const design: DesignInputDocument = { name: 'Demo 2.45 GHz patch', frequencyHz: 2.45e9, substrate: { relativePermittivity: 4.4, heightMm: 1.6 } };
 /** The designed patch built on a laminate of εr 4.65 instead of 4.4 (demo numbers). */
 const TRUE_ER = 4.65;
-const measuredHz = resonantFrequencyHz(size(design).patch, { relativePermittivity: TRUE_ER, heightMm: 1.6 });
+const measuredHz = resonantFrequencyHz(sizeDocument(design).patch, { relativePermittivity: TRUE_ER, heightMm: 1.6 });
 
 beforeAll(() => {
 	dir = mkdtempSync(join(tmpdir(), 'measure-cli-'));
@@ -83,7 +83,7 @@ describe('measure', () => {
 		expect(r.code).toBe(0);
 		const { retune } = JSON.parse(r.stdout);
 		expect(retune.apparentRelativePermittivity).toBeCloseTo(TRUE_ER, 2);
-		const rebuilt = size(retune.input);
+		const rebuilt = sizeDocument(retune.input);
 		const newHz = resonantFrequencyHz(rebuilt.patch, { relativePermittivity: TRUE_ER, heightMm: 1.6 });
 		expect(Math.abs(newHz / design.frequencyHz - 1)).toBeLessThan(0.005);
 		expect(retune.dimensions.map((d: { name: string }) => d.name)).toContain('patch.lengthMm');

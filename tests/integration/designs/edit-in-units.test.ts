@@ -36,7 +36,7 @@ function event(form: Record<string, string>) {
 	} as never;
 }
 
-async function save(form: Record<string, string>): Promise<{ label?: string; failure?: { status: number; data: { issues: { field: string; message: string }[]; values: Record<string, string> } } }> {
+async function save(form: Record<string, string>): Promise<{ label?: string; failure?: { status: number; data: { fieldErrors: { field: string; message: string }[]; values: Record<string, string> } } }> {
 	try {
 		const r = (await editPage.actions.save(event({ from: 'A', note: 'units', ...form }))) as { status: number; data: never };
 		return { failure: r };
@@ -72,8 +72,8 @@ describe('saving the editor form in the person’s units', () => {
 		const before = await db.selectFrom('revision').select((eb) => eb.fn.countAll<string>().as('n')).where('design_id', '=', designId).executeTakeFirstOrThrow();
 		const { failure } = await save({ ...formValuesFromInput(start()), 'substrate.heightMm': '1.6 furlongs' });
 		expect(failure?.status).toBe(400);
-		expect(failure?.data.issues).toContainEqual({ field: 'substrate.heightMm', message: 'unknown unit "furlongs"; use mm or mil' });
-		expect(failure?.data.issues.filter((i) => i.field === 'substrate.heightMm')).toHaveLength(1);
+		expect(failure?.data.fieldErrors).toContainEqual({ field: 'substrate.heightMm', message: 'unknown unit "furlongs"; use mm or mil' });
+		expect(failure?.data.fieldErrors.filter((i) => i.field === 'substrate.heightMm')).toHaveLength(1);
 		expect(failure?.data.values['substrate.heightMm']).toBe('1.6 furlongs');
 		const after = await db.selectFrom('revision').select((eb) => eb.fn.countAll<string>().as('n')).where('design_id', '=', designId).executeTakeFirstOrThrow();
 		expect(after.n).toBe(before.n);

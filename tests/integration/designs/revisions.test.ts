@@ -59,7 +59,7 @@ describe('creating a design', () => {
 		const found = await designs.findDesignWithRevisions(db, design.id);
 		expect(found!.revisions.map((r) => [r.label, r.parentLabel])).toEqual([['A', null]]);
 		const a = found!.revisions[0];
-		expect(a.input.probe.drillDiameterMm).toBe(1.3); // defaults filled by the schema
+		expect(a.input).toMatchObject({ feed: 'inset', inset: {}, targetImpedanceOhm: 50 }); // defaults filled by the schema
 		expect(a.results.patch.kind).toBe('rectangular');
 		expect(a.results.frequencyHz).toBe(2.45e9);
 	});
@@ -165,5 +165,16 @@ describe('diffing two revisions', () => {
 		expect(length.relativeChange!).toBeGreaterThan(0.015);
 		expect(length.relativeChange!).toBeLessThan(0.03);
 		expect(diff.changedCount).toBeGreaterThan(2);
+	});
+
+	it('compares an inset revision with a probe revision on the probe sizes it did not state as the defaults (unchanged)', async () => {
+		const { design } = await designs.createDesign(db, { teamId: team.teamId, userId: team.users.editor.id, raw: sampleInput({ name: 'Diff feeds' }) });
+		await designs.saveRevision(db, { designId: design.id, parentLabel: 'A', userId: team.users.editor.id, raw: sampleInput({ feed: 'probe', probe: { drillDiameterMm: 1.3, clearanceDiameterMm: 5 } }) });
+		const diff = designs.diffRevisions((await designs.findRevision(db, design.id, 'A'))!, (await designs.findRevision(db, design.id, 'B'))!);
+		const row = (key: string) => diff.inputs.find((r) => r.key === key)!;
+		expect([row('feed').a, row('feed').b, row('feed').changed]).toEqual(['inset', 'probe', true]);
+		// drill 1.3 mm is the schema's default, which an inset revision shows too
+		expect([row('probe.drillDiameterMm').a, row('probe.drillDiameterMm').changed]).toEqual(['1.3', false]);
+		expect([row('probe.clearanceDiameterMm').a, row('probe.clearanceDiameterMm').b, row('probe.clearanceDiameterMm').changed]).toEqual(['4.1', '5', true]);
 	});
 });

@@ -117,14 +117,14 @@ describe('role matrix for design and laminate pages', () => {
 		const form = { ...saveForm('0.01'), 'substrate.heightMm': 'thick' };
 		const result = (await editPage.actions.save(event('editor', `/designs/${designId}/edit?/save`, { params: { designId }, form }))) as unknown as {
 			status: number;
-			data: { values: Record<string, string>; issues: { field: string; message: string }[] };
+			data: { action: string; values: Record<string, string>; fieldErrors: { field: string; message: string }[] };
 		};
-		expect(result.status).toBe(400);
+		expect([result.status, result.data.action]).toEqual([400, 'save']);
 		expect(result.data.values.frequencyGHz).toBe('0.01');
 		expect(result.data.values['substrate.heightMm']).toBe('thick');
-		const fields = result.data.issues.map((i) => i.field).sort();
+		const fields = result.data.fieldErrors.map((i) => i.field).sort();
 		expect(fields).toEqual(['frequencyGHz', 'substrate.heightMm']);
 		// The range is restated in the field's own unit (GHz), not the document's Hz.
-		expect(result.data.issues.find((i) => i.field === 'frequencyGHz')!.message).toMatch(/\[0\.1, 100\] GHz/);
+		expect(result.data.fieldErrors.find((i) => i.field === 'frequencyGHz')!.message).toMatch(/\[0\.1, 100\] GHz/);
 	});
 });

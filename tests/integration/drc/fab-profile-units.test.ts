@@ -75,8 +75,8 @@ describe('the fab-profile form with units', () => {
 		const name = `Refused ${text} ${ws.suffix}`;
 		const res = await add(form(name, { lengthUnit: 'mm', minTraceWidthMm: text }));
 		expect(res.outcome).toBe(400);
-		const data = res.data as { values: Record<string, string>; issues: { path: string; message: string }[] };
-		expect(data.issues).toEqual([{ path: 'minTraceWidthMm', message: expect.stringMatching(message) }]);
+		const data = res.data as { values: Record<string, string>; fieldErrors: { field: string; message: string }[] };
+		expect(data.fieldErrors).toEqual([{ field: 'minTraceWidthMm', message: expect.stringMatching(message) }]);
 		expect(data.values.minTraceWidthMm).toBe(text);
 		expect(await stored(name)).toBeUndefined();
 	});

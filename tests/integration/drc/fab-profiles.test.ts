@@ -89,9 +89,9 @@ describe('the /fab-profiles page', () => {
 	it('add action answers 400 with the field’s issue and keeps what was typed', async () => {
 		const r = await call(page.actions.add as never, { identity: await identityOf(ws, 'editor', 'session'), path: '/fab-profiles?/add', form: { ...form(`Bad ${ws.suffix}`), minDrillMm: 'abc' } });
 		expect(r.outcome).toBe(400);
-		const data = r.data as { values: Record<string, string>; issues: { path: string; message: string }[] };
-		expect(data.issues[0].path).toBe('minDrillMm');
-		expect(data.issues[0].message).toMatch(/allowed range \[0.01, 10\] mm/);
+		const data = r.data as { values: Record<string, string>; fieldErrors: { field: string; message: string }[] };
+		expect(data.fieldErrors[0].field).toBe('minDrillMm');
+		expect(data.fieldErrors[0].message).toMatch(/allowed range \[0.01, 10\] mm/);
 		expect(data.values.minDrillMm).toBe('abc');
 	});
 });
@@ -110,7 +110,7 @@ describe('the legend rules on the /fab-profiles page', () => {
 		expect(stored).not.toHaveProperty('legendToOpeningMm');
 		const bad = await call(page.actions.add as never, { identity: who, path: '/fab-profiles?/add', form: { ...form(`Legend bad ${ws.suffix}`), minLegendWidthMm: '9' } });
 		expect(bad.outcome).toBe(400);
-		expect((bad.data as { issues: { path: string }[] }).issues[0].path).toBe('minLegendWidthMm');
+		expect((bad.data as { fieldErrors: { field: string }[] }).fieldErrors[0].field).toBe('minLegendWidthMm');
 	});
 });
 

@@ -67,9 +67,9 @@ describe('limits', () => {
 
 	it('refuses names over their length limits naming the field', async () => {
 		const team = await action(server.origin, `/teams/${ws.a.teamId}?/rename`, { cookie: ws.owner.sessionId }, { name: 'n'.repeat(81) });
-		expect([team.actionStatus, team.data.issues.name]).toEqual([400, 'team name must be 1 to 80 characters']);
+		expect([team.actionStatus, team.data.fieldErrors.find((e: { field: string }) => e.field === 'name')?.message]).toEqual([400, 'team name must be 1 to 80 characters']);
 		const token = await action(server.origin, '/settings/tokens?/create', { cookie: ws.editor.sessionId }, { name: 't'.repeat(61) });
-		expect([token.actionStatus, token.data.issues.name]).toEqual([400, 'token name must be 1 to 60 characters']);
+		expect([token.actionStatus, token.data.fieldErrors.find((e: { field: string }) => e.field === 'name')?.message]).toEqual([400, 'token name must be 1 to 60 characters']);
 	});
 
 	it(`lets one person belong to at most ${LIMITS.teamsPerPerson} teams when making another`, async () => {

@@ -25,7 +25,7 @@ const stillThere = async (id: string) => (await measurements.findMeasurementView
 const deletions = async () => (await auditQueries.listAuditEventsByTeam(db, ws.teamId, 200)).filter((e) => e.kind === 'measurement.deleted');
 
 /** Posts the delete form as `who` (session); the status SvelteKit would answer and the failure's data, if any. */
-async function postDelete(who: Exclude<CallerKind, 'anonymous'>, fields: Record<string, string>): Promise<{ status: number; data?: { remove?: { confirm: boolean; message: string } } }> {
+async function postDelete(who: Exclude<CallerKind, 'anonymous'>, fields: Record<string, string>): Promise<{ status: number; data?: { action?: string; message?: string; detail?: { confirm?: boolean } } }> {
 	const identity = await identityOf(ws, who, 'session');
 	const body = new FormData();
 	for (const [k, v] of Object.entries(fields)) body.set(k, v);
@@ -45,7 +45,7 @@ describe('deleting a measurement', () => {
 		const id = await upload();
 		const asked = await postDelete('editor', { measurementId: id });
 		expect(asked.status).toBe(400);
-		expect(asked.data?.remove?.confirm).toBe(true);
+		expect([asked.data?.action, asked.data?.detail?.confirm]).toEqual(['delete', true]);
 		expect(await stillThere(id)).toBe(true);
 	});
 
@@ -93,8 +93,8 @@ describe('deleting a measurement', () => {
 		const saved = await measurements.confirmRetune(db, { designId: ws.designId, revision, measurement, userId: ws.people.editor.id });
 		const refused = await postDelete('editor', { measurementId: id, confirm: 'yes' });
 		expect(refused.status).toBe(409);
-		expect(refused.data?.remove?.confirm).toBe(false);
-		expect(refused.data?.remove?.message).toContain(`revision ${saved.label}`);
+		expect([refused.data?.action, refused.data?.detail?.confirm]).toEqual(['delete', false]);
+		expect(refused.data?.message).toContain(`revision ${saved.label}`);
 		expect(await stillThere(id)).toBe(true);
 	});
 });

@@ -13,8 +13,8 @@ import {
 	type Contour,
 	type Point
 } from '../../../src/lib/geometry';
-import { size } from '../../../src/lib/rf';
 import { InputError, allowedFeeds, patchShapes, type DesignInputDocument } from '../../../src/lib/schemas';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 /** Random design-input documents of every shape with each feed the shape allows. */
 const documents: fc.Arbitrary<DesignInputDocument> = fc
@@ -38,7 +38,7 @@ const documents: fc.Arbitrary<DesignInputDocument> = fc
 /** Sizes and builds; null when the random document is refused as input (InputError) or breaks a geometry rule (GeometryError). */
 function tryBuild(doc: DesignInputDocument): Artwork | null {
 	try {
-		return buildArtwork(size(doc));
+		return buildArtwork(sizeDocument(doc));
 	} catch (e) {
 		if (e instanceof InputError || e instanceof GeometryError) return null;
 		throw e;

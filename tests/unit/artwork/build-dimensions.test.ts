@@ -3,9 +3,9 @@
 import { describe, expect, it } from 'vitest';
 import { buildArtwork, type Artwork, type ArtworkDimension, type ArtworkShape } from '../../../src/lib/artwork';
 import { contourBounds, type Bounds } from '../../../src/lib/geometry';
-import { size } from '../../../src/lib/rf';
 import { sizedCase } from '../../fixtures/designs/design-cases';
 import { layeredCases } from '../../fixtures/designs/layered-cases';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 const boundsOf = (s: ArtworkShape): Bounds => {
 	const g = s.geometry;
@@ -73,7 +73,7 @@ describe('buildDimensions', () => {
 	});
 
 	it('measures an aperture’s slot in the ground and the stub past it', () => {
-		const a = buildArtwork(size(layeredCases.find((c) => c.name === 'aperture-coupled patch')!.doc));
+		const a = buildArtwork(sizeDocument(layeredCases.find((c) => c.name === 'aperture-coupled patch')!.doc));
 		const slot = boundsOf(shape(a, 'coupling-slot'));
 		expect(spanX(dim(a, 'slot-length'))).toEqual([slot.minXMm, slot.maxXMm].map((v) => expect.closeTo(v, 9)));
 		expect(spanY(dim(a, 'slot-width'))).toEqual([slot.minYMm, slot.maxYMm].map((v) => expect.closeTo(v, 9)));
@@ -82,7 +82,7 @@ describe('buildDimensions', () => {
 	});
 
 	it('measures a stacked parasitic patch and, in an array, the pitch between neighbouring patches', () => {
-		const a = buildArtwork(size(layeredCases.find((c) => c.name === '2×2 stacked parasitic array')!.doc));
+		const a = buildArtwork(sizeDocument(layeredCases.find((c) => c.name === '2×2 stacked parasitic array')!.doc));
 		const parasitics = a.layers.flatMap((l) => l.shapes).filter((s) => s.role === 'parasitic-patch').map(boundsOf);
 		// the upper right one
 		const p = parasitics.reduce((best, b) => (b.maxXMm + b.maxYMm > best.maxXMm + best.maxYMm ? b : best));

@@ -3,10 +3,10 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { buildArtwork, type Artwork, type ArtworkShape } from '../../../src/lib/artwork';
 import { GeometryError, contourBounds, flattenContour, isSimpleRing, type Contour } from '../../../src/lib/geometry';
-import { size } from '../../../src/lib/rf';
 import { InputError, type DesignInputDocument } from '../../../src/lib/schemas';
 import { layeredCases, layeredDocument, parasiticStack, threeCopperStack } from '../../fixtures/designs/layered-cases';
 import { reachable, touchGraph } from './copper-graph';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 function contoursOf(shape: ArtworkShape): Contour[] {
 	const g = shape.geometry;
@@ -99,7 +99,7 @@ function expectStackInOrder(a: Artwork): void {
 
 describe('layered designs and arrays (fixed cases)', () => {
 	it.each(layeredCases)('$name: rings closed and simple, every element fed, coupling in place, stack in order', ({ doc }) => {
-		const a = buildArtwork(size(doc));
+		const a = buildArtwork(sizeDocument(doc));
 		expectRingsClosedAndSimple(a);
 		expectEveryElementFed(a);
 		expectCouplingInPlace(a);
@@ -109,7 +109,7 @@ describe('layered designs and arrays (fixed cases)', () => {
 	});
 
 	it('numbers three coppers 1–3 with the middle one inner', () => {
-		const a = buildArtwork(size(layeredCases[0].doc));
+		const a = buildArtwork(sizeDocument(layeredCases[0].doc));
 		expect(a.layers.filter((l) => l.function.kind === 'copper').map((l) => l.function)).toEqual([
 			{ kind: 'copper', copperIndex: 1, side: 'top' },
 			{ kind: 'copper', copperIndex: 2, side: 'inner' },
@@ -118,19 +118,19 @@ describe('layered designs and arrays (fixed cases)', () => {
 	});
 
 	it('puts one element of every grid position into an 8×8 array, each fed', () => {
-		const a = buildArtwork(size(layeredDocument({ feed: 'inset', array: { columns: 8, rows: 8 } })));
+		const a = buildArtwork(sizeDocument(layeredDocument({ feed: 'inset', array: { columns: 8, rows: 8 } })));
 		expect(elementPrefixes(a).length).toBe(64);
 		expectEveryElementFed(a);
 	});
 
 	it('notices a broken feed: with one network piece taken out, some element is no longer reached', () => {
-		const a = buildArtwork(size(layeredDocument({ feed: 'inset', array: { columns: 4, rows: 2 } })));
+		const a = buildArtwork(sizeDocument(layeredDocument({ feed: 'inset', array: { columns: 4, rows: 2 } })));
 		const cut: Artwork = { ...a, layers: a.layers.map((l) => (l.id === 'copper-top' ? { ...l, shapes: l.shapes.filter((s) => s.id !== 'net-1') } : l)) };
 		expect(() => expectEveryElementFed(cut)).toThrow();
 	});
 
 	it('refuses a pitch smaller than the element with a GeometryError naming the spacing', () => {
-		expect(() => buildArtwork(size(layeredDocument({ feed: 'inset', array: { columns: 4, spacingXWavelengths: 0.3 } })))).toThrow(/spacingXWavelengths/);
+		expect(() => buildArtwork(sizeDocument(layeredDocument({ feed: 'inset', array: { columns: 4, spacingXWavelengths: 0.3 } })))).toThrow(/spacingXWavelengths/);
 	});
 });
 
@@ -159,7 +159,7 @@ const randomDocuments: fc.Arbitrary<DesignInputDocument> = fc
 
 function tryBuild(doc: DesignInputDocument): Artwork | null {
 	try {
-		return buildArtwork(size(doc));
+		return buildArtwork(sizeDocument(doc));
 	} catch (e) {
 		if (e instanceof InputError || e instanceof GeometryError) return null;
 		throw e;

@@ -7,7 +7,7 @@ import { analyzeGroundedCoplanar } from '../../../src/lib/rf/grounded-coplanar';
 import { parseDesignInput } from '../../../src/lib/schemas';
 import { designDocument, sizedCase } from '../../fixtures/designs/design-cases';
 import { layeredCases } from '../../fixtures/designs/layered-cases';
-import { size } from '../../../src/lib/rf';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 const UM = 1e-3;
 
@@ -71,7 +71,7 @@ describe('an edge launch', () => {
 
 	it('builds on an array’s network input at the board edge', () => {
 		const doc = { ...layeredCases.find((c) => c.name === '2×2 quarter-wave array')!.doc, launch: { kind: 'edge' as const, groundWidthMm: 0.5 } };
-		const a = buildArtwork(size(doc));
+		const a = buildArtwork(sizeDocument(doc));
 		expect(a.metadata.launch?.kind).toBe('edge');
 		expect(a.drills.filter((d) => d.role === 'launch-via').length).toBeGreaterThan(0);
 	});
@@ -79,14 +79,14 @@ describe('an edge launch', () => {
 	it('refuses a line whose impedance no gap reaches, naming launch.gapMm', () => {
 		// a 200 Ω line is 36 µm wide on this substrate: even the widest gap the solver tries stays under 200 Ω
 		const doc = designDocument('rectangular', 'edge', { feedLineImpedanceOhm: 200, targetImpedanceOhm: 200, launch: { kind: 'edge' } });
-		expect(() => buildArtwork(size(doc))).toThrow(GeometryError);
-		expect(() => buildArtwork(size(doc))).toThrow(/launch\.gapMm/);
+		expect(() => buildArtwork(sizeDocument(doc))).toThrow(GeometryError);
+		expect(() => buildArtwork(sizeDocument(doc))).toThrow(/launch\.gapMm/);
 		// a stated gap builds
-		expect(buildArtwork(size({ ...doc, launch: { kind: 'edge', gapMm: 1 } })).metadata.launch?.kind).toBe('edge');
+		expect(buildArtwork(sizeDocument({ ...doc, launch: { kind: 'edge', gapMm: 1 } })).metadata.launch?.kind).toBe('edge');
 	});
 
 	it('solves low line impedances too: a 10 Ω line gets a section of 10 Ω', () => {
-		const a = buildArtwork(size(designDocument('rectangular', 'edge', { feedLineImpedanceOhm: 10, targetImpedanceOhm: 10, launch: { kind: 'edge' } })));
+		const a = buildArtwork(sizeDocument(designDocument('rectangular', 'edge', { feedLineImpedanceOhm: 10, targetImpedanceOhm: 10, launch: { kind: 'edge' } })));
 		const l = a.metadata.launch!;
 		expect(l.kind === 'edge' && l.launchImpedanceOhm).toBeCloseTo(10, 4);
 	});
@@ -128,7 +128,7 @@ describe('any launch the schema accepts', () => {
 				(feed, edge, back) => {
 					const launch = feed === 'probe' ? { kind: 'back' as const, ...back } : { kind: 'edge' as const, ...edge };
 					try {
-						const a = buildArtwork(size(designDocument('rectangular', feed, { launch })));
+						const a = buildArtwork(sizeDocument(designDocument('rectangular', feed, { launch })));
 						expect(artworkSchema.safeParse(a).success).toBe(true);
 						expect(a.metadata.launch?.kind).toBe(launch.kind);
 					} catch (e) {

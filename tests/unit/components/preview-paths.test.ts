@@ -2,15 +2,15 @@
 import { describe, expect, it } from 'vitest';
 import { buildArtwork } from '../../../src/lib/artwork';
 import { previewCounts, previewKeyStep, previewLayerStyles } from '../../../src/lib/components/preview-paths';
-import { size } from '../../../src/lib/rf';
 import { designDocument } from '../../fixtures/designs/design-cases';
 import { layeredCases } from '../../fixtures/designs/layered-cases';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
-const artworkOf = (name: string) => buildArtwork(size(layeredCases.find((c) => c.name === name)!.doc));
+const artworkOf = (name: string) => buildArtwork(sizeDocument(layeredCases.find((c) => c.name === name)!.doc));
 
 describe('preview layer styles', () => {
 	it('keep the two names of a two-copper board and draw the ground under the top copper', () => {
-		const styles = previewLayerStyles(buildArtwork(size(designDocument('rectangular', 'inset'))).layers);
+		const styles = previewLayerStyles(buildArtwork(sizeDocument(designDocument('rectangular', 'inset'))).layers);
 		expect(styles['copper-top'].label).toBe('Top copper');
 		expect(styles['copper-bottom'].label).toBe('Ground');
 		expect(styles['copper-bottom'].order).toBeLessThan(styles['copper-top'].order);
@@ -20,7 +20,7 @@ describe('preview layer styles', () => {
 	it('hatch every ground plane and keep every other copper solid', () => {
 		const styles = previewLayerStyles(artworkOf('stacked parasitic patch').layers);
 		expect([styles['copper-top'].pattern, styles['copper-inner-1'].pattern, styles['copper-bottom'].pattern]).toEqual(['solid', 'solid', 'hatched']);
-		const two = previewLayerStyles(buildArtwork(size(designDocument('rectangular', 'inset'))).layers);
+		const two = previewLayerStyles(buildArtwork(sizeDocument(designDocument('rectangular', 'inset'))).layers);
 		expect([two['copper-top'].pattern, two['copper-bottom'].pattern]).toEqual(['solid', 'hatched']);
 	});
 

@@ -1,10 +1,10 @@
 // Derived-value rows for the new designs: coupled feeds, the parasitic patch and arrays (their array-factor figures).
 import { describe, expect, it } from 'vitest';
 import { derivedQuantities } from '../../../src/lib/design/derived-quantities';
-import { size } from '../../../src/lib/rf';
 import { layeredCases } from '../../fixtures/designs/layered-cases';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
-const rows = (name: string) => new Map(derivedQuantities(size(layeredCases.find((c) => c.name === name)!.doc)).map((q) => [q.key, q]));
+const rows = (name: string) => new Map(derivedQuantities(sizeDocument(layeredCases.find((c) => c.name === name)!.doc)).map((q) => [q.key, q]));
 
 describe('derived values of layered designs and arrays', () => {
 	it('list the aperture-coupled slot and stub, and the proximity-coupled overlap', () => {
@@ -41,17 +41,17 @@ describe('derived values of layered designs and arrays', () => {
 describe('derived values of a single patch: its pattern and, for CP, its bands', () => {
 	const cp = { frequencyHz: 5.8e9, shape: 'truncated-corner', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.001 } };
 	it('lists the E- and H-plane beamwidths of a single patch, and not of an array', () => {
-		const single = new Map(derivedQuantities(size({ ...cp, shape: 'rectangular' })).map((q) => [q.key, q]));
+		const single = new Map(derivedQuantities(sizeDocument({ ...cp, shape: 'rectangular' })).map((q) => [q.key, q]));
 		expect(single.get('beamwidthEDeg')?.unit).toBe('°');
 		expect(Number(single.get('beamwidthHDeg')?.value)).toBeGreaterThan(60);
-		const array = new Map(derivedQuantities(size({ ...cp, shape: 'rectangular', array: { columns: 4 } })).map((q) => [q.key, q]));
+		const array = new Map(derivedQuantities(sizeDocument({ ...cp, shape: 'rectangular', array: { columns: 4 } })).map((q) => [q.key, q]));
 		expect(array.has('beamwidthEDeg')).toBe(false);
 	});
 
 	it('lists the AR, two-mode VSWR and usable bands of a CP patch in MHz, and none for a linear one', () => {
-		const rowsCp = new Map(derivedQuantities(size(cp)).map((q) => [q.key, q]));
+		const rowsCp = new Map(derivedQuantities(sizeDocument(cp)).map((q) => [q.key, q]));
 		expect(rowsCp.get('axialRatioBandMHz')?.value).toMatch(/^57\d\d\.\d–58\d\d\.\d$/);
 		expect(rowsCp.get('usableBandMHz')?.value).toBe(rowsCp.get('axialRatioBandMHz')?.value);
-		expect(new Map(derivedQuantities(size({ ...cp, shape: 'rectangular' })).map((q) => [q.key, q])).has('axialRatioBandMHz')).toBe(false);
+		expect(new Map(derivedQuantities(sizeDocument({ ...cp, shape: 'rectangular' })).map((q) => [q.key, q])).has('axialRatioBandMHz')).toBe(false);
 	});
 });

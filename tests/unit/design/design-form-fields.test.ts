@@ -17,6 +17,17 @@ import { designInputSchema, fromZodError, parseDesignInput } from '../../../src/
 import { layeredCases } from '../../fixtures/designs/layered-cases';
 
 describe('editor form values for layered designs and arrays', () => {
+	it('shows the probe defaults (drill 1.3 mm, clearance 4.1 mm: the schema defaults) on an inset design, so switching to a probe finds them filled', () => {
+		const input = parseDesignInput({ name: 'Form demo', frequencyHz: 2.45e9, feed: 'inset', substrate: { relativePermittivity: 4.4, heightMm: 1.6 } });
+		expect('probe' in input).toBe(false);
+		const values = formValuesFromInput(input);
+		expect([values['probe.drillDiameterMm'], values['probe.clearanceDiameterMm']]).toEqual(['1.3', '4.1']);
+		const probeDoc = parseDesignInput(documentFromFormValues({ ...values, feed: 'probe' }));
+		expect(probeDoc.feed === 'probe' && probeDoc.probe).toEqual({ drillDiameterMm: 1.3, clearanceDiameterMm: 4.1 });
+		// and the inset design itself posts back without a probe object
+		expect(parseDesignInput(documentFromFormValues(values))).toEqual(input);
+	});
+
 	it.each(layeredCases)('$name: stored input → form values → document parses back to the same input', ({ doc }) => {
 		const input = parseDesignInput(doc);
 		const values = formValuesFromInput(input);

@@ -2,14 +2,14 @@
 import { describe, expect, it } from 'vitest';
 import { buildArtwork } from '../../../src/lib/artwork';
 import { checkArtwork, checkStackBuild } from '../../../src/lib/drc';
-import { size } from '../../../src/lib/rf';
 import { builtInFabProfileFor, STANDARD_MULTILAYER_PROFILE, STANDARD_QUICK_TURN_PROFILE } from '../../../src/lib/schemas';
 import { sizedCase } from '../../fixtures/designs/design-cases';
 import { layeredDocument, threeCopperStack } from '../../fixtures/designs/layered-cases';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 /** Two different cores (εr 2.2 and 3.55) around the slot copper, no bonding film between them (demo data). */
 const twoCoresNoFilm = [threeCopperStack[0], threeCopperStack[1], threeCopperStack[3], threeCopperStack[4], threeCopperStack[5]];
-const twoCoreArtwork = buildArtwork(size(layeredDocument({ feed: 'aperture-coupled', stack: [...twoCoresNoFilm] })));
+const twoCoreArtwork = buildArtwork(sizeDocument(layeredDocument({ feed: 'aperture-coupled', stack: [...twoCoresNoFilm] })));
 
 describe('the stack-build rule', () => {
 	it('refuses a stack of two different cores without a bonding film on the two-layer profile, saying why', () => {

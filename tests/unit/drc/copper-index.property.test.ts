@@ -13,10 +13,10 @@ import { boundaryDistance } from '../../../src/lib/drc/shape-distance';
 import { narrowestWidth } from '../../../src/lib/drc/shape-width';
 import { locationOf, midpointOf, roundMm } from '../../../src/lib/drc/violation';
 import { LENGTH_EPSILON_MM, distanceMm } from '../../../src/lib/geometry';
-import { size } from '../../../src/lib/rf';
 import { arrayBenchDocument } from '../../../src/lib/design';
 import { STANDARD_QUICK_TURN_PROFILE as P } from '../../../src/lib/schemas/fab-profile';
 import { craftArtwork, disc, rect, roundRegion } from './crafted-artwork';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 // ---- the all-pairs versions, as they were before the index: the reference the indexed ones must equal ----
 
@@ -144,7 +144,7 @@ describe('indexed copper checks equal the all-pairs checks', () => {
 describe('a large array is checked in near-linear time', () => {
 	it('checks a 32×32 array (7 196 copper shapes) in seconds; comparing every pair took minutes', () => {
 		// 16×16 took ≈ 91 s with all pairs (issue 13); 32×32 has 4× the shapes, so ≈ 16× that
-		const artwork = buildArtwork(size(arrayBenchDocument(32)));
+		const artwork = buildArtwork(sizeDocument(arrayBenchDocument(32)));
 		const started = performance.now();
 		const violations = checkArtwork(artwork, P);
 		const elapsedMs = performance.now() - started;

@@ -1,8 +1,9 @@
 // Array factor: broadside line directivity against Balanis's closed form, a numeric sphere integral, beamwidth, and the grating-lobe onset.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { gratingLobeCondition, arrayFactorCutDb, arrayFactorDirectivity, arrayFactorMagnitude, broadsideLineDirectivityApprox, gratingLobeLimitWavelengths, halfPowerBeamwidthDeg, integrateGaussLegendre, size } from '../../../src/lib/rf';
+import { gratingLobeCondition, arrayFactorCutDb, arrayFactorDirectivity, arrayFactorMagnitude, broadsideLineDirectivityApprox, gratingLobeLimitWavelengths, halfPowerBeamwidthDeg, integrateGaussLegendre } from '../../../src/lib/rf';
 import { layeredDocument } from '../../fixtures/designs/layered-cases';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 const line = (n: number, d: number, scanAngleDeg = 0) => ({ columns: n, rows: 1, spacingXWavelengths: d, spacingYWavelengths: 0.5, scanAngleDeg });
 
@@ -75,7 +76,7 @@ describe('array factor', () => {
 
 	it('warns for grating lobes at and above the limit and not below, naming the axis', () => {
 		const warn = (spacingXWavelengths: number, scanAngleDeg: number) =>
-			size(layeredDocument({ feed: 'inset', array: { columns: 4, spacingXWavelengths, scanAngleDeg } })).warnings.filter((w) => w.code === 'grating-lobes');
+			sizeDocument(layeredDocument({ feed: 'inset', array: { columns: 4, spacingXWavelengths, scanAngleDeg } })).warnings.filter((w) => w.code === 'grating-lobes');
 		const limit = gratingLobeLimitWavelengths(30);
 		expect(warn(limit - 0.001, 30)).toEqual([]);
 		expect(warn(limit + 0.001, 30).length).toBe(1);

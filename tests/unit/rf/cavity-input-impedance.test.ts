@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { cavityModelResponse, cavityModelRlc, parallelRlcImpedance, reflectionFromImpedance } from '../../../src/lib/rf/cavity-input-impedance';
-import { size } from '../../../src/lib/rf/size';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 const rlc = { resonantFrequencyHz: 2.45e9, qualityFactor: 40, resistanceOhm: 50 };
 
@@ -45,7 +45,7 @@ describe('reflectionFromImpedance', () => {
 });
 
 describe('the cavity-model prediction of a sized design', () => {
-	const sized = size({ frequencyHz: 2.45e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 3.55, heightMm: 1.524, lossTangent: 0.0027 } });
+	const sized = sizeDocument({ frequencyHz: 2.45e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 3.55, heightMm: 1.524, lossTangent: 0.0027 } });
 
 	it('resonates at the design frequency, matched to the target impedance', () => {
 		const model = cavityModelRlc(sized);
@@ -70,7 +70,7 @@ describe('the cavity-model prediction of a sized design', () => {
 	});
 
 	it('uses the radiating-edge resistance for an edge feed', () => {
-		const edge = size({ frequencyHz: 2.45e9, feed: 'edge', substrate: { relativePermittivity: 3.55, heightMm: 1.524 } });
+		const edge = sizeDocument({ frequencyHz: 2.45e9, feed: 'edge', substrate: { relativePermittivity: 3.55, heightMm: 1.524 } });
 		expect(cavityModelRlc(edge).resistanceOhm).toBe(edge.edgeResistanceOhm);
 	});
 });

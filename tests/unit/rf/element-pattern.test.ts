@@ -17,6 +17,7 @@ import {
 	type ElementPatternGeometry
 } from '../../../src/lib/rf';
 import { circularDirectivity, rectangularDirectivity } from '../../../src/lib/rf/performance-estimates';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 const C_MM_PER_S = 299_792_458e3;
 
@@ -168,7 +169,7 @@ describe('element pattern: half-power beamwidths', () => {
 	});
 
 	it('puts a sized 2.45 GHz patch’s beamwidths in the typical 60°–110° of a single patch (common practice, from memory), H-plane narrower than E-plane on low εr', () => {
-		const sized = size({ frequencyHz: 2.45e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 1.575, lossTangent: 0.0009 } });
+		const sized = sizeDocument({ frequencyHz: 2.45e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 1.575, lossTangent: 0.0009 } });
 		const p = elementPattern(elementPatternGeometry(sized)!);
 		expect(p.halfPowerBeamwidthHDeg!).toBeGreaterThan(60);
 		expect(p.halfPowerBeamwidthHDeg!).toBeLessThan(110);
@@ -178,7 +179,7 @@ describe('element pattern: half-power beamwidths', () => {
 	});
 
 	it('makes the H-plane of a disc on εr 2.2 narrower than its E-plane, with both cuts 0 dB at broadside and the H-plane at the −80 dB floor at grazing', () => {
-		const sized = size({ frequencyHz: 1.57542e9, shape: 'circular', feed: 'probe', substrate: { relativePermittivity: 2.2, heightMm: 1.575, lossTangent: 0.0009 } });
+		const sized = sizeDocument({ frequencyHz: 1.57542e9, shape: 'circular', feed: 'probe', substrate: { relativePermittivity: 2.2, heightMm: 1.575, lossTangent: 0.0009 } });
 		const p = elementPattern(elementPatternGeometry(sized)!);
 		expect(p.eDb[90]).toBe(0);
 		expect(p.hDb[90]).toBe(0);
@@ -189,22 +190,22 @@ describe('element pattern: half-power beamwidths', () => {
 
 describe('element pattern of a sized design', () => {
 	it('uses the patch width, L + 2ΔL and the substrate height for the rectangular family, and the effective radius for a disc', () => {
-		const rect = size({ frequencyHz: 5.8e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.0009 } });
+		const rect = sizeDocument({ frequencyHz: 5.8e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.0009 } });
 		const g = elementPatternGeometry(rect)!;
 		expect(g).toMatchObject({ model: 'two-slot', heightMm: 0.787 });
 		if (g.model !== 'two-slot' || rect.patch.kind !== 'rectangular') throw new Error('two-slot expected');
 		expect(g.widthMm).toBeCloseTo(rect.patch.widthMm, 9);
 		expect(g.effectiveLengthMm).toBeCloseTo(rect.effectiveLengthMm!, 9);
-		const cp = size({ frequencyHz: 5.8e9, shape: 'truncated-corner', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.001 } });
+		const cp = sizeDocument({ frequencyHz: 5.8e9, shape: 'truncated-corner', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.001 } });
 		const gc = elementPatternGeometry(cp)!;
 		if (gc.model !== 'two-slot' || cp.patch.kind !== 'truncated-corner') throw new Error('two-slot expected');
 		expect(gc.widthMm).toBeCloseTo(cp.patch.sideMm, 9);
-		const round = size({ frequencyHz: 5.2e9, shape: 'circular', feed: 'probe', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.001 } });
+		const round = sizeDocument({ frequencyHz: 5.2e9, shape: 'circular', feed: 'probe', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.001 } });
 		expect(elementPatternGeometry(round)).toMatchObject({ model: 'cavity-tm11', effectiveRadiusMm: round.patch.kind === 'circular' ? round.patch.effectiveRadiusMm : NaN });
 	});
 
 	it('gives no element pattern for an array (its page shows the array factor)', () => {
-		const arr = size({ frequencyHz: 5.8e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.0009 }, array: { columns: 4 } });
+		const arr = sizeDocument({ frequencyHz: 5.8e9, shape: 'rectangular', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.0009 }, array: { columns: 4 } });
 		expect(elementPatternGeometry(arr)).toBeNull();
 	});
 });

@@ -1,9 +1,9 @@
 // The answers the core asks of each feed kind: one row per kind, the printed line of a sized feed, the layered ones.
 import { describe, expect, it } from 'vitest';
 import { feedKindTraits, feedLineOf, isLayeredFeed, isLayeredFeedKind } from '../../../src/lib/rf/feed-kinds';
-import { size } from '../../../src/lib/rf/size';
 import { allFeedKinds, layeredFeedKinds } from '../../../src/lib/schemas';
 import { layeredDocument, threeCopperStack } from '../../fixtures/designs/layered-cases';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 const base = {
 	name: 'feed kinds',
@@ -21,19 +21,19 @@ describe('feed kinds', () => {
 	});
 
 	it('gives the printed line of a line-fed patch and none for a probe', () => {
-		const inset = size({ ...base, feed: 'inset' });
+		const inset = sizeDocument({ ...base, feed: 'inset' });
 		expect(feedLineOf(inset.feed)?.widthMm).toBeGreaterThan(0);
 		expect(feedLineOf(inset.feed)).toBe(inset.feed.kind === 'inset' ? inset.feed.line : undefined);
-		expect(feedLineOf(size({ ...base, feed: 'probe' }).feed)).toBeUndefined();
+		expect(feedLineOf(sizeDocument({ ...base, feed: 'probe' }).feed)).toBeUndefined();
 	});
 
 	it('narrows a coupled feed to the layered union and leaves a single-layer one out', () => {
 		for (const feed of layeredFeedKinds) {
-			const sized = size(layeredDocument({ feed, stack: [...threeCopperStack] }));
+			const sized = sizeDocument(layeredDocument({ feed, stack: [...threeCopperStack] }));
 			expect(isLayeredFeed(sized.feed)).toBe(true);
 			expect(feedLineOf(sized.feed)?.widthMm).toBeGreaterThan(0);
 		}
-		expect(isLayeredFeed(size({ ...base, feed: 'edge' }).feed)).toBe(false);
+		expect(isLayeredFeed(sizeDocument({ ...base, feed: 'edge' }).feed)).toBe(false);
 	});
 
 	it('lets only the edge feed present the radiating-edge resistance (it transforms nothing)', () => {

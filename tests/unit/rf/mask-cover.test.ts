@@ -1,10 +1,11 @@
 // A solder mask over the patch: the covered εeff the sizing is told, and the patch it then sizes.
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_MASK_RELATIVE_PERMITTIVITY, DEFAULT_MASK_THICKNESS_UM, analyzeMicrostrip, maskCoverPermittivities, size, sizingReport } from '../../../src/lib/rf';
+import { DEFAULT_MASK_RELATIVE_PERMITTIVITY, DEFAULT_MASK_THICKNESS_UM, analyzeMicrostrip, maskCoverPermittivities, sizingReport } from '../../../src/lib/rf';
 import type { DesignInputDocument } from '../../../src/lib/schemas';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 const fr4: DesignInputDocument = { name: 'Mask test', frequencyHz: 2.45e9, substrate: { relativePermittivity: 4.4, heightMm: 1.6, lossTangent: 0.02 } };
-const lengthOf = (p: ReturnType<typeof size>['patch']) => (p.kind === 'rectangular' || p.kind === 'nearly-square' ? p.lengthMm : p.kind === 'circular' ? 2 * p.radiusMm : p.sideMm);
+const lengthOf = (p: ReturnType<typeof sizeDocument>['patch']) => (p.kind === 'rectangular' || p.kind === 'nearly-square' ? p.lengthMm : p.kind === 'circular' ? 2 * p.radiusMm : p.sideMm);
 
 describe('maskCoverPermittivities', () => {
 	it('tends to εr under a very thick cover of the substrate’s own εr (a homogeneous dielectric carries a TEM wave, εeff = εr; Pozar, Microwave Engineering 4th ed., §3.8, from memory)', () => {
@@ -26,9 +27,9 @@ describe('maskCoverPermittivities', () => {
 	});
 });
 
-describe('size() with the mask over the patch', () => {
-	const bare = size(fr4);
-	const covered = size({ ...fr4, solderMask: true, maskCoverage: 'covered' });
+describe('sizeDocument() with the mask over the patch', () => {
+	const bare = sizeDocument(fr4);
+	const covered = sizeDocument({ ...fr4, solderMask: true, maskCoverage: 'covered' });
 
 	it('sizes the patch on the covered εeff, keeps the width and shortens the length', () => {
 		const c = covered.maskCover!;
@@ -56,13 +57,13 @@ describe('size() with the mask over the patch', () => {
 	});
 
 	it('takes the stated mask εr and thickness and says they are not assumed', () => {
-		const s = size({ ...fr4, shape: 'circular', feed: 'probe', solderMask: true, maskCoverage: 'covered', maskCover: { relativePermittivity: 3.5, thicknessUm: 30 } });
+		const s = sizeDocument({ ...fr4, shape: 'circular', feed: 'probe', solderMask: true, maskCoverage: 'covered', maskCover: { relativePermittivity: 3.5, thicknessUm: 30 } });
 		expect(s.maskCover).toMatchObject({ relativePermittivity: 3.5, thicknessMm: 0.03, assumed: { relativePermittivity: false, thickness: false } });
-		expect(lengthOf(s.patch)).toBeLessThan(lengthOf(size({ ...fr4, shape: 'circular', feed: 'probe' }).patch));
+		expect(lengthOf(s.patch)).toBeLessThan(lengthOf(sizeDocument({ ...fr4, shape: 'circular', feed: 'probe' }).patch));
 	});
 
 	it('leaves an exposed mask (and no mask) sized as before', () => {
-		expect(size({ ...fr4, solderMask: true, maskCoverage: 'exposed' }).patch).toEqual(bare.patch);
-		expect(size({ ...fr4, solderMask: true }).maskCover).toBeUndefined();
+		expect(sizeDocument({ ...fr4, solderMask: true, maskCoverage: 'exposed' }).patch).toEqual(bare.patch);
+		expect(sizeDocument({ ...fr4, solderMask: true }).maskCover).toBeUndefined();
 	});
 });

@@ -3,9 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { documentFromArgs } from '../../../src/cli/commands/size';
 import { sizeDocument as sizeInEditor } from '../../../src/lib/design/live-sizing';
 import { sizingReport } from '../../../src/lib/rf';
-import { size } from '../../../src/lib/rf/size';
 import { sizeDocument as sizeForApi } from '../../../src/lib/server/api/size-api';
 import { load, _landingExample } from '../../../src/routes/+page';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 type Landing = { example: { widthMm: number; lengthMm: number; insetDepthMm: number; bandwidthPercent: number } };
 const landing = () => (load as unknown as () => Landing)().example;
@@ -17,7 +17,7 @@ describe('one sizing path', () => {
 		const editor = sizeInEditor(structuredClone(_landingExample));
 		if (!editor.ok) throw new Error('the landing example must size');
 		const api = sizeForApi(structuredClone(_landingExample));
-		const cli = sizingReport(size(documentFromArgs([...cliFlags, '--loss-tangent', '0.02'])));
+		const cli = sizingReport(sizeDocument(documentFromArgs([...cliFlags, '--loss-tangent', '0.02'])));
 		const shown = landing();
 		for (const sized of [editor.sized, api]) {
 			expect(sized.estimates).toEqual(api.estimates);
@@ -33,7 +33,7 @@ describe('one sizing path', () => {
 	// The issue: "εr 4.3, 1.6 mm at 2.45 GHz" once showed 89.6 % efficiency from the CLI (silent tanδ 0.0009)
 	// against 41 % from the glass-epoxy preset. Without tanδ the CLI now assumes the class value and says so.
 	it('sizes a document without tanδ like the glass-epoxy class, and names the assumption', () => {
-		const bare = size(documentFromArgs(cliFlags));
+		const bare = sizeDocument(documentFromArgs(cliFlags));
 		const landed = sizeForApi(structuredClone(_landingExample));
 		expect(bare.estimates).toEqual(landed.estimates);
 		expect(bare.input.substrate.lossTangent).toBe(0.02);

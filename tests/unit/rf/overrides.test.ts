@@ -1,20 +1,20 @@
 // Dimension overrides: the sizing honours explicit dimensions, describes the overridden patch and keeps the formula's values visible.
 import { describe, expect, it } from 'vitest';
 import { buildArtwork } from '../../../src/lib/artwork';
-import { size } from '../../../src/lib/rf';
 import { InputError } from '../../../src/lib/schemas';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 const rect = { frequencyHz: 2.45e9, feed: 'inset', substrate: { relativePermittivity: 4.3, heightMm: 1.6 } } as const;
 
 describe('dimension overrides', () => {
 	it('leaves a document without overrides exactly as before (no formulaValues)', () => {
-		expect(size(rect).formulaValues).toBeUndefined();
-		expect(size({ ...rect, overrides: {} }).formulaValues).toBeUndefined();
+		expect(sizeDocument(rect).formulaValues).toBeUndefined();
+		expect(sizeDocument({ ...rect, overrides: {} }).formulaValues).toBeUndefined();
 	});
 
 	it('uses an overridden length and inset depth, and shows the formula values beside them', () => {
-		const plain = size(rect);
-		const tuned = size({ ...rect, overrides: { lengthMm: 28.5, insetDepthMm: 4.5 } });
+		const plain = sizeDocument(rect);
+		const tuned = sizeDocument({ ...rect, overrides: { lengthMm: 28.5, insetDepthMm: 4.5 } });
 		expect(tuned.patch).toMatchObject({ kind: 'rectangular', lengthMm: 28.5 });
 		expect(tuned.feed).toMatchObject({ kind: 'inset', insetDepthMm: 4.5 });
 		expect(tuned.formulaValues!.lengthMm).toBe((plain.patch as { lengthMm: number }).lengthMm);
@@ -29,8 +29,8 @@ describe('dimension overrides', () => {
 
 	it('recomputes a circular patch from an overridden radius and probe offset', () => {
 		const doc = { frequencyHz: 1.57542e9, shape: 'circular', feed: 'probe', substrate: { relativePermittivity: 3.38, heightMm: 1.524 } } as const;
-		const plain = size(doc);
-		const tuned = size({ ...doc, overrides: { radiusMm: 26, probeOffsetMm: 8 } });
+		const plain = sizeDocument(doc);
+		const tuned = sizeDocument({ ...doc, overrides: { radiusMm: 26, probeOffsetMm: 8 } });
 		expect(tuned.patch).toMatchObject({ kind: 'circular', radiusMm: 26 });
 		expect(tuned.feed).toMatchObject({ kind: 'probe', offsetYMm: 8 });
 		expect(tuned.formulaValues!.radiusMm).toBe((plain.patch as { radiusMm: number }).radiusMm);
@@ -47,7 +47,7 @@ describe('dimension overrides', () => {
 		[{ ...rect, overrides: { lengthMm: -1 } }, 'overrides.lengthMm']
 	])('rejects an override that does not apply (%#) at %s', (doc, path) => {
 		try {
-			size(doc);
+			sizeDocument(doc);
 			expect.unreachable();
 		} catch (err) {
 			expect(err).toBeInstanceOf(InputError);

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { VACUUM_PERMEABILITY_H_PER_M } from '../../../src/lib/units';
 import { performanceEstimates } from '../../../src/lib/rf/performance-estimates';
-import { size } from '../../../src/lib/rf/size';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 describe('performanceEstimates', () => {
 	it('has 100 % efficiency and BW = 1/(Q√2) when there are no losses', () => {
@@ -30,7 +30,7 @@ describe('performanceEstimates', () => {
 		[3.5, 0.015]
 	])('lands within 35 %% of the Jackson–Alexopoulos bandwidth for εr %f, h/λ0 %f', (er, ratio) => {
 		const lambda = 299.792458 / 3;
-		const d = size({ frequencyHz: 3e9, substrate: { relativePermittivity: er, heightMm: ratio * lambda, lossTangent: 0, copperConductivitySPerM: 1e8 }, feed: 'edge' });
+		const d = sizeDocument({ frequencyHz: 3e9, substrate: { relativePermittivity: er, heightMm: ratio * lambda, lossTangent: 0, copperConductivitySPerM: 1e8 }, feed: 'edge' });
 		if (d.patch.kind !== 'rectangular') throw new Error('rectangular expected');
 		const closedForm = ((3.771 * (er - 1)) / (er * er)) * ratio * (d.patch.widthMm / d.patch.lengthMm);
 		expect(Math.abs(d.estimates.bandwidthFraction / closedForm - 1)).toBeLessThan(0.35);
@@ -38,7 +38,7 @@ describe('performanceEstimates', () => {
 
 	// A half-wave patch radiates with roughly 6–8 dBi directivity (common practice, no source).
 	it('gives a patch directivity between 5 and 9 dBi', () => {
-		const d = size({ frequencyHz: 10e9, substrate: { relativePermittivity: 2.2, heightMm: 1.588 } });
+		const d = sizeDocument({ frequencyHz: 10e9, substrate: { relativePermittivity: 2.2, heightMm: 1.588 } });
 		expect(d.estimates.directivityDbi).toBeGreaterThan(5);
 		expect(d.estimates.directivityDbi).toBeLessThan(9);
 	});
@@ -49,7 +49,7 @@ describe('performanceEstimates', () => {
 		lossTangent: fc.double({ min: 0.005, max: 0.03, noNaN: true })
 	});
 	const sizeOn = (frequencyHz: number, substrate: { relativePermittivity: number; heightMm: number; lossTangent: number }) =>
-		size({ frequencyHz, feed: 'quarter-wave', substrate: { ...substrate, copperConductivitySPerM: 5.8e7 } });
+		sizeDocument({ frequencyHz, feed: 'quarter-wave', substrate: { ...substrate, copperConductivitySPerM: 5.8e7 } });
 
 	it('loses efficiency as tanδ grows at fixed geometry (property)', () => {
 		fc.assert(

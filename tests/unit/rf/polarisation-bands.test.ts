@@ -12,6 +12,7 @@ import {
 	twoModeImpedanceBandwidthFraction
 } from '../../../src/lib/rf';
 import { InputError, parseDesignInput } from '../../../src/lib/schemas';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 /**
  * The two-mode model computed numerically, with the exact parallel-RLC frequency dependence
@@ -115,11 +116,11 @@ describe('CP bands of the two-mode patch', () => {
 	});
 
 	it('derives the bands of a stored CP design from its Q, and none for a linear shape', () => {
-		const cp = size({ frequencyHz: 5.8e9, shape: 'truncated-corner', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.001 } });
+		const cp = sizeDocument({ frequencyHz: 5.8e9, shape: 'truncated-corner', feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.001 } });
 		const b = polarisationBandsOf(cp)!;
 		expect(b.axialRatioBandwidthFraction).toBeCloseTo(axialRatioBandwidthFraction(cp.estimates.qualityFactor), 15);
 		expect((b.axialRatioBand.lowerHz + b.axialRatioBand.upperHz) / 2).toBeCloseTo(5.8e9, 0);
-		expect(polarisationBandsOf(size({ frequencyHz: 5.8e9, substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.001 } }))).toBeNull();
+		expect(polarisationBandsOf(sizeDocument({ frequencyHz: 5.8e9, substrate: { relativePermittivity: 2.2, heightMm: 0.787, lossTangent: 0.001 } }))).toBeNull();
 	});
 });
 
@@ -129,7 +130,7 @@ describe('band to cover', () => {
 	const ism58 = { lowerHz: 5.725e9, upperHz: 5.875e9 };
 
 	it('warns when a CP design’s usable band (≈ 50 MHz here) is narrower than the 150 MHz band to cover, naming both', () => {
-		const w = size({ ...cp58, bandToCover: ism58 }).warnings.find((x) => x.code === 'band-not-covered');
+		const w = sizeDocument({ ...cp58, bandToCover: ism58 }).warnings.find((x) => x.code === 'band-not-covered');
 		expect(w).toBeDefined();
 		expect(w!.message).toContain('usable CP band');
 		expect(w!.message).toContain('narrower than');
@@ -137,18 +138,18 @@ describe('band to cover', () => {
 	});
 
 	it('stays silent when the usable band holds the band to cover, and without a band to cover (old documents)', () => {
-		expect(size({ ...cp58, bandToCover: { lowerHz: 5.79e9, upperHz: 5.81e9 } }).warnings.map((w) => w.code)).not.toContain('band-not-covered');
-		const old = size(cp58);
+		expect(sizeDocument({ ...cp58, bandToCover: { lowerHz: 5.79e9, upperHz: 5.81e9 } }).warnings.map((w) => w.code)).not.toContain('band-not-covered');
+		const old = sizeDocument(cp58);
 		expect(old.warnings.map((w) => w.code)).not.toContain('band-not-covered');
 		expect(old.input.bandToCover).toBeUndefined();
 	});
 
 	it('checks a linear design against its VSWR ≤ 2 band, and says "off" for a band of the right width in the wrong place', () => {
 		const lp = { name: 'LP', frequencyHz: 2.45e9, feed: 'inset', substrate: { relativePermittivity: 2.2, heightMm: 1.575, lossTangent: 0.0009 } };
-		const sized = size(lp);
+		const sized = sizeDocument(lp);
 		const half = (sized.estimates.bandwidthFraction * 2.45e9) / 2;
-		expect(size({ ...lp, bandToCover: { lowerHz: 2.45e9 - half / 2, upperHz: 2.45e9 + half / 2 } }).warnings.map((w) => w.code)).not.toContain('band-not-covered');
-		const off = size({ ...lp, bandToCover: { lowerHz: 2.45e9 + half / 2, upperHz: 2.45e9 + 1.5 * half } }).warnings.find((w) => w.code === 'band-not-covered');
+		expect(sizeDocument({ ...lp, bandToCover: { lowerHz: 2.45e9 - half / 2, upperHz: 2.45e9 + half / 2 } }).warnings.map((w) => w.code)).not.toContain('band-not-covered');
+		const off = sizeDocument({ ...lp, bandToCover: { lowerHz: 2.45e9 + half / 2, upperHz: 2.45e9 + 1.5 * half } }).warnings.find((w) => w.code === 'band-not-covered');
 		expect(off!.message).toContain('VSWR ≤ 2 band');
 		expect(off!.message).toContain(' off the band');
 	});
@@ -171,11 +172,11 @@ describe('band to cover', () => {
 	});
 
 	it('prints the CP bands in the sizing report of a CP design only', () => {
-		const report = sizingReport(size(cp58)) as Record<string, unknown>;
+		const report = sizingReport(sizeDocument(cp58)) as Record<string, unknown>;
 		const block = report.circularPolarisation as Record<string, number>;
 		expect(block.axialRatioBandLowerHz).toBeLessThan(5.8e9);
 		expect(block.usableBandUpperHz).toBe(block.axialRatioBandUpperHz);
 		expect(block.impedanceBandwidthFraction).toBeGreaterThan(block.axialRatioBandwidthFraction);
-		expect(sizingReport(size({ ...cp58, shape: 'rectangular' }))).not.toHaveProperty('circularPolarisation');
+		expect(sizingReport(sizeDocument({ ...cp58, shape: 'rectangular' }))).not.toHaveProperty('circularPolarisation');
 	});
 });

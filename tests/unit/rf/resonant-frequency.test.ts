@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import * as rf from '../../../src/lib/rf';
 import { resonantFrequencyHz } from '../../../src/lib/rf/resonant-frequency';
-import { InputError } from '../../../src/lib/schemas';
+import { InputError, parseDesignInput } from '../../../src/lib/schemas';
 
 describe('resonantFrequencyHz', () => {
 	it("recovers 10 GHz from Balanis' example dimensions (W 11.86 mm, L 9.06 mm; from memory) within 0.5 %", () => {
@@ -21,9 +21,9 @@ describe('resonantFrequencyHz', () => {
 describe('every public rf function', () => {
 	// Each public function called with arbitrary arguments returns or throws InputError, nothing else.
 	const fns: [string, (a: unknown, b: unknown) => unknown][] = [
-		['size', (a) => rf.size(a)],
+		['size', (a) => rf.size(parseDesignInput(a))], // a document is parsed at the edge, then sized
 		['resonantFrequencyHz', (a, b) => rf.resonantFrequencyHz(a as never, b as never)],
-		['toleranceStudy', (a, b) => rf.toleranceStudy(a, b as never)],
+		['toleranceStudy', (a, b) => rf.toleranceStudy(parseDesignInput(a), b as never)],
 		['analyzeMicrostrip', (a) => rf.analyzeMicrostrip(a as never)],
 		['dispersivePermittivity', (a) => rf.dispersivePermittivity(a as never)],
 		['synthesizeMicrostrip', (a) => rf.synthesizeMicrostrip(a as never)],

@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { InputError, type DesignInputDocument } from '../../../src/lib/schemas';
 import { proposeRetune } from '../../../src/lib/rf/retune';
 import { resonantFrequencyHz } from '../../../src/lib/rf/resonant-frequency';
-import { size } from '../../../src/lib/rf/size';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 /** Demo designs: a common FR-4 board at 2.45 GHz, a low-loss laminate at 5.8 GHz and the other shapes. */
 const designs: { name: string; doc: DesignInputDocument }[] = [
@@ -18,7 +18,7 @@ const designs: { name: string; doc: DesignInputDocument }[] = [
 
 /** The board as built: the designed dimensions on a laminate of the true εr. */
 function measuredOn(doc: DesignInputDocument, trueEr: number): number {
-	const built = size(doc);
+	const built = sizeDocument(doc);
 	return resonantFrequencyHz(built.patch, { relativePermittivity: trueEr, heightMm: doc.substrate.heightMm });
 }
 
@@ -31,7 +31,7 @@ describe('proposeRetune', () => {
 				const proposal = proposeRetune(doc, measuredHz);
 				expect(proposal.apparentRelativePermittivity).toBeCloseTo(trueEr, 4);
 				// Build the proposal on the true laminate: it must resonate at the target.
-				const rebuilt = size(proposal.input);
+				const rebuilt = sizeDocument(proposal.input);
 				const newHz = resonantFrequencyHz(rebuilt.patch, { relativePermittivity: trueEr, heightMm: doc.substrate.heightMm });
 				expect(Math.abs(newHz / doc.frequencyHz - 1)).toBeLessThan(0.005);
 				expect(Math.abs(proposal.expectedFrequencyHz / doc.frequencyHz - 1)).toBeLessThan(0.005);
@@ -48,7 +48,7 @@ describe('proposeRetune', () => {
 			fc.property(fc.constantFrom(...designs), fc.double({ min: -0.15, max: 0.3, noNaN: true }), ({ doc }, fraction) => {
 				const trueEr = doc.substrate.relativePermittivity * (1 + fraction);
 				const proposal = proposeRetune(doc, measuredOn(doc, trueEr));
-				const rebuilt = size(proposal.input);
+				const rebuilt = sizeDocument(proposal.input);
 				const newHz = resonantFrequencyHz(rebuilt.patch, { relativePermittivity: trueEr, heightMm: doc.substrate.heightMm });
 				return Math.abs(newHz / doc.frequencyHz - 1) < 0.005;
 			}),
@@ -70,7 +70,7 @@ describe('proposeRetune', () => {
 		const names = proposal.dimensions.map((d) => d.name);
 		expect(names).toEqual(expect.arrayContaining(['patch.widthMm', 'patch.lengthMm', 'feed.insetDepthMm', 'feed.line.widthMm', 'ground.widthMm']));
 		const length = proposal.dimensions.find((d) => d.name === 'patch.lengthMm')!;
-		expect(length.oldMm).toBeCloseTo(size(doc).patch.kind === 'rectangular' ? (size(doc).patch as { lengthMm: number }).lengthMm : NaN, 12);
+		expect(length.oldMm).toBeCloseTo(sizeDocument(doc).patch.kind === 'rectangular' ? (sizeDocument(doc).patch as { lengthMm: number }).lengthMm : NaN, 12);
 		expect(length.changeFraction).toBeCloseTo(length.changeMm / length.oldMm, 12);
 		expect(proposal.apparentRelativePermittivity).toBeGreaterThan(proposal.designRelativePermittivity);
 		expect(proposal.apparentEffectivePermittivity).toBeGreaterThan(proposal.designEffectivePermittivity);
@@ -84,7 +84,7 @@ describe('proposeRetune', () => {
 		const proposal = proposeRetune(doc, measuredOn(doc, trueEr), { holdWidth: true });
 		const width = proposal.dimensions.find((d) => d.name === 'patch.widthMm')!;
 		expect(width.changeMm).toBe(0);
-		const newHz = resonantFrequencyHz(size(proposal.input).patch, { relativePermittivity: trueEr, heightMm: 1.6 });
+		const newHz = resonantFrequencyHz(sizeDocument(proposal.input).patch, { relativePermittivity: trueEr, heightMm: 1.6 });
 		expect(Math.abs(newHz / doc.frequencyHz - 1)).toBeLessThan(0.005);
 	});
 
@@ -111,7 +111,7 @@ describe('proposeRetune and the laminate that is bought', () => {
 	const base = designs[0].doc;
 
 	it('keeps the designed laminate as the one bought while the substrate carries the apparent εr', () => {
-		const p = proposeRetune(base, 0.95 * size(base).input.frequencyHz);
+		const p = proposeRetune(base, 0.95 * sizeDocument(base).input.frequencyHz);
 		expect(p.input.substrate.relativePermittivity).toBe(p.apparentRelativePermittivity);
 		// the document stated no tanδ: the class value sizing assumes is not the laminate's own statement
 		expect(p.input.laminate).toEqual({ relativePermittivity: p.designRelativePermittivity });
@@ -119,7 +119,7 @@ describe('proposeRetune and the laminate that is bought', () => {
 
 	it('keeps a named laminate through a retune of a retune', () => {
 		const named = { ...base, laminate: { name: 'Demo laminate 4.4', relativePermittivity: base.substrate.relativePermittivity, relativePermittivityTolerance: 0.1 } };
-		const first = proposeRetune(named, 0.97 * size(named).input.frequencyHz);
+		const first = proposeRetune(named, 0.97 * sizeDocument(named).input.frequencyHz);
 		const second = proposeRetune(first.input, 0.99 * first.input.frequencyHz);
 		expect(second.input.laminate).toEqual(named.laminate);
 		expect(second.input.substrate.relativePermittivity).not.toBe(named.laminate.relativePermittivity);

@@ -1,9 +1,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { resonantFrequencyHz } from '../../../src/lib/rf/resonant-frequency';
-import { size } from '../../../src/lib/rf/size';
 import type { SizedDesign } from '../../../src/lib/rf/sized-design';
 import { InputError } from '../../../src/lib/schemas';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 const C_MM_HZ = 299_792_458e3;
 
@@ -38,7 +38,7 @@ const design = fc
 /** Sizes, or returns the InputError for the two honest refusals: too thick, or the target out of reach. */
 function trySize(raw: unknown): SizedDesign | InputError {
 	try {
-		return size(raw);
+		return sizeDocument(raw);
 	} catch (e) {
 		expect(e).toBeInstanceOf(InputError);
 		expect(['substrate.heightMm', 'targetImpedanceOhm', 'feedLineImpedanceOhm']).toContain((e as InputError).first.path);
@@ -48,7 +48,7 @@ function trySize(raw: unknown): SizedDesign | InputError {
 
 describe('size', () => {
 	it("keeps Balanis' 10 GHz example as the textbook row (W 11.86 mm, L 9.06 mm, Rin 228 Ω, inset 3.13 mm; from memory)", () => {
-		const d = size({ frequencyHz: 10e9, substrate: { relativePermittivity: 2.2, heightMm: 1.588, lossTangent: 0.0009 } });
+		const d = sizeDocument({ frequencyHz: 10e9, substrate: { relativePermittivity: 2.2, heightMm: 1.588, lossTangent: 0.0009 } });
 		if (d.patch.kind !== 'rectangular' || d.feed.kind !== 'inset') throw new Error('unexpected kinds');
 		expect(Math.abs(d.patch.widthMm / 11.86 - 1)).toBeLessThan(0.005);
 		expect(Math.abs(d.textbook.resonantDimensionMm / 9.06 - 1)).toBeLessThan(0.005);
@@ -59,7 +59,7 @@ describe('size', () => {
 	});
 
 	it('sizes the first pass: a shorter L than the textbook (Hammerstad–Jensen εeff), a shallower cos⁴ inset on the loaded edge resistance', () => {
-		const d = size({ frequencyHz: 10e9, substrate: { relativePermittivity: 2.2, heightMm: 1.588, lossTangent: 0.0009 } });
+		const d = sizeDocument({ frequencyHz: 10e9, substrate: { relativePermittivity: 2.2, heightMm: 1.588, lossTangent: 0.0009 } });
 		if (d.patch.kind !== 'rectangular' || d.feed.kind !== 'inset') throw new Error('unexpected kinds');
 		// the textbook model over-predicts resonance (its patches come out low); the first pass is shorter,
 		// so the textbook would put it above the target
@@ -138,7 +138,7 @@ describe('size', () => {
 		fc.assert(
 			fc.property(fc.oneof(fc.anything(), almost, design), (raw) => {
 				try {
-					size(raw);
+					sizeDocument(raw);
 				} catch (e) {
 					expect(e).toBeInstanceOf(InputError);
 				}
@@ -149,7 +149,7 @@ describe('size', () => {
 
 	it('maps a too-thick substrate to substrate.heightMm with the usable range', () => {
 		try {
-			size({ frequencyHz: 10e9, substrate: { relativePermittivity: 30, heightMm: 7 } });
+			sizeDocument({ frequencyHz: 10e9, substrate: { relativePermittivity: 30, heightMm: 7 } });
 			expect.unreachable();
 		} catch (e) {
 			expect((e as InputError).first.path).toBe('substrate.heightMm');
@@ -159,14 +159,14 @@ describe('size', () => {
 
 	it('maps an unreachable inset target to targetImpedanceOhm', () => {
 		// A wide patch on thin, low-εr laminate has an edge resistance well under 150 Ω.
-		expect(() => size({ frequencyHz: 2.45e9, targetImpedanceOhm: 190, patchWidthMm: 120, substrate: { relativePermittivity: 2.2, heightMm: 1.6 } })).toThrow(/targetImpedanceOhm/);
+		expect(() => sizeDocument({ frequencyHz: 2.45e9, targetImpedanceOhm: 190, patchWidthMm: 120, substrate: { relativePermittivity: 2.2, heightMm: 1.6 } })).toThrow(/targetImpedanceOhm/);
 	});
 
 	it('feeds a nearly-square patch on its diagonal and a circular one on its radius', () => {
-		const ns = size({ frequencyHz: 2.45e9, shape: 'nearly-square', feed: 'probe', substrate: { relativePermittivity: 4.4, heightMm: 1.6 } });
+		const ns = sizeDocument({ frequencyHz: 2.45e9, shape: 'nearly-square', feed: 'probe', substrate: { relativePermittivity: 4.4, heightMm: 1.6 } });
 		if (ns.feed.kind !== 'probe' || ns.patch.kind !== 'nearly-square') throw new Error('unexpected kinds');
 		expect(ns.feed.offsetXMm / ns.feed.offsetYMm).toBeCloseTo(ns.patch.widthMm / ns.patch.lengthMm, 12);
-		const c = size({ frequencyHz: 2.45e9, shape: 'circular', feed: 'probe', substrate: { relativePermittivity: 4.4, heightMm: 1.6 } });
+		const c = sizeDocument({ frequencyHz: 2.45e9, shape: 'circular', feed: 'probe', substrate: { relativePermittivity: 4.4, heightMm: 1.6 } });
 		if (c.feed.kind !== 'probe') throw new Error('probe expected');
 		expect(c.feed.offsetXMm).toBe(0);
 		expect(c.feed.offsetYMm).toBeGreaterThan(0);

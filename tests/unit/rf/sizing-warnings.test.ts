@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { size } from '../../../src/lib/rf/size';
 import { RECTANGULAR_ACCURACY } from '../../../src/lib/rf/first-pass-accuracy';
 import { sizingWarnings } from '../../../src/lib/rf/sizing-warnings';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
-const codes = (raw: unknown) => size(raw).warnings.map((w) => w.code);
+const codes = (raw: unknown) => sizeDocument(raw).warnings.map((w) => w.code);
 const fr4 = { relativePermittivity: 4.4, heightMm: 1.6, lossTangent: 0.02 };
 const ptfe = { relativePermittivity: 2.2, heightMm: 1.575, lossTangent: 0.0009 };
 
@@ -23,7 +23,7 @@ describe('sizing warnings', () => {
 	});
 
 	it('flags glass-epoxy at 2.45 GHz and at 433 MHz, where the dielectric loses more than the patch radiates', () => {
-		const at245 = size({ frequencyHz: 2.45e9, substrate: fr4 });
+		const at245 = sizeDocument({ frequencyHz: 2.45e9, substrate: fr4 });
 		expect(at245.estimates.radiationEfficiency).toBeLessThan(0.6);
 		expect(at245.warnings.map((w) => w.code)).toEqual(expect.arrayContaining(['lossy-laminate', 'low-efficiency']));
 		expect(codes({ frequencyHz: 433e6, feed: 'quarter-wave', substrate: fr4 })).toEqual(expect.arrayContaining(['lossy-laminate', 'low-efficiency']));
@@ -43,7 +43,7 @@ describe('sizing warnings', () => {
 
 	it('flags a ground under λ0/2 even when the margin exceeds h (3h at 433–915 MHz)', () => {
 		for (const f of [433e6, 915e6]) {
-			const d = size({ frequencyHz: f, feed: 'probe', probe: { drillDiameterMm: 1.4, clearanceDiameterMm: 4.1 }, substrate: { ...ptfe, heightMm: 1.524 } });
+			const d = sizeDocument({ frequencyHz: f, feed: 'probe', probe: { drillDiameterMm: 1.4, clearanceDiameterMm: 4.1 }, substrate: { ...ptfe, heightMm: 1.524 } });
 			expect(d.ground.marginMm).toBeGreaterThan(1.524);
 			expect(d.warnings.map((w) => w.code)).toContain('small-ground');
 		}
@@ -63,7 +63,7 @@ describe('sizing warnings', () => {
 	});
 
 	it('names the assumed tanδ when the document gives none', () => {
-		const d = size({ frequencyHz: 2.45e9, substrate: { relativePermittivity: 4.3, heightMm: 1.6 } });
+		const d = sizeDocument({ frequencyHz: 2.45e9, substrate: { relativePermittivity: 4.3, heightMm: 1.6 } });
 		const w = d.warnings.find((x) => x.code === 'assumed-loss-tangent');
 		expect(w?.message).toContain('0.02');
 		expect(d.input.substrate.lossTangent).toBe(0.02);

@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { toleranceStudy } from '../../../src/lib/rf/tolerance-study';
-import { InputError } from '../../../src/lib/schemas';
+import { toleranceStudy as studyOf, type ToleranceOptions } from '../../../src/lib/rf/tolerance-study';
+import { InputError, parseDesignInput } from '../../../src/lib/schemas';
+
+/** The study of a document as a user writes it: parsed at the edge, then studied. */
+const toleranceStudy = (doc: unknown, options?: ToleranceOptions) => studyOf(parseDesignInput(doc), options);
 
 const fr4 = { frequencyHz: 2.45e9, substrate: { relativePermittivity: 4.4, heightMm: 1.6, relativePermittivityTolerance: 0.2, heightToleranceMm: 0.08 } };
 

@@ -49,8 +49,8 @@ describe('design input: stacks, layered feeds, arrays', () => {
 		expect(issue.message).toMatch(message);
 	});
 
-	it('keeps a single-layer document exactly as before: no new keys appear', () => {
+	it('keeps a single-layer document as before: no new keys appear, and an inset feed carries only its own option object', () => {
 		const d = parseDesignInput(layeredDocument({ feed: 'inset' }));
-		expect(Object.keys(d).sort()).toEqual(['feed', 'feedLineImpedanceOhm', 'frequencyHz', 'handedness', 'inset', 'name', 'probe', 'schemaVersion', 'shape', 'solderMask', 'substrate', 'targetImpedanceOhm']);
+		expect(Object.keys(d).sort()).toEqual(['feed', 'feedLineImpedanceOhm', 'frequencyHz', 'handedness', 'inset', 'name', 'schemaVersion', 'shape', 'solderMask', 'substrate', 'targetImpedanceOhm']);
 	});
 });

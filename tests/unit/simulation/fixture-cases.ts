@@ -2,9 +2,9 @@
 import { readFileSync, readdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { buildArtwork } from '../../../src/lib/artwork';
-import { size } from '../../../src/lib/rf';
 import { buildFieldModel, type FieldModel } from '../../../src/lib/simulation';
 import type { FieldCheckMode } from '../../../src/lib/schemas/field-check';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 export const FIXTURES = resolve(__dirname, '../../fixtures/simulation');
 
@@ -18,7 +18,7 @@ export function fixtureInput(name: string): unknown {
 
 /** The model the runner builds for a case (reference impedance as the runner picks it). */
 export function fixtureModel(name: string, mode: FieldCheckMode = 'standard', refinement = 1): FieldModel {
-	const sized = size(fixtureInput(name));
+	const sized = sizeDocument(fixtureInput(name));
 	const zRef = sized.feed.kind === 'probe' ? sized.input.targetImpedanceOhm : sized.input.feedLineImpedanceOhm;
 	return buildFieldModel(buildArtwork(sized), zRef, { mode, refinement });
 }

@@ -1,9 +1,9 @@
 // Mesh rules of the Field check model: thirds rule at metal edges, λ/20 in the dielectric, ≥ 4 cells per layer, grading ≤ 1.4.
 import { describe, expect, it } from 'vitest';
 import { buildArtwork } from '../../../src/lib/artwork';
-import { size } from '../../../src/lib/rf';
 import { CELLS_PER_WAVELENGTH, EDGE_CELL_FRACTION, MAX_GRADING_RATIO, MIN_CELLS_PER_LAYER, buildAxis, largestGradingRatio, meshStatistics, thirdsLines } from '../../../src/lib/simulation';
 import { fixtureCases, fixtureInput, fixtureModel } from './fixture-cases';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 
 const C_MM_PER_S = 299_792_458_000;
 const hasLine = (lines: readonly number[], at: number) => lines.some((l) => Math.abs(l - at) < 1e-6);
@@ -23,7 +23,7 @@ describe('Field check mesh', () => {
 	it.each(fixtureCases())('%s: a mesh line at each patch edge’s one-third/two-thirds points', (name) => {
 		const model = fixtureModel(name);
 		const input = fixtureInput(name) as Case;
-		const sized = size(input);
+		const sized = sizeDocument(input);
 		const artwork = buildArtwork(sized);
 		const patch = artwork.layers[0].shapes.find((s) => s.role === 'patch')!;
 		const d = ((C_MM_PER_S / (input.frequencyHz * 1.3 * Math.sqrt(input.substrate.relativePermittivity))) / CELLS_PER_WAVELENGTH.standard) * EDGE_CELL_FRACTION;
@@ -42,7 +42,7 @@ describe('Field check mesh', () => {
 	it.each(fixtureCases().flatMap((name) => [[name, 'quick', 1], [name, 'standard', 1], [name, 'accurate', 1.5]] as const))('%s %s ×%s: no cell over the board larger than λ/N in the dielectric', (name, mode, refinement) => {
 		const model = fixtureModel(name, mode, refinement);
 		const input = fixtureInput(name) as Case;
-		const sized = size(input);
+		const sized = sizeDocument(input);
 		const board = [sized.ground.widthMm, sized.ground.lengthMm];
 		// λ in the dielectric at the top of the check band (target + 30 %), divided by the mode's cells per wavelength
 		const limitMm = C_MM_PER_S / (input.frequencyHz * 1.3 * Math.sqrt(input.substrate.relativePermittivity)) / (CELLS_PER_WAVELENGTH[mode] * refinement);

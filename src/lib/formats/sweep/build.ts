@@ -2,7 +2,7 @@
 import { buildArtwork, type Artwork, type StackLayer } from '../../artwork';
 import { GeometryError } from '../../geometry';
 import { size, type SizedDesign } from '../../rf';
-import { InputError, parseDesignInput, type DesignInput, type DesignInputDocument } from '../../schemas';
+import { InputError, parseDesignInput, sharedFieldsOf, type DesignInput, type DesignInputDocument } from '../../schemas';
 import { replaceControlCharacters } from '../../schemas/plain-text';
 import { SOFTWARE_NAME, type ExportMeta } from '../export-meta';
 import { SWEEP_FORMAT, SWEEP_FORMAT_VERSION, SWEEP_SCHEMA_PATH, type SweepDocument, type SweepPoint, type SweepProbeEntry } from './document';
@@ -18,16 +18,24 @@ const CIRCULARLY_POLARISED = ['truncated-corner', 'nearly-square'];
  * line. What is left sizes to the same design.
  */
 export function applicableInput(input: DesignInput): DesignInputDocument {
-	const { handedness, probe, inset, slot, proximity, feedLineImpedanceOhm, ...rest } = input;
-	return {
-		...rest,
-		...(input.feed !== 'probe' ? { feedLineImpedanceOhm } : {}),
-		...(input.feed === 'inset' ? { inset } : {}),
-		...(input.feed === 'probe' ? { probe } : {}),
-		...(CIRCULARLY_POLARISED.includes(input.shape) ? { handedness } : {}),
-		...(slot && input.feed === 'aperture-coupled' ? { slot } : {}),
-		...(proximity && input.feed === 'proximity-coupled' ? { proximity } : {})
-	};
+	const { handedness, feedLineImpedanceOhm, ...rest } = sharedFieldsOf(input);
+	const cp = CIRCULARLY_POLARISED.includes(input.shape) ? { handedness } : {};
+	// the key order is the sweep file's: shared fields, the line impedance, the feed's options, handedness, slot/proximity
+	switch (input.feed) {
+		case 'inset':
+			return { ...rest, feedLineImpedanceOhm, inset: input.inset, ...cp };
+		case 'probe':
+			return { ...rest, probe: input.probe, ...cp };
+		case 'edge':
+		case 'quarter-wave':
+			return { ...rest, feedLineImpedanceOhm, ...cp };
+		case 'aperture-coupled':
+			return { ...rest, feedLineImpedanceOhm, ...cp, ...(input.slot ? { slot: input.slot } : {}) };
+		case 'proximity-coupled':
+			return { ...rest, feedLineImpedanceOhm, ...cp, ...(input.proximity ? { proximity: input.proximity } : {}) };
+		default:
+			return input satisfies never;
+	}
 }
 
 /**
@@ -125,7 +133,7 @@ function sweepPoint(base: unknown, parameters: Record<string, number>, index: nu
 	let doc: unknown = base;
 	for (const [field, value] of Object.entries(parameters)) doc = withField(doc, field, value);
 	try {
-		const sized = size(doc);
+		const sized = size(parseDesignInput(doc));
 		// a point that is the known design itself (the one-point sweep of an export) reuses its artwork
 		const artwork = known && JSON.stringify(sized) === JSON.stringify(known.sized) ? known.artwork : buildArtwork(sized);
 		const { input: _input, warnings, ...derived } = sized;

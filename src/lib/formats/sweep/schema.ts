@@ -1,7 +1,7 @@
 // The sweep document's JSON Schemas (draft 2020-12): version 2 generated from the zod schemas, version 1 as published
 // (frozen, so the documents written before version 2 keep validating). Plain objects for ajv and the routes.
 import { z } from 'zod';
-import { designInputSchema } from '../../schemas';
+import { designInputOutline } from '../../schemas';
 import { sweepPointSchema } from '../../schemas/sweep-point';
 import { SWEEP_FORMAT, SWEEP_FORMAT_VERSION, SWEEP_SCHEMA_PATH } from './document';
 import { MAX_SWEEP_POINTS, sweepPlanSchema } from './plan';
@@ -47,7 +47,7 @@ export const sweepJsonSchema = {
 	},
 	$defs: {
 		// the input side: a field left out (one that does not apply to the design) is allowed
-		designInput: jsonSchemaOf(designInputSchema, 'input'),
+		designInput: jsonSchemaOf(designInputOutline, 'input'),
 		plan: jsonSchemaOf(sweepPlanSchema),
 		// generated from the one zod schema of a sweep point (src/lib/schemas/sweep-point.ts), artwork and sized design included
 		point: jsonSchemaOf(sweepPointSchema)

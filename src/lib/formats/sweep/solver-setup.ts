@@ -5,6 +5,7 @@ import { LENGTH_EPSILON_MM, contourBounds, type Bounds } from '../../geometry';
 import type { SizedDesign } from '../../rf';
 import type { z } from 'zod';
 import type { solverPortSchema, solverSetupSchema } from '../../schemas/sweep-point';
+import { probeOptionsSchema } from '../../schemas';
 
 export type SolverPort = z.output<typeof solverPortSchema>;
 export type SolverSetup = z.output<typeof solverSetupSchema>;
@@ -68,6 +69,8 @@ function edgePorts(artwork: Artwork, sized: SizedDesign): SolverPort[] {
 function probePorts(artwork: Artwork, sized: SizedDesign): SolverPort[] {
 	const coppers = copperLayers(artwork);
 	const feed = sized.feed as { padDiameterMm?: number; clearanceDiameterMm?: number };
+	// a probe-fed input carries its probe options; any other falls back to their defaults, as before the input was a union
+	const options = sized.input.feed === 'probe' ? sized.input.probe : probeOptionsSchema.parse({});
 	return artwork.drills
 		.filter((d) => d.role === 'probe')
 		.map((drill, i) => {
@@ -85,8 +88,8 @@ function probePorts(artwork: Artwork, sized: SizedDesign): SolverPort[] {
 				modelStated: stated !== undefined,
 				pinDiameterMm: drill.diameterMm,
 				platingThicknessUm: stated?.platingThicknessUm ?? null,
-				padDiameterMm: feed.padDiameterMm ?? sized.input.probe.padDiameterMm ?? drill.diameterMm,
-				antiPadDiameterMm: feed.clearanceDiameterMm ?? sized.input.probe.clearanceDiameterMm
+				padDiameterMm: feed.padDiameterMm ?? options.padDiameterMm ?? drill.diameterMm,
+				antiPadDiameterMm: feed.clearanceDiameterMm ?? options.clearanceDiameterMm
 			};
 		});
 }

@@ -1,6 +1,6 @@
 // Refusals of a form action: bad input → 400 with issues per field; an expected refusal → its status and message.
-import { fail } from '@sveltejs/kit';
 import { InputError } from '$lib/schemas/input-error';
+import { formFail, type FieldError, type FormFailure } from '../http/form-failure';
 import { AccountError, type AccountErrorCode } from './account-error';
 import { MailDeliveryError } from '../mail';
 
@@ -17,25 +17,20 @@ const statusOf: Record<AccountErrorCode, number> = {
 	'invitee-unconfirmed': 409
 };
 
-export interface FormProblem {
-	/** Which form on the page failed (several share one page). */
-	form: string;
-	message: string;
-	/** The refusal's code, when it was an expected one (pages offer a way out for some). */
-	code?: AccountErrorCode;
-	issues: Record<string, string>;
-	values: Record<string, string>;
-}
+/** An account form's failure: the one form-failure shape, with the refusal's code when it was an expected one (pages offer a way out for some). */
+export type FormProblem = FormFailure<Record<string, string>, { code?: AccountErrorCode }>;
 
-/** Turns an expected error into `fail(...)`; anything else is rethrown (→ handleError). */
-export function formFailure(err: unknown, form: string, values: Record<string, string> = {}) {
-	const problem = (status: number, message: string, issues: Record<string, string> = {}, code?: AccountErrorCode) => fail(status, { form, message, issues, values, code } as FormProblem);
+/** Turns an expected error into `fail(...)` of the one shape; anything else is rethrown (→ handleError). */
+export function formFailure(err: unknown, action: string, values: Record<string, string> = {}) {
+	const problem = (status: number, message: string, fieldErrors: FieldError[] = [], code?: AccountErrorCode) =>
+		formFail<Record<string, string>, { code?: AccountErrorCode }>(status, { action, message, fieldErrors, values, detail: code ? { code } : {} });
 	if (err instanceof InputError) {
-		const issues: Record<string, string> = {};
-		for (const i of err.issues) issues[i.path || 'form'] ??= i.message;
-		return problem(400, 'Please correct the marked fields.', issues);
+		// the first issue of each field
+		const fieldErrors: FieldError[] = [];
+		for (const i of err.issues) if (!fieldErrors.some((e) => e.field === (i.path || 'form'))) fieldErrors.push({ field: i.path || 'form', message: i.message });
+		return problem(400, 'Please correct the marked fields.', fieldErrors);
 	}
-	if (err instanceof AccountError) return problem(statusOf[err.code], err.message, {}, err.code);
+	if (err instanceof AccountError) return problem(statusOf[err.code], err.message, [], err.code);
 	if (err instanceof MailDeliveryError) {
 		console.error(err.message);
 		return problem(503, 'The e-mail could not be sent just now; please try again in a minute.');

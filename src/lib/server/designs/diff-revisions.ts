@@ -1,5 +1,5 @@
 // Two revisions side by side: every input field and every derived dimension, with what changed. Pure.
-import { designFormFields, fieldApplies, switchesOfInput, valueAtPath } from '$lib/design';
+import { designFormFields, fieldApplies, switchesOfInput, valueAtPath, withOtherFeedDefaults } from '$lib/design';
 import { derivedQuantities, formatPlain, formatValue } from '$lib/design';
 import type { SizedDesign } from '../../rf';
 import type { DesignInput } from '../../schemas';
@@ -36,8 +36,8 @@ export function diffRevisions(a: DiffSide, b: DiffSide): RevisionDiff {
 	const applies = (f: (typeof designFormFields)[number]) =>
 		fieldApplies(f, a.input.shape, a.input.feed, switchesOfInput(a.input)) || fieldApplies(f, b.input.shape, b.input.feed, switchesOfInput(b.input));
 	const inputs = designFormFields.filter(applies).map((f) => {
-		const va = valueAtPath(a.input, f.path);
-		const vb = valueAtPath(b.input, f.path);
+		const va = valueAtPath(withOtherFeedDefaults(a.input), f.path);
+		const vb = valueAtPath(withOtherFeedDefaults(b.input), f.path);
 		const show = (v: unknown) => (f.presence ? (v ? 'yes' : 'no') : v === undefined || v === null ? '—' : f.codec ? f.codec.toForm(v) : typeof v === 'number' ? formatPlain(f.scale ? f.scale.toForm(v) : v) : typeof v === 'boolean' ? (v ? 'yes' : 'no') : String(v));
 		return row(f.name, f.group, f.label, f.unit, va, vb, show(va), show(vb));
 	});

@@ -1,9 +1,10 @@
 // The editor's server side: it starts from exactly the revision named by ?from= (never a guess: without it, the design's
 // history to pick from); saving the form makes a new revision of it and goes there.
-import { error, fail, redirect } from '@sveltejs/kit';
+import { error, redirect } from '@sveltejs/kit';
 import { displayUnitsOfFormData, documentFromFormValues, fieldIssues, formValuesFromFormData, formValuesInStoredUnits, issuesInUnits } from '../../design';
 import { copperLayerCountOf, InputError } from '../../schemas';
 import { getDb } from '../db';
+import { formFail } from '../http/form-failure';
 import { listFabProfiles, matchingFabProfileId, resolveFabProfileChoice, revisionFabProfile } from '../fab-profiles';
 import { requireDesign, type AccessEvent } from './design-access';
 import { findDesignWithRevisions } from './find-designs';
@@ -43,7 +44,8 @@ export async function saveEditorForm(event: AccessEvent & { request: Request }, 
 	} catch (err) {
 		if (err instanceof InputError) {
 			const unreadable = new Set(stored.issues.map((i) => i.field));
-			return fail(400, { values, note, issues: [...stored.issues, ...issuesInUnits(fieldIssues(err.issues), units).filter((i) => !unreadable.has(i.field))] });
+			const fieldErrors = [...stored.issues, ...issuesInUnits(fieldIssues(err.issues), units).filter((i) => !unreadable.has(i.field))];
+			return formFail(400, { action: 'save', message: 'Please correct the marked fields.', fieldErrors, values, detail: { note } });
 		}
 		throw err;
 	}

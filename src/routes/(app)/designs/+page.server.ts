@@ -1,5 +1,6 @@
 // The current team's designs, and the "new design" form (editors and owners).
-import { fail, redirect } from '@sveltejs/kit';
+import { redirect } from '@sveltejs/kit';
+import { fieldErrorsOf, formFail } from '$lib/server/http/form-failure';
 import { authorize, can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
 import { listDesigns, listLaminates, startDesign } from '$lib/server/designs';
@@ -27,7 +28,7 @@ export const actions: Actions = {
 			const created = await startDesign(getDb(), { teamId: String(data.get('teamId')), userId: user.id, raw: values });
 			redirect(303, `/designs/${created.design.id}/r/${created.revisionLabel}`);
 		} catch (err) {
-			if (err instanceof InputError) return fail(400, { values, issues: err.issues.map((i) => ({ path: i.path, message: i.message })) });
+			if (err instanceof InputError) return formFail(400, { action: 'create', message: 'Please correct the marked fields.', fieldErrors: fieldErrorsOf(err.issues), values });
 			throw err;
 		}
 	}

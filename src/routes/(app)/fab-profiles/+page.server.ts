@@ -1,5 +1,5 @@
 // The current team's fab profiles: the built-in one and the team's own; editors add entries.
-import { fail } from '@sveltejs/kit';
+import { formFail } from '$lib/server/http/form-failure';
 import { authorize, can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
 import { findDisplayUnits, requireUser } from '$lib/server/accounts';
@@ -57,7 +57,7 @@ export const actions: Actions = {
 					const parsed = lengths[path];
 					return parsed && !parsed.ok ? `${parsed.message}; ${schemaMessage.replace(/^must be a finite number; /, '')}` : schemaMessage;
 				};
-				return fail(400, { values, issues: err.issues.map((i) => ({ path: i.path, message: message(i.path, i.message) })) });
+				return formFail(400, { action: 'add', message: 'Please correct the marked fields.', fieldErrors: err.issues.map((i) => ({ field: i.path, message: message(i.path, i.message) })), values });
 			}
 			throw err;
 		}

@@ -1,5 +1,5 @@
 // The current team's laminate library: built-in presets and the team's own; editors add entries.
-import { fail } from '@sveltejs/kit';
+import { fieldErrorsOf, formFail } from '$lib/server/http/form-failure';
 import { authorize, can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
 import { addLaminate, listLaminates } from '$lib/server/designs';
@@ -31,7 +31,7 @@ export const actions: Actions = {
 			await addLaminate(getDb(), { teamId, userId: user.id, raw });
 			return { added: values.name };
 		} catch (err) {
-			if (err instanceof InputError) return fail(400, { values, issues: err.issues.map((i) => ({ path: i.path.replace(/^properties\./, ''), message: i.message })) });
+			if (err instanceof InputError) return formFail(400, { action: 'add', message: 'Please correct the marked fields.', fieldErrors: fieldErrorsOf(err.issues, (path) => path.replace(/^properties\./, '')), values });
 			throw err;
 		}
 	}

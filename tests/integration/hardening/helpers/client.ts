@@ -97,10 +97,12 @@ export async function action(
 	return { ...a, type, actionStatus, data, message };
 }
 
-/** Field names a failed action reported (issues keyed by field, or a nested form's message). */
+/** Field names a failed action reported (its fieldErrors, or issues keyed by field). */
 export function failureFields(data: any): string[] {
 	if (!data || typeof data !== 'object') return [];
-	const issues = data.issues ?? data.errors ?? data.fieldErrors;
+	const issues = data.fieldErrors ?? data.issues ?? data.errors;
+	// the one form-failure shape lists { field, message }; keyed objects are read by their keys
+	if (Array.isArray(issues)) return issues.map((i) => String(i?.field ?? i?.path ?? '')).filter((f) => f !== '');
 	if (issues && typeof issues === 'object') return Object.keys(issues);
 	return [];
 }

@@ -1,11 +1,12 @@
 // The array-pattern file: the gain budget in new revisions, and the very bytes of old ones (stored before the budget) kept.
 import { describe, expect, it } from 'vitest';
 import { buildArrayPatternDocument, createExportMeta, serializeArrayPattern } from '../../../../src/lib/formats';
-import { size, type SizedDesign } from '../../../../src/lib/rf';
+import { type SizedDesign } from '../../../../src/lib/rf';
 import { layeredCases } from '../../../fixtures/designs/layered-cases';
+import { sizeDocument } from '../../../fixtures/designs/size-document';
 
 const meta = createExportMeta({ designName: 'Layered demo', revisionLabel: 'A', revisionDate: '2026-12-02' });
-const sized = size(layeredCases.find((c) => c.name === '4×4 inset array')!.doc);
+const sized = sizeDocument(layeredCases.find((c) => c.name === '4×4 inset array')!.doc);
 
 describe('array-pattern file', () => {
 	it('states the gain budget: gainDbi is element gain + 10·log10 N − feed loss − mismatch loss', () => {

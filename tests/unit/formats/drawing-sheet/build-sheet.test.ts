@@ -6,10 +6,10 @@ import { boxesOverlap, buildArtwork, type Artwork } from '../../../../src/lib/ar
 import { GeometryError } from '../../../../src/lib/geometry';
 import { createExportMeta } from '../../../../src/lib/formats/export-meta';
 import { buildDrawingSheet, drawingResolutionMm, FIRST_PASS_CAUTION, overlappingLabels, sheetLabels, type DrawingSheet } from '../../../../src/lib/formats/drawing-sheet';
-import { size } from '../../../../src/lib/rf';
 import { InputError, STANDARD_QUICK_TURN_PROFILE, allowedFeeds, patchShapes, type DesignInputDocument } from '../../../../src/lib/schemas';
 import { allShapeFeedCases, sizedCase } from '../../../fixtures/designs/design-cases';
 import { layeredCases, layeredDocument, threeCopperStack } from '../../../fixtures/designs/layered-cases';
+import { sizeDocument } from '../../../fixtures/designs/size-document';
 
 const meta = createExportMeta({ designName: 'Sunroof GNSS', revisionLabel: 'B', revisionDate: '2026-11-20' });
 
@@ -30,7 +30,7 @@ function expectReadable(sheet: DrawingSheet): void {
 /** Sizes and builds; null when the random document is refused (InputError) or breaks a geometry rule (GeometryError). */
 function tryBuild(doc: DesignInputDocument): Artwork | null {
 	try {
-		return buildArtwork(size(doc));
+		return buildArtwork(sizeDocument(doc));
 	} catch (e) {
 		if (e instanceof InputError || e instanceof GeometryError) return null;
 		throw e;
@@ -43,7 +43,7 @@ describe('buildDrawingSheet', () => {
 	});
 
 	it.each(layeredCases)('lays out the $name drawing with no overlapping label, all on the sheet', ({ doc }) => {
-		expectReadable(buildDrawingSheet(buildArtwork(size(doc)), meta));
+		expectReadable(buildDrawingSheet(buildArtwork(sizeDocument(doc)), meta));
 	});
 
 	it('holds for random designs of every shape and feed, single and in arrays (fast-check)', () => {
@@ -113,7 +113,7 @@ describe('buildDrawingSheet', () => {
 	});
 
 	it('lists each dielectric of a three-copper stack on the laminate line, the bonding film marked', () => {
-		const artwork = buildArtwork(size(layeredCases.find((c) => c.name === 'aperture-coupled patch')!.doc));
+		const artwork = buildArtwork(sizeDocument(layeredCases.find((c) => c.name === 'aperture-coupled patch')!.doc));
 		const laminate = buildDrawingSheet(artwork, meta).titleBlock.labels.find((l) => l.text.startsWith('Laminate'))!.text;
 		expect(laminate).toBe('Laminate: εr 2.2, tanδ 0.0009, h 1.52 mm + εr 3, tanδ 0.003, h 0.10 mm (bond) + εr 3.55, tanδ 0.0027, h 0.51 mm, copper 35 µm');
 	});

@@ -4,10 +4,11 @@ import { describe, expect, it } from 'vitest';
 import { buildArtwork } from '../../../../src/lib/artwork';
 import { createExportMeta } from '../../../../src/lib/formats/export-meta';
 import { buildFabNotes, copperWeightOf, fillTemplate, scientific, type FabNotesExtras } from '../../../../src/lib/formats/fab-notes';
-import { proposeRetune, size, type SizedDesign } from '../../../../src/lib/rf';
+import { proposeRetune, type SizedDesign } from '../../../../src/lib/rf';
 import { parseFabProfile, STANDARD_MULTILAYER_PROFILE, STANDARD_QUICK_TURN_PROFILE, type FabProfile } from '../../../../src/lib/schemas';
 import { designDocument, sizedCase } from '../../../fixtures/designs/design-cases';
 import { layeredDocument, threeCopperStack } from '../../../fixtures/designs/layered-cases';
+import { sizeDocument } from '../../../fixtures/designs/size-document';
 
 const meta = createExportMeta({ designName: 'Sunroof GNSS', revisionLabel: 'B', revisionDate: '2026-11-20' });
 
@@ -37,10 +38,10 @@ const cases: { name: string; sized: SizedDesign; copperLayers: string }[] = [
 	{ name: 'a probe-fed patch', sized: sizedCase('rectangular', 'probe', { solderMask: true }), copperLayers: '2 copper layers (top and bottom sides)' },
 	{
 		name: 'an aperture-coupled patch (three coppers)',
-		sized: size(layeredDocument({ feed: 'aperture-coupled', stack: [...threeCopperStack] })),
+		sized: sizeDocument(layeredDocument({ feed: 'aperture-coupled', stack: [...threeCopperStack] })),
 		copperLayers: '3 copper layers (top side, 1 inner layer, bottom side)'
 	},
-	{ name: 'a retuned revision', sized: size(retune.input), copperLayers: '2 copper layers (top and bottom sides)' }
+	{ name: 'a retuned revision', sized: sizeDocument(retune.input), copperLayers: '2 copper layers (top and bottom sides)' }
 ];
 
 const fileNames = ['sunroof-gnss-B.copper-top.gbr', 'sunroof-gnss-B.fab-notes.txt', 'sunroof-gnss-B.manifest.json'];
@@ -108,7 +109,7 @@ describe('fab notes', () => {
 	});
 
 	it('names the laminate that is bought when the design records it, with its stated values', () => {
-		const sized = size({ ...designDocument('rectangular', 'inset'), laminate: { name: 'Demo hydrocarbon 3.55', relativePermittivity: 3.55, relativePermittivityTolerance: 0.05, lossTangent: 0.0027 } });
+		const sized = sizeDocument({ ...designDocument('rectangular', 'inset'), laminate: { name: 'Demo hydrocarbon 3.55', relativePermittivity: 3.55, relativePermittivityTolerance: 0.05, lossTangent: 0.0027 } });
 		const notes = notesFor(sized, STANDARD_QUICK_TURN_PROFILE);
 		expect(notes).toContain('   [ ] Laminate: "Demo hydrocarbon 3.55", 1.524 mm core');
 		expect(notes).toContain('Order "Demo hydrocarbon 3.55", 1.524 mm core: εr 3.55 ± 0.05, tanδ 0.0027, as its datasheet states.');
@@ -116,7 +117,7 @@ describe('fab notes', () => {
 	});
 
 	it('a retuned revision orders the laminate that was bought; its fitted εr appears only as a model value', () => {
-		const sized = size(retune.input);
+		const sized = sizeDocument(retune.input);
 		const apparent = retune.apparentRelativePermittivity;
 		expect(apparent).not.toBe(3.55);
 		const notes = notesFor(sized, STANDARD_QUICK_TURN_PROFILE);
@@ -135,10 +136,10 @@ describe('fab notes', () => {
 
 	it('asks the board house to state its bonding film when cores are listed without one', () => {
 		const twoCores = [threeCopperStack[0], threeCopperStack[1], threeCopperStack[3], threeCopperStack[4], threeCopperStack[5]];
-		const sized = size(layeredDocument({ feed: 'aperture-coupled', stack: [...twoCores] }));
+		const sized = sizeDocument(layeredDocument({ feed: 'aperture-coupled', stack: [...twoCores] }));
 		const notes = notesFor(sized, houseProfile);
 		expect(notes).toContain('The stack lists no bonding film between its 2 cores');
-		expect(notesFor(size(layeredDocument({ feed: 'aperture-coupled', stack: [...threeCopperStack] })), houseProfile)).not.toContain('lists no bonding film');
+		expect(notesFor(sizeDocument(layeredDocument({ feed: 'aperture-coupled', stack: [...threeCopperStack] })), houseProfile)).not.toContain('lists no bonding film');
 	});
 
 	it('lists the drills with the profile\'s hole tolerances, and says so when there are none', () => {

@@ -4,15 +4,15 @@ import DxfParser from 'dxf-parser';
 import { describe, expect, it } from 'vitest';
 import { buildArtwork } from '../../../../src/lib/artwork';
 import { buildDxfCommands, buildSweepDocument, createExportMeta, dxfLayerName, serializeSweep, sweepJsonSchema, toDxf, toGerber, bundleFormatIds } from '../../../../src/lib/formats';
-import { size } from '../../../../src/lib/rf';
 import { layeredCases } from '../../../fixtures/designs/layered-cases';
 import { readBackGerber } from '../gerber/read-back';
 import { prepareSized, writeFiles } from '../../../../src/lib/design';
+import { sizeDocument } from '../../../fixtures/designs/size-document';
 
 const meta = createExportMeta({ designName: 'Layered demo', revisionLabel: 'A', revisionDate: '2026-12-02' });
 const ajv = new Ajv2020({ allErrors: true, strict: true, strictTypes: false, strictTuples: false });
 const validate = ajv.compile(sweepJsonSchema as object);
-const cases = layeredCases.map((c) => ({ ...c, sized: size(c.doc), artwork: buildArtwork(size(c.doc)) }));
+const cases = layeredCases.map((c) => ({ ...c, sized: sizeDocument(c.doc), artwork: buildArtwork(sizeDocument(c.doc)) }));
 
 describe('layered designs and arrays in every format', () => {
 	it.each(cases)('$name: every Gerber layer parses completely with @tracespace/parser and reads back its regions', ({ artwork }) => {
@@ -58,7 +58,7 @@ describe('layered designs and arrays in every format', () => {
 		for (const point of sweep.points) {
 			expect(point.status).toBe('sized');
 			const stack = point.stack as { kind: string; zMm: number; thicknessMm: number }[];
-			const resolved = size(doc).layerStack;
+			const resolved = sizeDocument(doc).layerStack;
 			expect(stack.length).toBe(resolved ? resolved.length : 3);
 			// listed bottom up: z rises from 0 along the list with no gap or overlap (issue 10 "Must show")
 			const up = stack;

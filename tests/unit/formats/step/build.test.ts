@@ -6,9 +6,9 @@ import { buildArtwork, type Artwork, type ArtworkShape } from '../../../../src/l
 import { contourBounds, createCircleContour, createPolygonContour, differenceRegions, flattenContour, mergeBounds, emptyBounds, regionArea, unionRegions, type Bounds, type Region } from '../../../../src/lib/geometry';
 import { createExportMeta, type ExportMeta } from '../../../../src/lib/formats/export-meta';
 import { buildStepBodies, toStep } from '../../../../src/lib/formats/step';
-import { size } from '../../../../src/lib/rf';
 import type { DesignInputDocument } from '../../../../src/lib/schemas';
 import { readStep, type ReadBody } from './read-step';
+import { sizeDocument } from '../../../fixtures/designs/size-document';
 
 const FIXTURES = join(__dirname, '../../../fixtures/step');
 /** Set FRINGEFIELD_WRITE_GOLDEN=1 to rewrite the expected files after an intended change (and say so in the commit). */
@@ -25,7 +25,7 @@ interface Case {
 function loadCase(name: string): Case {
 	const input = JSON.parse(readFileSync(join(FIXTURES, name, 'input.json'), 'utf8')) as { meta: { designName: string; revisionLabel: string; revisionDate: string }; design: DesignInputDocument };
 	const meta = createExportMeta(input.meta);
-	const artwork = buildArtwork(size(input.design));
+	const artwork = buildArtwork(sizeDocument(input.design));
 	const fileName = `${meta.designSlug}-${meta.revisionLabel}.board.step`;
 	return { name, artwork, meta, fileName, text: toStep(artwork, meta, fileName) };
 }
@@ -172,7 +172,7 @@ describe('STEP writer read back by Open CASCADE (occt-import-js 0.0.23)', () => 
 
 	it('models a solid probe pin as a cylinder filling the finished hole', async () => {
 		const design = JSON.parse(readFileSync(join(FIXTURES, 'probe-patch', 'input.json'), 'utf8')).design as DesignInputDocument;
-		const artwork = buildArtwork(size({ ...design, probe: { model: 'solid-pin' } }));
+		const artwork = buildArtwork(sizeDocument({ ...design, probe: { model: 'solid-pin' } }));
 		const meta = createExportMeta({ designName: 'Pin check', revisionLabel: 'A', revisionDate: '2026-11-20' });
 		const read = await readStep(toStep(artwork, meta, 'pin-check-A.board.step'));
 		const pin = read.bodies.find((b) => b.name.includes('pin'))!;

@@ -5,9 +5,9 @@ import { buildArtwork } from '../../../../src/lib/artwork';
 import { createExportMeta } from '../../../../src/lib/formats/export-meta';
 import { buildSvgTree, serializeSvgText } from '../../../../src/lib/formats/svg';
 import { serializeSvg, type SvgWindow } from './svgjs-reference';
-import { size } from '../../../../src/lib/rf';
 import { allShapeFeedCases, designDocument } from '../../../fixtures/designs/design-cases';
 import { layeredCases } from '../../../fixtures/designs/layered-cases';
+import { sizeDocument } from '../../../fixtures/designs/size-document';
 
 const window = createSVGWindow() as unknown as SvgWindow;
 const docs = [
@@ -19,7 +19,7 @@ const docs = [
 
 describe('serializeSvgText', () => {
 	it.each(docs)('writes the same bytes as svg.js for $name', ({ doc }) => {
-		const sized = size(doc);
+		const sized = sizeDocument(doc);
 		const meta = createExportMeta({ designName: sized.input.name, revisionLabel: 'C', revisionDate: '2026-12-02' });
 		const tree = buildSvgTree(buildArtwork(sized), meta);
 		expect(serializeSvgText(tree)).toBe(serializeSvg(tree, window));

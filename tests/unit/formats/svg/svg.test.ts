@@ -8,7 +8,7 @@ import { createExportMeta } from '../../../../src/lib/formats/export-meta';
 import { buildSvgTree, toSvg, type SvgElement } from '../../../../src/lib/formats/svg';
 import { allShapeFeedCases, sizedCase } from '../../../fixtures/designs/design-cases';
 import { layeredCases } from '../../../fixtures/designs/layered-cases';
-import { size } from '../../../../src/lib/rf';
+import { sizeDocument } from '../../../fixtures/designs/size-document';
 
 const meta = createExportMeta({ designName: 'Sunroof GNSS', revisionLabel: 'B', revisionDate: '2026-11-20' });
 const cases = allShapeFeedCases.map((c) => ({ ...c, artwork: buildArtwork(sizedCase(c.shape, c.feed, { solderMask: true })) }));
@@ -134,7 +134,7 @@ describe('SVG writer', () => {
 	});
 
 	it('keeps a top copper over buried ones opaque and draws what lies under it as dashed hidden edges', () => {
-		const a = buildArtwork(size(layeredCases.find((c) => c.name === 'aperture-coupled patch')!.doc));
+		const a = buildArtwork(sizeDocument(layeredCases.find((c) => c.name === 'aperture-coupled patch')!.doc));
 		const doc = parseXml(toSvg(a, meta));
 		expect(doc.querySelector('g#layer-copper-top')!.getAttribute('opacity')).toBe('1');
 		const hidden = doc.querySelector('g#hidden-edges')!;

@@ -3,17 +3,17 @@
 import { isHttpError } from '@sveltejs/kit';
 import { isMainThread } from 'node:worker_threads';
 import { describe, expect, it } from 'vitest';
-import { size } from '../../../../src/lib/rf';
 import { arrayBenchDocument } from '../../../../src/lib/design';
 import { STANDARD_QUICK_TURN_PROFILE } from '../../../../src/lib/schemas/fab-profile';
 import { checkRevisionArtwork } from '../../../../src/lib/server/exports/export-work';
 import { runBudgetedWork, runWork, WorkBudgetExceededError, workStartedCount } from '../../../../src/lib/server/work';
+import { sizeDocument } from '../../../fixtures/designs/size-document';
 
 const narrowProfile = { ...STANDARD_QUICK_TURN_PROFILE, name: 'Coarse test fab', minTraceWidthMm: 5 };
 
 describe('the work pool', () => {
 	it('checks a design on a worker thread with the same violations as in-process', async () => {
-		const sized = size(arrayBenchDocument(2));
+		const sized = sizeDocument(arrayBenchDocument(2));
 		const before = workStartedCount();
 		const result = await runWork({ type: 'gate', sized, profile: narrowProfile }, { what: 'test check' });
 		expect(workStartedCount()).toBe(before + 1);
@@ -26,17 +26,17 @@ describe('the work pool', () => {
 	}, 60_000);
 
 	it('stops work that overruns its budget and answers the next task', async () => {
-		const big = size(arrayBenchDocument(32));
+		const big = sizeDocument(arrayBenchDocument(32));
 		await expect(runWork({ type: 'gate', sized: big, profile: STANDARD_QUICK_TURN_PROFILE }, { what: 'The big check', budgetMs: 50 })).rejects.toThrow(WorkBudgetExceededError);
 		await expect(runWork({ type: 'gate', sized: big, profile: STANDARD_QUICK_TURN_PROFILE }, { what: 'The big check', budgetMs: 50 })).rejects.toThrow(
 			/The big check did not finish within the server's work budget of 50 ms \(FRINGEFIELD_WORK_BUDGET_MS\)/
 		);
-		const small = await runWork({ type: 'gate', sized: size(arrayBenchDocument(1)), profile: STANDARD_QUICK_TURN_PROFILE }, { what: 'after' });
+		const small = await runWork({ type: 'gate', sized: sizeDocument(arrayBenchDocument(1)), profile: STANDARD_QUICK_TURN_PROFILE }, { what: 'after' });
 		expect(small).toEqual({ type: 'gate', violations: [] });
 	}, 60_000);
 
 	it('turns an overrun into a 503 for the routes', async () => {
-		const big = size(arrayBenchDocument(32));
+		const big = sizeDocument(arrayBenchDocument(32));
 		const err = await runBudgetedWork({ type: 'gate', sized: big, profile: STANDARD_QUICK_TURN_PROFILE }, { what: 'The big check', budgetMs: 50 }).catch((e: unknown) => e);
 		expect(isHttpError(err) && err.status).toBe(503);
 		expect(isHttpError(err) && err.body.message).toMatch(/work budget of 50 ms \(FRINGEFIELD_WORK_BUDGET_MS\)/);

@@ -1,11 +1,11 @@
 // Homing's step rules: de-embedding the feed line, the secant, the cavity model's first feed step, the quarter-wave section.
 import { describe, expect, it } from 'vitest';
-import { size } from '../../../../src/lib/rf';
 import type { FieldCheckResult } from '../../../../src/lib/schemas/field-check';
 import { cosineModelStep, feedPointResistance, loadThroughLine, nextTransformerImpedance, secant, transformerStep } from '../../../../src/worker/fullwave/homing-steps';
+import { sizeDocument } from '../../../fixtures/designs/size-document';
 
-const inset = size({ frequencyHz: 2.45e9, feed: 'inset', substrate: { relativePermittivity: 4.3, heightMm: 1.6 } });
-const probe = size({ frequencyHz: 2.45e9, feed: 'probe', substrate: { relativePermittivity: 4.3, heightMm: 1.6 } });
+const inset = sizeDocument({ frequencyHz: 2.45e9, feed: 'inset', substrate: { relativePermittivity: 4.3, heightMm: 1.6 } });
+const probe = sizeDocument({ frequencyHz: 2.45e9, feed: 'probe', substrate: { relativePermittivity: 4.3, heightMm: 1.6 } });
 
 /** A result whose port sees `z` at the target (two samples around it are enough). */
 function resultSeeing(z: { re: number; im: number }): FieldCheckResult {
@@ -68,7 +68,7 @@ describe('Homing steps', () => {
 
 describe('Homing on the quarter-wave feed', () => {
 	const doc = { frequencyHz: 2.45e9, feed: 'quarter-wave', substrate: { relativePermittivity: 3.55, heightMm: 1.524, lossTangent: 0.0027 } } as const;
-	const qw = size(doc);
+	const qw = sizeDocument(doc);
 	const f = 2.45e9;
 	const bl = (line: { lengthMm: number; effectivePermittivity: number }) => (2 * Math.PI * f * Math.sqrt(line.effectivePermittivity) * line.lengthMm) / 299_792_458_000;
 	/** The port's Zin of a design whose patch edge presents zl at the target: through the λg/4 section, then the feed line. */
@@ -79,7 +79,7 @@ describe('Homing on the quarter-wave feed', () => {
 		return alongLine(atJoin, 50, Math.tan(bl(line)));
 	};
 	const s11Db = (z: { re: number; im: number }) => 20 * Math.log10(Math.hypot(z.re - 50, z.im) / Math.hypot(z.re + 50, z.im));
-	const withSection = (zt: number) => size({ ...doc, overrides: { transformerImpedanceOhm: zt } });
+	const withSection = (zt: number) => sizeDocument({ ...doc, overrides: { transformerImpedanceOhm: zt } });
 
 	it('sizes the section the override names, keeps it λg/4 long, and shows the formula’s √(R_edge·Z0) beside it', () => {
 		if (qw.feed.kind !== 'quarter-wave') throw new Error('quarter-wave case');
@@ -92,7 +92,7 @@ describe('Homing on the quarter-wave feed', () => {
 	});
 
 	it('refuses the override on a feed without a quarter-wave section, and out of its 10–300 Ω range', () => {
-		expect(() => size({ ...doc, feed: 'inset', overrides: { transformerImpedanceOhm: 90 } })).toThrow(/quarter-wave/);
+		expect(() => sizeDocument({ ...doc, feed: 'inset', overrides: { transformerImpedanceOhm: 90 } })).toThrow(/quarter-wave/);
 		expect(() => withSection(5)).toThrow();
 		expect(() => transformerStep(inset, resultSeeing({ re: 50, im: 0 }))).toThrow(RangeError);
 	});

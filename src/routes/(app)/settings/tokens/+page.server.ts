@@ -1,5 +1,6 @@
 // Personal API tokens: made for the current team, shown once, listed by name and team, revoked by their owner.
-import { error, fail } from '@sveltejs/kit';
+import { error } from '@sveltejs/kit';
+import { formFail } from '$lib/server/http/form-failure';
 import { authorize, can, canAsAccount, CONFIRM_EMAIL_FIRST } from '$lib/server/access';
 import { roleInTeam } from '$lib/server/access/team-role';
 import { createApiToken, findOwnApiTokenTeam, formFailure, formFields, listApiTokens, requireSessionUser, revokeApiToken, type FormProblem } from '$lib/server/accounts';
@@ -17,9 +18,9 @@ export const actions: Actions = {
 	create: async ({ request, locals, url, cookies }) => {
 		const user = requireSessionUser(locals, url);
 		const values = await formFields(request);
-		if (!canAsAccount(user, 'token.create')) return fail(403, { form: 'create', message: CONFIRM_EMAIL_FIRST['token.create'], code: 'email-unconfirmed', issues: {}, values } as FormProblem);
+		if (!canAsAccount(user, 'token.create')) return formFail(403, { action: 'create', message: CONFIRM_EMAIL_FIRST['token.create'], values, detail: { code: 'email-unconfirmed' } } satisfies FormProblem);
 		const { current } = await currentTeam(locals.identity, cookies);
-		if (!current) return fail(400, { form: 'create', message: 'Make or join a team first: a token reaches exactly one team.', issues: {}, values } as FormProblem);
+		if (!current) return formFail(400, { action: 'create', message: 'Make or join a team first: a token reaches exactly one team.', values } satisfies FormProblem);
 		authorize(await roleInTeam(locals.identity, current.id), 'token.manage-own', 'Team not found');
 		try {
 			const token = await createApiToken(user.id, current.id, { name: values.name });

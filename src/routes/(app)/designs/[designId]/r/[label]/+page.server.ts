@@ -1,7 +1,8 @@
 // One revision: its stored input and results (the page draws the preview and the DXF from them), the fab profile it is
 // checked against (its recorded one, or ?profile=<id> of the team's others, without saving anything), and its Field
 // check panel: start a check or Homing, cancel one, make a revision from a Homing study's tuned input.
-import { error, fail, isHttpError, redirect } from '@sveltejs/kit';
+import { error, isHttpError, redirect } from '@sveltejs/kit';
+import { formFail } from '$lib/server/http/form-failure';
 import { getDb } from '$lib/server/db';
 import { findDesignWithRevisions } from '$lib/server/designs';
 import { requireDesign } from '$lib/server/designs/design-access';
@@ -49,8 +50,8 @@ export const actions: Actions = {
 			const body = parseWith(startFieldCheckBodySchema, { mode: String(form.get('mode') ?? 'standard'), homing: form.get('kind') === 'homing' });
 			({ id } = await startFieldCheck(getDb(), { design, revision, userId: locals.user!.id, kind: body.homing ? 'homing' : 'check', mode: body.mode }));
 		} catch (err) {
-			if (err instanceof InputError) return fail(400, { fieldCheck: { message: err.first.message } });
-			if (isHttpError(err) && err.status === 429) return fail(429, { fieldCheck: { message: err.body.message } });
+			if (err instanceof InputError) return formFail(400, { action: 'startFieldCheck', message: err.first.message });
+			if (isHttpError(err) && err.status === 429) return formFail(429, { action: 'startFieldCheck', message: err.body.message });
 			throw err;
 		}
 		redirect(303, back(design.id, revision.label, id));
@@ -68,7 +69,7 @@ export const actions: Actions = {
 		try {
 			({ label } = await reviseFromHoming(getDb(), { design, study: check, userId: locals.user!.id }));
 		} catch (err) {
-			if (err instanceof InputError) return fail(422, { fieldCheck: { message: err.first.message } });
+			if (err instanceof InputError) return formFail(422, { action: 'reviseFromHoming', message: err.first.message });
 			throw err;
 		}
 		redirect(303, `/designs/${design.id}/r/${label}`);

@@ -1,5 +1,5 @@
 // A revision's sweep plans: list them, save a new one (editors; at most 10 000 points), export one as the sweep JSON.
-import { fail } from '@sveltejs/kit';
+import { fieldErrorsOf, formFail } from '$lib/server/http/form-failure';
 import { can } from '$lib/server/access';
 import { getDb } from '$lib/server/db';
 import { requireRevision } from '$lib/server/measurements/revision-access';
@@ -28,7 +28,7 @@ export const actions: Actions = {
 			const saved = await saveSweepPlan(getDb(), { revisionId: revision.id, userId: locals.user!.id, draft, base: revision.input });
 			return { saved };
 		} catch (err) {
-			if (err instanceof InputError) return fail(400, { values: draft, issues: err.issues.map((i) => ({ path: i.path, message: i.message })) });
+			if (err instanceof InputError) return formFail(400, { action: 'save', message: 'Please correct the marked fields.', fieldErrors: fieldErrorsOf(err.issues), values: draft });
 			throw err;
 		}
 	}
