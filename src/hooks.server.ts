@@ -7,7 +7,6 @@ import { building } from '$app/environment';
 import { SettingError, startAppMode } from '$lib/server/app-mode';
 import { identify } from '$lib/server/auth/request-identity';
 import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from '$lib/server/db';
-import { drainUnreadBody } from '$lib/server/http/drain-body';
 import { refuseUnreadableForm, refuseUnstorableAddress, refuseUnstorableJson } from '$lib/server/http/form-body-guard';
 
 const RETRY_AFTER_SECONDS = '5';
@@ -64,9 +63,7 @@ export const handle: Handle = async ({ event, resolve }) => {
 		event.locals.identity = identity;
 		const unreadable = refuseUnstorableAddress(event) ?? (await refuseUnreadableForm(event)) ?? (await refuseUnstorableJson(event));
 		if (unreadable) return secure(unreadable);
-		const response = await resolve(event);
-		await drainUnreadBody(event.request);
-		return secure(apiJson(event.url.pathname, response, event.request.method));
+		return secure(apiJson(event.url.pathname, await resolve(event), event.request.method));
 	} catch (err) {
 		// identify() could not reach PostgreSQL: a JSON 503 for the API; pages get kit's 503 error page.
 		if (isDatabaseUnavailable(err)) {

@@ -68,3 +68,13 @@ describe('parallel creations of one name (found by the 10 000-case run as 500s)'
 		expect(new Set(answers.map((a) => a.body.slug ?? a.body.design?.slug ?? a.body.id)).size).toBe(24);
 	});
 });
+
+describe('a method the route does not have (found by the 10 000-case run as a plain-text 405)', () => {
+	it('answers JSON 405 naming the methods the address answers (RFC 9110 §15.5.6: Allow)', async () => {
+		// "/simulations/%2E/cancel" is read as "/simulations/cancel": the status route, which answers GET only
+		const res = await api(server.origin, `/api/v1/simulations/%2E/cancel`, { token: ws.editor.token }, { body: {} });
+		expect(res.status).toBe(405);
+		expect(res.body.error).toMatch(/^POST is not accepted at this address; it answers GET/);
+		expect(res.headers.get('allow')).toMatch(/GET/);
+	});
+});
