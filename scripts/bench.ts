@@ -34,7 +34,10 @@ const findings = `## Findings
   one-point sweep; every file hashed by the hand-written SHA-256 for the manifest and again by node:crypto for
   the record); the "after" row is the single pipeline (the artwork drawn once and handed along, each file hashed
   once by Web Crypto). jszip deflates in JavaScript (≈ 12× zlib for these files), so the 2× target stays out of
-  reach without replacing it; we keep it and note the miss.
+  reach without replacing it; we keep it and note the miss. Measured twice on 2026-12-02 with
+  \`npx tsx scripts/bench/bundle-rows.ts\` (beside a full test run): before 9.98 / 12.6 ms, after 10.9 / 11.4 ms —
+  no gain beyond the ±15 % noise. Drawing the artwork is a small share of a download; the writers (now with the
+  dimensioned drawing sheet and the legend), the read-back and jszip's deflate take the time.
 - **Downloads.** A revision is immutable, so the server keeps each delivery's bytes and hashes in a bounded
   in-process cache (64 deliveries / 64 MB); every download still prepares the revision once, passes the gate
   and writes its export record. Profiling the download route under autocannon also showed every API-token
