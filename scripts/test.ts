@@ -7,6 +7,7 @@ import pg from 'pg';
 import { loadConfig, rootDir, runMain } from './lib/config.ts';
 import { provideMail } from './lib/mail.ts';
 import { migrateToLatest } from './lib/migrate.ts';
+import { ensureGerbv } from './lib/gerbv.ts';
 import { ensureOpenEms } from './lib/openems.ts';
 import { TEST_DATABASE, connectionUrl, provideDatabase, stopCluster } from './lib/postgres.ts';
 import { stopBackground } from './lib/services.ts';
@@ -101,6 +102,8 @@ runMain(async () => {
 			console.log('\n── vitest: unit + integration ──');
 			// the Field check's integration tests run the real engine
 			ensureOpenEms();
+			// the Gerber/Excellon read-back test runs Debian's gerbv as a second, independent reader
+			ensureGerbv();
 			const vitestReport = join(reports, 'vitest.json');
 			const code = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`, ...(only?.vitest ?? [])], env);
 			const v = readJson(vitestReport);
