@@ -1,6 +1,7 @@
 // Journey of a designer giving a board its finish: a new design starts with solder mask and a top legend; the fab view
 // draws both from the Gerber files read back; the editor covers the patch with mask (the sizing says so) and places a
-// mounting hole, which the design-rule check holds 5 h from the patch until the margin gives it room.
+// mounting hole, which the design-rule check holds 5 h from the patch until the margin gives it room. The designer's
+// whole journey then adds an edge launch: fab view, bundle and STEP (read by Open CASCADE) agree on pads, holes and board.
 import { readFile } from 'node:fs/promises';
 import { expect, test, type Page } from '@playwright/test';
 import { createParser } from '@tracespace/parser';
@@ -133,13 +134,14 @@ test('the designer’s journey: an edge launch, mask, legend and a hole are draw
 	const topCopper = fab.locator('path[data-fab-layer="copper-L1"]');
 	await expect(topCopper).toHaveCount(1);
 	const islands = ((await topCopper.getAttribute('d')) ?? '').split('M').length - 1;
-	expect(islands).toBeGreaterThanOrEqual(3);
+	expect(islands).toBe(3);
 	await expect(fab.locator('[data-fab-layer="mask-top"]')).toHaveCount(1);
 	await expect(fab.locator('[data-fab-layer="legend-top"]')).toHaveCount(1);
 	await expect(fab.locator('[data-fab-layer="legend-top"] path').first()).toBeAttached();
 	await expect(fab.locator('circle[data-fab-layer="holes"]')).toHaveCount(13);
 	await expect(fab).toContainText('13 holes');
-	await expect(page.getByTestId('fab-mask')).toContainText('Top mask');
+	// the mask opens over the bare patch-and-line, each ground pad and the mounting hole
+	await expect(page.getByTestId('fab-mask')).toContainText('Top mask: 4 openings');
 	await expect(page.getByTestId('fab-legend')).toContainText(/[1-9]\d* strokes/);
 	await fab.scrollIntoViewIfNeeded();
 	await fab.screenshot({ path: '/work/shots/stepe2e-fab-view.png' });
@@ -188,4 +190,14 @@ test('the designer’s journey: an edge launch, mask, legend and a hole are draw
 	expect(substrate).toHaveLength(1);
 	const holesMm2 = [...plated, ...nonPlated].reduce((s, h) => s + (Math.PI * h.diameterMm ** 2) / 4, 0);
 	expect(Math.abs(substrate[0].volumeMm3 - (widthMm * lengthMm - holesMm2) * 1.524)).toBeLessThan(0.02);
+	// the launch's ground pads are top-copper solids of their own: the editor's defaults (2 mm wide × 3 mm long, hints in
+	// src/lib/design/design-form-fields.ts) less the pad's 3 × 2 vias of 0.3 mm, × 35 µm; 0.001 mm³ tells one via (0.0025 mm³)
+	const top = step.bodies.filter((b) => b.name.startsWith('L1 '));
+	expect(top).toHaveLength(3);
+	const viaCount = plated.filter((h) => Math.abs(h.diameterMm - 0.3) < 1e-6).length;
+	expect(viaCount).toBe(12);
+	const padMm3 = (2 * 3 - (6 * Math.PI * 0.3 ** 2) / 4) * 0.035;
+	const pads = top.filter((b) => Math.abs(b.volumeMm3 - padMm3) < 0.001);
+	expect(pads).toHaveLength(2);
+	for (const pad of pads) expect(pad.max[2] - pad.min[2]).toBeCloseTo(0.035, 6);
 });
