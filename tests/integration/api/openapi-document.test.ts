@@ -38,7 +38,7 @@ describe('openApiDocument', () => {
 		expect(download.get.responses['422'].content['application/json'].schema.$ref).toBe('#/components/schemas/ExportRefusal');
 		expect(schemas.ExportRefusal.required).toEqual(expect.arrayContaining(['error', 'profile', 'violations']));
 		expect(schemas.ExportRefusal.properties.violations.items.$ref).toBe('#/components/schemas/Violation');
-		// the rule ids of src/lib/drc/violation.ts (the connector launch's five added after the first seven)
+		// the rule ids of src/lib/schemas/violation.ts (the connector launch's five, then the legend's three and the mounting holes' one, after the first seven)
 		expect(schemas.Violation.properties.ruleId.enum).toEqual([
 			'trace-width',
 			'copper-spacing',
@@ -51,7 +51,11 @@ describe('openApiDocument', () => {
 			'launch-via-edge',
 			'launch-via-spacing',
 			'launch-annular-ring',
-			'launch-outside-board'
+			'launch-outside-board',
+			'legend-width',
+			'legend-clearance',
+			'legend-edge',
+			'hole-keep-out'
 		]);
 		expect(schemas.FabProfile.required).toContain('minTraceWidthMm');
 		expect(download.post.requestBody.content['application/json'].schema.$ref).toBe('#/components/schemas/WaiverBody');

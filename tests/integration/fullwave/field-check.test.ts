@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import type { Dataset, Group } from 'h5wasm';
 import { afterAll, afterEach, describe, expect, it } from 'vitest';
-import { size } from '../../../src/lib/rf';
+import { sizeDocument } from '../../fixtures/designs/size-document';
 import { fieldCheckResultSchema, type FieldCheckProgress, type FieldCheckResult } from '../../../src/lib/schemas/field-check';
 import { BudgetExceededError, EngineMissingError, FieldCheckAbortedError, runFieldCheck } from '../../../src/worker/fullwave';
 
@@ -71,7 +71,7 @@ describe('runFieldCheck on openEMS', () => {
 		expect(pattern.gainDbi!).toBeLessThan(pattern.directivityDbi);
 		// validation, coarse: the sizing's two-slot directivity D = (2πW/λ0)²/I1 · 2/(1 + G12/G1) (Balanis, Antenna Theory
 		// 4th ed., §14.2.4; from memory) for this patch; an infinite-ground cavity model against a finite board: within 1.5 dB
-		const estimate = size(fixture('rectangular-inset')).estimates.directivityDbi;
+		const estimate = sizeDocument(fixture('rectangular-inset')).estimates.directivityDbi;
 		expect(Math.abs(pattern.directivityDbi - estimate)).toBeLessThan(1.5);
 		// the inset feed line runs along y, the patch's resonant length: the broadside field, hence the E-plane, lies in φ = 90°
 		expect(pattern.ePlane.phiDeg).toBe(90);
