@@ -126,6 +126,7 @@ test('a designer reads and types lengths in mil and foil in oz; everything is st
 	};
 	await sweepAxis(`Mil thickness ${seeded.suffix}`, '31', '62', '31');
 	await expect(page.getByTestId('saved-plan').filter({ hasText: `Mil thickness ${seeded.suffix}` })).toContainText('Laminate thickness h: 31 → 62 step 31 mil');
+	await expect(page.getByTestId('sweep-plan-form').locator('xpath=..')).toContainText('Top view, mil.');
 	await page.screenshot({ path: '/tmp/units-sweeps.png', fullPage: true });
 	await sweepAxis(`Mm thickness ${seeded.suffix}`, '0.7874 mm', '1.5748 mm', '0.7874mm');
 	const plans = await getDb().selectFrom('sweep_plan').innerJoin('revision', 'revision.id', 'sweep_plan.revision_id').select(['sweep_plan.name', 'sweep_plan.plan']).where('revision.design_id', '=', designId).execute();
