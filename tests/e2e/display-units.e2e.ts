@@ -1,6 +1,7 @@
 // Journey: a designer switches their units to mil and oz in settings → the revision page and the editor show lengths in
 // mil and foil in oz → a ground margin typed in mil is saved in mm → "8 mil" typed in the fab-profile form is stored
-// as 0.2032 mm → switching back to mm shows millimetres again. Files and stored values stay in mm throughout.
+// as 0.2032 mm → a sweep axis typed in mil stores the same plan as its mm equivalent → the tolerance study reads and
+// takes mil → switching back to mm shows millimetres again. Files and stored values stay in mm throughout.
 import { expect, test, type Page } from '@playwright/test';
 import { closeDb, getDb } from '../../src/lib/server/db';
 import { listFabProfiles } from '../../src/lib/server/fab-profiles';
@@ -106,6 +107,47 @@ test('a designer reads and types lengths in mil and foil in oz; everything is st
 	expect(stored.minDrillMm).toBe(0.3);
 	expect(stored.etchToleranceMm).toBe(0.05);
 	await page.screenshot({ path: '/tmp/units-fab-profiles.png', fullPage: true });
+
+	// The sweep plan form in mil: a thickness axis from 31 to 62 mil step 31 is the plan 0.7874 → 1.5748 mm step 0.7874
+	// (31 × 0.0254 = 0.7874); the same axis typed with explicit "mm" gives the same points; εr stays unitless
+	await page.goto(`/designs/${designId}/r/A/sweeps`);
+	await expect(page.getByLabel('Axis 1 parameter').locator('option[value="substrate.heightMm"]')).toHaveText('Laminate thickness h (mil)');
+	await expect(page.getByLabel('Axis 1 parameter').locator('option[value="substrate.relativePermittivity"]')).toHaveText('Laminate εr');
+	const sweepAxis = async (plan: string, from: string, to: string, step: string) => {
+		await page.locator('input[name="name"]').fill(plan);
+		await page.getByLabel('Axis 1 parameter').selectOption('substrate.heightMm');
+		await page.getByLabel('Axis 1 from').fill(from);
+		await page.getByLabel('Axis 1 to').fill(to);
+		await page.getByLabel('Axis 1 step').fill(step);
+		await expect(page.getByTestId('point-count')).toHaveText('2');
+		await expect(page.getByTestId('point-values')).toContainText('31 mil');
+		await page.getByRole('button', { name: 'Save plan' }).click();
+		await expect(page.getByTestId('saved-plan').filter({ hasText: plan })).toHaveCount(1);
+	};
+	await sweepAxis(`Mil thickness ${seeded.suffix}`, '31', '62', '31');
+	await expect(page.getByTestId('saved-plan').filter({ hasText: `Mil thickness ${seeded.suffix}` })).toContainText('Laminate thickness h: 31 → 62 step 31 mil');
+	await expect(page.getByTestId('sweep-plan-form').locator('xpath=..')).toContainText('Top view, mil.');
+	await page.screenshot({ path: '/tmp/units-sweeps.png', fullPage: true });
+	await sweepAxis(`Mm thickness ${seeded.suffix}`, '0.7874 mm', '1.5748 mm', '0.7874mm');
+	const plans = await getDb().selectFrom('sweep_plan').innerJoin('revision', 'revision.id', 'sweep_plan.revision_id').select(['sweep_plan.name', 'sweep_plan.plan']).where('revision.design_id', '=', designId).execute();
+	const planOf = (name: string) => plans.find((p) => p.name === name)!.plan as { axes: unknown[] };
+	expect(planOf(`Mil thickness ${seeded.suffix}`).axes[0]).toEqual({ field: 'substrate.heightMm', from: 0.7874, to: 1.5748, step: 0.7874 });
+	expect(planOf(`Mm thickness ${seeded.suffix}`)).toEqual(planOf(`Mil thickness ${seeded.suffix}`));
+
+	// The tolerance study in mil: the built-in profile's etch ±0.05 mm shows as 1.9685 mil; 2 mil and "0.0508 mm" are
+	// the same ± (2 × 0.0254), so the seeded study gives the same share of boards in band
+	await page.goto(`/designs/${designId}/r/A/tolerance`);
+	await expect(page.getByText('Etch ± (mil)')).toBeVisible();
+	await expect(page.getByTestId('tolerance-etch')).toHaveValue('1.9685');
+	await expect(page.getByTestId('tolerance-form')).toContainText('62.99 mil');
+	await page.getByTestId('tolerance-etch').fill('2');
+	const share = (await page.getByTestId('share-in-band').textContent())!;
+	await page.getByTestId('tolerance-etch').fill('0.0508 mm');
+	await expect(page.getByTestId('share-in-band')).toHaveText(share);
+	await page.getByTestId('tolerance-etch').fill('2 parsec');
+	await expect(page.getByRole('alert')).toContainText('unknown unit "parsec"');
+	await page.getByTestId('tolerance-etch').fill('2');
+	await page.screenshot({ path: '/tmp/units-tolerance.png', fullPage: true });
 
 	// back to millimetres: the same revision reads in mm again
 	await setUnits(page, 'mm', 'um');

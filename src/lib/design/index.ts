@@ -3,6 +3,7 @@ export { prepare, prepareSized, gate, stamped, writeFiles, readBack, holdsFabFil
 export { sizeDocument, type SizingOutcome } from './live-sizing';
 export * from './design-form-fields';
 export * from './form-units';
+export * from './tolerance-lengths';
 export * from './display-names';
 export * from './revision-pages';
 export * from './derived-quantities';

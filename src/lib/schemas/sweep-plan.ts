@@ -2,6 +2,7 @@
 // document. The document itself, its point count and its 10 000-point limit are formats/sweep/plan.ts: one schema per concept.
 import { z } from 'zod';
 import { plainText } from './plain-text';
+import { lengthFormText, lengthSymbol, parseLengthMm, type LengthUnit } from '../units';
 
 /**
  * What a material (or any input) change does to the geometry: `resize` sizes every point afresh (a laminate change
@@ -53,6 +54,22 @@ export const sweepFieldChoices: readonly SweepFieldChoice[] = [
 
 export function sweepFieldChoice(field: string): SweepFieldChoice | undefined {
 	return sweepFieldChoices.find((c) => c.field === field);
+}
+
+/** Whether a field is a length (stored in mm): its from/to/step and values are read and shown in the person's length unit. */
+export const isLengthSweepField = (field: string): boolean => sweepFieldChoice(field)?.unit === 'mm';
+
+/** The unit a field's values are typed and shown in for a person who reads lengths in `lengthUnit` (mil for a length field). */
+export function sweepFieldUnit(field: string, lengthUnit: LengthUnit = 'mm'): string {
+	const c = sweepFieldChoice(field);
+	if (!c) return '';
+	return isLengthSweepField(field) ? lengthSymbol(lengthUnit) : c.unit;
+}
+
+/** A stored value as the person reads it: GHz for frequency, `lengthUnit` for a length field, six significant figures. */
+export function sweepValueInUnit(field: string, stored: number, lengthUnit: LengthUnit = 'mm'): number {
+	if (isLengthSweepField(field)) return Number(Number(lengthFormText(stored, lengthUnit)).toPrecision(6));
+	return Number((stored / (sweepFieldChoice(field)?.perUnit ?? 1)).toPrecision(6));
 }
 
 const text = (max: number) => z.string().max(max, { error: `at most ${max} characters` }).default('');
@@ -108,6 +125,12 @@ function number(textValue: string): number {
 	return t === '' ? NaN : Number(t);
 }
 
+/** A typed length in mm through the one unit parser (a bare number in `lengthUnit`, or "8 mil", "0.2 mm"), or NaN. */
+function lengthMm(textValue: string, lengthUnit: LengthUnit): number {
+	const parsed = parseLengthMm(textValue, lengthUnit);
+	return parsed.ok ? parsed.value : NaN;
+}
+
 /** Keeps twelve significant digits so that 2.41 GHz becomes 2410000000 Hz, not 2409999999.9999995. */
 function toStored(value: number, perUnit: number): number {
 	return Number.isFinite(value) ? Number((value * perUnit).toPrecision(12)) : value;
@@ -115,34 +138,40 @@ function toStored(value: number, perUnit: number): number {
 
 /**
  * The sweep-plan document a draft describes (not yet validated: formats/sweep's parseSweepPlan does that),
- * and for each of its axes the form row it came from. Rows without a field are left out.
+ * and for each of its axes the form row it came from. Rows without a field are left out. Length fields are typed in
+ * `lengthUnit` (or name their unit: "8 mil") and stored in mm; a list of lengths is split on commas and semicolons
+ * only, so "8 mil, 10 mil" keeps its units. Other fields are typed in their own unit (GHz, Ω, none) as before.
  */
-export function sweepPlanFromDraft(draft: SweepPlanDraft): { plan: { planVersion: 1; combine: 'grid' | 'zip'; mode?: SweepMode; axes: Record<string, unknown>[] }; rows: number[] } {
+export function sweepPlanFromDraft(draft: SweepPlanDraft, lengthUnit: LengthUnit = 'mm'): { plan: { planVersion: 1; combine: 'grid' | 'zip'; mode?: SweepMode; axes: Record<string, unknown>[] }; rows: number[] } {
 	const rows: number[] = [];
 	const axes: Record<string, unknown>[] = [];
 	draft.axes.forEach((a, row) => {
 		if (a.field === '') return;
 		const perUnit = sweepFieldChoice(a.field)?.perUnit ?? 1;
+		const length = isLengthSweepField(a.field);
+		const read = (t: string) => (length ? lengthMm(t, lengthUnit) : toStored(number(t), perUnit));
 		rows.push(row);
 		if (a.mode === 'list') {
-			const values = a.values.split(/[\s,;]+/).filter((v) => v !== '').map((v) => toStored(number(v), perUnit));
+			// "1.5 mm" must stay one entry: with units present, only commas and semicolons separate
+			const separator = length && /[a-zµμ"]/i.test(a.values) ? /\s*[,;]\s*/ : /[\s,;]+/;
+			const values = a.values.split(separator).map((v) => v.trim()).filter((v) => v !== '').map(read);
 			axes.push({ field: a.field, values });
 		} else {
-			axes.push({ field: a.field, from: toStored(number(a.from), perUnit), to: toStored(number(a.to), perUnit), step: toStored(number(a.step), perUnit) });
+			axes.push({ field: a.field, from: read(a.from), to: read(a.to), step: read(a.step) });
 		}
 	});
 	// a resize plan is written as plans were before modes (no mode: resize), so its document keeps its bytes
 	return { plan: { planVersion: 1, combine: draft.combine, ...(draft.mode === 'hold-geometry' ? { mode: draft.mode } : {}), axes }, rows };
 }
 
-/** The draft of a saved plan document (the inverse of sweepPlanFromDraft, for "start from this plan"). */
-export function sweepDraftFromPlan(name: string, plan: { combine: 'grid' | 'zip'; mode?: SweepMode; axes: readonly ({ field: string } & ({ from: number; to: number; step: number } | { values: readonly number[] }))[] }): SweepPlanDraft {
-	const shown = (v: number, perUnit: number) => String(Number((v / perUnit).toPrecision(12)));
+/** The draft of a saved plan document (the inverse of sweepPlanFromDraft, for "start from this plan"), lengths in `lengthUnit`. */
+export function sweepDraftFromPlan(name: string, plan: { combine: 'grid' | 'zip'; mode?: SweepMode; axes: readonly ({ field: string } & ({ from: number; to: number; step: number } | { values: readonly number[] }))[] }, lengthUnit: LengthUnit = 'mm'): SweepPlanDraft {
 	const axes = plan.axes.slice(0, SWEEP_FORM_AXES).map((a) => {
 		const perUnit = sweepFieldChoice(a.field)?.perUnit ?? 1;
+		const shown = (v: number) => (isLengthSweepField(a.field) ? lengthFormText(v, lengthUnit) : String(Number((v / perUnit).toPrecision(12))));
 		return 'values' in a
-			? { ...emptyAxisDraft(a.field), mode: 'list' as const, values: a.values.map((v) => shown(v, perUnit)).join(', ') }
-			: { ...emptyAxisDraft(a.field), from: shown(a.from, perUnit), to: shown(a.to, perUnit), step: shown(a.step, perUnit) };
+			? { ...emptyAxisDraft(a.field), mode: 'list' as const, values: a.values.map(shown).join(', ') }
+			: { ...emptyAxisDraft(a.field), from: shown(a.from), to: shown(a.to), step: shown(a.step) };
 	});
 	while (axes.length < SWEEP_FORM_AXES) axes.push(emptyAxisDraft());
 	return { name, combine: plan.combine, mode: plan.mode ?? 'resize', axes };

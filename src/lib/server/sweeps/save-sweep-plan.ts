@@ -4,6 +4,7 @@ import type { Kysely } from 'kysely';
 import { checkPlanFitsDesign, parseSweepPlan, countSweepPoints } from '../../formats/sweep';
 import { InputError, parseWith, type DesignInput } from '../../schemas';
 import { sweepPlanDraftSchema, sweepPlanFromDraft } from '../../schemas/sweep-plan';
+import type { LengthUnit } from '../../units';
 import type { Database } from '../db/database';
 import * as sweepPlanQueries from '../db/sweep-plan.queries';
 
@@ -14,6 +15,8 @@ export interface SaveSweepPlanOptions {
 	draft: unknown;
 	/** The revision's design input: a plan that holds the geometry must fit it. */
 	base?: Pick<DesignInput, 'shape'>;
+	/** The unit the draft's length fields were typed in (the form's hidden field); mm when not said (the API, old forms). */
+	lengthUnit?: LengthUnit;
 }
 
 /**
@@ -22,7 +25,7 @@ export interface SaveSweepPlanOptions {
  */
 export async function saveSweepPlan(db: Kysely<Database>, opts: SaveSweepPlanOptions): Promise<{ id: string; pointCount: number }> {
 	const draft = parseWith(sweepPlanDraftSchema, opts.draft);
-	const { plan: document, rows } = sweepPlanFromDraft(draft);
+	const { plan: document, rows } = sweepPlanFromDraft(draft, opts.lengthUnit ?? 'mm');
 	let plan;
 	try {
 		plan = parseSweepPlan(document);

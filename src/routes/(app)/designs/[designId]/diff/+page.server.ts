@@ -13,5 +13,7 @@ export const load: PageServerLoad = async (event) => {
 	const b = revisions.find((r) => r.label === (event.url.searchParams.get('b') ?? latest?.label));
 	const a = revisions.find((r) => r.label === (event.url.searchParams.get('a') ?? b?.parentLabel ?? revisions[0]?.label));
 	if (!a || !b) error(404, 'Revision not found');
-	return { design, labels: revisions.map((r) => r.label), diff: diffRevisions(a, b), notes: { a: a.note, b: b.note } };
+	// lengths and foil in the person's units (the root layout's); the stored revisions stay in mm
+	const { units } = await event.parent();
+	return { design, labels: revisions.map((r) => r.label), diff: diffRevisions(a, b, units), notes: { a: a.note, b: b.note } };
 };

@@ -6,6 +6,7 @@ import { requireRevision } from '$lib/server/measurements/revision-access';
 import { listSweepPlans, saveSweepPlan } from '$lib/server/sweeps';
 import { InputError } from '$lib/schemas';
 import { sweepDraftFromFields } from '$lib/schemas/sweep-plan';
+import { displayUnitsOfFormData } from '$lib/design';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
@@ -24,8 +25,10 @@ export const actions: Actions = {
 		const { revision } = await requireRevision(locals.identity, params.designId, params.label, 'sweep.write');
 		const form = await request.formData();
 		const draft = sweepDraftFromFields((k) => form.get(k));
+		// lengths typed in the unit the form names (lengthUnit); a post that names none is mm, as before
+		const lengthUnit = displayUnitsOfFormData(form).length;
 		try {
-			const saved = await saveSweepPlan(getDb(), { revisionId: revision.id, userId: locals.user!.id, draft, base: revision.input });
+			const saved = await saveSweepPlan(getDb(), { revisionId: revision.id, userId: locals.user!.id, draft, base: revision.input, lengthUnit });
 			return { saved };
 		} catch (err) {
 			if (err instanceof InputError) return formFail(400, { action: 'save', message: 'Please correct the marked fields.', fieldErrors: fieldErrorsOf(err.issues), values: draft });
