@@ -12,7 +12,6 @@
 // floor is what stays allocated, so a leak shows as a rising floor.
 import { mkdtempSync, rmSync } from 'node:fs';
 import { get as httpGet } from 'node:http';
-import { Worker } from 'node:worker_threads';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import pg from 'pg';
@@ -21,6 +20,7 @@ import { migrateToLatest } from '../lib/migrate.ts';
 import { connectionUrl, provideDatabase } from '../lib/postgres.ts';
 import { action, api } from '../../tests/integration/hardening/helpers/client.ts';
 import { startBuiltServer } from '../../tests/integration/hardening/helpers/built-server.ts';
+import { startHealthProber } from '../../tests/integration/hardening/helpers/health-prober.ts';
 import { build } from './fuzz.ts';
 import { writeReliabilitySubsection } from './reliability-section.ts';
 
@@ -51,49 +51,6 @@ interface Sample {
 type Kind = 'sign-in' | 'size' | 'export' | 'upload' | 'array-download' | 'sweep-download';
 
 const HEALTH_P99_TARGET_MS = 100;
-
-/**
- * Asks `origin`/healthz every 250 ms until told to stop, on a thread of its own; resolves to each answer's time in
- * ms (Infinity for a non-200 or no answer) and the first few failures' causes.
- */
-function startProber(origin: string): { stop: () => Promise<{ times: number[]; failures: string[] }> } {
-	const prober = new Worker(
-		`const { parentPort, workerData } = require('node:worker_threads');
-		let stop = false;
-		parentPort.on('message', () => (stop = true));
-		(async () => {
-			const times = [];
-			const failures = [];
-			while (!stop) {
-				const t0 = performance.now();
-				try {
-					const res = await fetch(workerData.origin + '/healthz');
-					await res.arrayBuffer();
-					times.push(res.status === 200 ? performance.now() - t0 : Infinity);
-					if (res.status !== 200 && failures.length < 5) failures.push('/healthz answered ' + res.status);
-				} catch (err) {
-					times.push(Infinity);
-					if (failures.length < 5) failures.push('/healthz: ' + err.message + (err.cause ? ' (' + (err.cause.code || '') + ' ' + (err.cause.message || '') + ')' : ''));
-				}
-				await new Promise((r) => setTimeout(r, 250));
-			}
-			parentPort.postMessage({ times, failures });
-		})();`,
-		{ eval: true, workerData: { origin } }
-	);
-	const result = new Promise<{ times: number[]; failures: string[] }>((resolve, reject) => {
-		prober.once('message', resolve);
-		prober.once('error', reject);
-	});
-	return {
-		stop: async () => {
-			prober.postMessage('stop');
-			const r = await result;
-			await prober.terminate();
-			return r;
-		}
-	};
-}
 
 const percentile99 = (times: number[]) => {
 	const sorted = [...times].sort((a, b) => a - b);
@@ -201,8 +158,8 @@ export async function soakRun(opts: { seconds: number; warmupSeconds: number; wo
 		const sampler = setInterval(() => samples.push({ seconds: (performance.now() - started) / 1000, rssMb: server.rssKb() / 1024, requests: total }), 2_000);
 		samples.push({ seconds: 0, rssMb: server.rssKb() / 1024, requests: 0 });
 		// /healthz every 250 ms, one at a time, for the whole run: of the busy server and of the idle control
-		const busyProber = startProber(server.origin);
-		const idleProber = startProber(idle.origin);
+		const busyProber = startHealthProber(server.origin, 250);
+		const idleProber = startHealthProber(idle.origin, 250);
 		const worker = async (w: number) => {
 			for (let i = w; performance.now() < end; i += opts.workers) {
 				const kind = mix[i % mix.length];

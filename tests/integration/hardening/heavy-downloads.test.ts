@@ -5,7 +5,6 @@
 import { createHash } from 'node:crypto';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { Worker } from 'node:worker_threads';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { arrayBenchDocument } from '../../../src/lib/design';
@@ -15,6 +14,7 @@ import { createDesign } from '../../../src/lib/server/designs';
 import { saveSweepPlan } from '../../../src/lib/server/sweeps';
 import { api } from './helpers/client';
 import { copyBuild, startBuiltServer, type BuiltServer } from './helpers/built-server';
+import { startHealthProber } from './helpers/health-prober';
 import { createHardeningWorkspace, type HardeningWorkspace } from './helpers/workspace';
 
 /** "/healthz answers within 200 ms" while heavy work runs (issue 13; common practice for a liveness probe, no source). */
@@ -71,32 +71,9 @@ afterAll(async () => {
  * shows up as the server's delay.
  */
 async function healthWhile(origin: string, done: Promise<unknown>, minMs = 0): Promise<number[]> {
-	const prober = new Worker(
-		`const { parentPort, workerData } = require('node:worker_threads');
-		let stop = false;
-		parentPort.on('message', () => (stop = true));
-		(async () => {
-			const times = [];
-			while (!stop) {
-				const t0 = performance.now();
-				const res = await fetch(workerData.origin + '/healthz');
-				await res.arrayBuffer();
-				times.push(res.status === 200 ? performance.now() - t0 : Infinity);
-				await new Promise((r) => setTimeout(r, 100));
-			}
-			parentPort.postMessage(times);
-		})();`,
-		{ eval: true, workerData: { origin } }
-	);
-	const times = new Promise<number[]>((resolve, reject) => {
-		prober.once('message', resolve);
-		prober.once('error', reject);
-	});
+	const prober = startHealthProber(origin, 100);
 	await Promise.all([done.catch(() => undefined), new Promise((r) => setTimeout(r, minMs))]);
-	prober.postMessage('stop');
-	const result = await times;
-	await prober.terminate();
-	return result;
+	return (await prober.stop()).times;
 }
 
 /**

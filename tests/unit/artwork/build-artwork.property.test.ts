@@ -1,10 +1,9 @@
 // Property tests (fast-check) over random valid designs of every shape and feed: the artwork's invariants.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { buildArtwork, type Artwork, type ArtworkShape } from '../../../src/lib/artwork';
+import { type ArtworkShape } from '../../../src/lib/artwork';
 import {
 	AREA_EPSILON_MM2,
-	GeometryError,
 	arcSweepRad,
 	contourBounds,
 	flattenContour,
@@ -13,37 +12,11 @@ import {
 	type Contour,
 	type Point
 } from '../../../src/lib/geometry';
-import { InputError, allowedFeeds, patchShapes, type DesignInputDocument } from '../../../src/lib/schemas';
-import { sizeDocument } from '../../fixtures/designs/size-document';
+import { randomSingleDesigns, tryBuildArtwork } from '../../fixtures/designs/random-designs';
 
 /** Random design-input documents of every shape with each feed the shape allows. */
-const documents: fc.Arbitrary<DesignInputDocument> = fc
-	.constantFrom(...patchShapes)
-	.chain((shape) =>
-		fc.record({
-			name: fc.constant(`random ${shape}`),
-			shape: fc.constant(shape),
-			feed: fc.constantFrom(...allowedFeeds[shape]),
-			frequencyHz: fc.double({ min: 0.8e9, max: 12e9, noNaN: true }),
-			substrate: fc.record({
-				relativePermittivity: fc.double({ min: 2.1, max: 10.2, noNaN: true }),
-				heightMm: fc.double({ min: 0.2, max: 3.2, noNaN: true }),
-				lossTangent: fc.double({ min: 0.0005, max: 0.02, noNaN: true })
-			}),
-			handedness: fc.constantFrom('rhcp' as const, 'lhcp' as const),
-			solderMask: fc.boolean()
-		})
-	);
-
-/** Sizes and builds; null when the random document is refused as input (InputError) or breaks a geometry rule (GeometryError). */
-function tryBuild(doc: DesignInputDocument): Artwork | null {
-	try {
-		return buildArtwork(sizeDocument(doc));
-	} catch (e) {
-		if (e instanceof InputError || e instanceof GeometryError) return null;
-		throw e;
-	}
-}
+const documents = randomSingleDesigns();
+const tryBuild = tryBuildArtwork;
 
 function contoursOf(shape: ArtworkShape): Contour[] {
 	const g = shape.geometry;

@@ -3,9 +3,10 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { buildArtwork, type Artwork, type ArtworkShape } from '../../../src/lib/artwork';
 import { GeometryError, contourBounds, flattenContour, isSimpleRing, type Contour } from '../../../src/lib/geometry';
-import { InputError, type DesignInputDocument } from '../../../src/lib/schemas';
+import type { DesignInputDocument } from '../../../src/lib/schemas';
 import { layeredCases, layeredDocument, parasiticStack, threeCopperStack } from '../../fixtures/designs/layered-cases';
 import { reachable, touchGraph } from './copper-graph';
+import { tryBuildArtwork } from '../../fixtures/designs/random-designs';
 import { sizeDocument } from '../../fixtures/designs/size-document';
 
 function contoursOf(shape: ArtworkShape): Contour[] {
@@ -157,14 +158,7 @@ const randomDocuments: fc.Arbitrary<DesignInputDocument> = fc
 		return { ...base, feed: r.kind };
 	});
 
-function tryBuild(doc: DesignInputDocument): Artwork | null {
-	try {
-		return buildArtwork(sizeDocument(doc));
-	} catch (e) {
-		if (e instanceof InputError || e instanceof GeometryError) return null;
-		throw e;
-	}
-}
+const tryBuild = tryBuildArtwork;
 
 describe('layered designs and arrays over random documents (fast-check)', () => {
 	it('builds most, and every one built has closed simple rings, every element fed and the stack in order', () => {

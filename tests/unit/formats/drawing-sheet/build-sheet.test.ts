@@ -2,13 +2,13 @@
 // no two labels overlap and every label lies on the sheet; sizes to the fab profile's resolution; the title block.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { boxesOverlap, buildArtwork, type Artwork } from '../../../../src/lib/artwork';
-import { GeometryError } from '../../../../src/lib/geometry';
+import { boxesOverlap, buildArtwork } from '../../../../src/lib/artwork';
 import { createExportMeta } from '../../../../src/lib/formats/export-meta';
 import { buildDrawingSheet, drawingResolutionMm, FIRST_PASS_CAUTION, overlappingLabels, sheetLabels, type DrawingSheet } from '../../../../src/lib/formats/drawing-sheet';
-import { InputError, STANDARD_QUICK_TURN_PROFILE, allowedFeeds, patchShapes, type DesignInputDocument } from '../../../../src/lib/schemas';
+import { STANDARD_QUICK_TURN_PROFILE, type DesignInputDocument } from '../../../../src/lib/schemas';
 import { allShapeFeedCases, sizedCase } from '../../../fixtures/designs/design-cases';
 import { layeredCases, layeredDocument, threeCopperStack } from '../../../fixtures/designs/layered-cases';
+import { randomSingleDesigns, tryBuildArtwork } from '../../../fixtures/designs/random-designs';
 import { sizeDocument } from '../../../fixtures/designs/size-document';
 
 const meta = createExportMeta({ designName: 'Sunroof GNSS', revisionLabel: 'B', revisionDate: '2026-11-20' });
@@ -27,16 +27,6 @@ function expectReadable(sheet: DrawingSheet): void {
 	for (const d of sheet.dimensions) expect(d.label.text).toMatch(sized);
 }
 
-/** Sizes and builds; null when the random document is refused (InputError) or breaks a geometry rule (GeometryError). */
-function tryBuild(doc: DesignInputDocument): Artwork | null {
-	try {
-		return buildArtwork(sizeDocument(doc));
-	} catch (e) {
-		if (e instanceof InputError || e instanceof GeometryError) return null;
-		throw e;
-	}
-}
-
 describe('buildDrawingSheet', () => {
 	it.each(allShapeFeedCases)('lays out a $shape / $feed drawing with no overlapping label, all on the sheet', ({ shape, feed }) => {
 		expectReadable(buildDrawingSheet(buildArtwork(sizedCase(shape, feed, { solderMask: true })), meta));
@@ -47,21 +37,7 @@ describe('buildDrawingSheet', () => {
 	});
 
 	it('holds for random designs of every shape and feed, single and in arrays (fast-check)', () => {
-		const single = fc.constantFrom(...patchShapes).chain((shape) =>
-			fc.record({
-				name: fc.string({ minLength: 1, maxLength: 40 }).map((s) => s.replace(/[\u0000-\u001f\u007f]/g, ' ').trim() || 'x'),
-				shape: fc.constant(shape),
-				feed: fc.constantFrom(...allowedFeeds[shape]),
-				frequencyHz: fc.double({ min: 0.8e9, max: 12e9, noNaN: true }),
-				substrate: fc.record({
-					relativePermittivity: fc.double({ min: 2.1, max: 10.2, noNaN: true }),
-					heightMm: fc.double({ min: 0.2, max: 3.2, noNaN: true }),
-					lossTangent: fc.double({ min: 0.0005, max: 0.02, noNaN: true })
-				}),
-				handedness: fc.constantFrom('rhcp' as const, 'lhcp' as const),
-				solderMask: fc.boolean()
-			})
-		);
+		const single = randomSingleDesigns(fc.string({ minLength: 1, maxLength: 40 }).map((s) => s.replace(/[\u0000-\u001f\u007f]/g, ' ').trim() || 'x'));
 		const arrays = fc
 			.record({
 				feed: fc.constantFrom('inset' as const, 'quarter-wave' as const, 'edge' as const, 'aperture-coupled' as const, 'proximity-coupled' as const),
@@ -74,8 +50,8 @@ describe('buildDrawingSheet', () => {
 			);
 		let built = 0;
 		fc.assert(
-			fc.property(fc.oneof(single as fc.Arbitrary<DesignInputDocument>, arrays), fc.constantFrom(0.1, 0.01, 0.001), (doc, resolutionMm) => {
-				const artwork = tryBuild(doc);
+			fc.property(fc.oneof(single, arrays), fc.constantFrom(0.1, 0.01, 0.001), (doc, resolutionMm) => {
+				const artwork = tryBuildArtwork(doc);
 				if (!artwork) return;
 				built += 1;
 				const m = createExportMeta({ designName: doc.name ?? 'x', revisionLabel: 'A', revisionDate: '2026-12-01' });
