@@ -65,6 +65,9 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'handedness', path: 'handedness', label: 'Circular polarisation sense', unit: '', kind: 'choice', group: 'Design', choices: handednesses },
 	{ name: 'bandToCover.lowerGHz', path: 'bandToCover.lowerHz', label: 'Band to cover, from', unit: 'GHz', kind: 'number', group: 'Design', scale: ghz, optional: true, hint: 'optional; blank = none', step: 'any' },
 	{ name: 'bandToCover.upperGHz', path: 'bandToCover.upperHz', label: 'Band to cover, to', unit: 'GHz', kind: 'number', group: 'Design', scale: ghz, optional: true, hint: 'optional; blank = none', step: 'any' },
+	{ name: 'overrides.lengthMm', path: 'overrides.lengthMm', label: 'Pinned length L', unit: 'mm', kind: 'number', group: 'Design', optional: true, hint: 'Homing or a retune pins it; blank = sized for f₀', step: 'any' },
+	{ name: 'overrides.widthMm', path: 'overrides.widthMm', label: 'Pinned width W', unit: 'mm', kind: 'number', group: 'Design', optional: true, hint: 'blank = sized for f₀', step: 'any' },
+	{ name: 'overrides.radiusMm', path: 'overrides.radiusMm', label: 'Pinned radius a', unit: 'mm', kind: 'number', group: 'Design', optional: true, hint: 'Homing or a retune pins it; blank = sized for f₀', step: 'any' },
 	{ name: 'substrate.relativePermittivity', path: 'substrate.relativePermittivity', label: 'Permittivity εr', unit: '', kind: 'number', group: 'Substrate', step: 'any' },
 	{ name: 'substrate.lossTangent', path: 'substrate.lossTangent', label: 'Loss tangent tanδ', unit: '', kind: 'number', group: 'Substrate', step: 'any' },
 	{ name: 'substrate.heightMm', path: 'substrate.heightMm', label: 'Thickness h', unit: 'mm', kind: 'number', group: 'Substrate', step: 'any' },
@@ -72,6 +75,10 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'substrate.copperConductivitySPerM', path: 'substrate.copperConductivitySPerM', label: 'Copper conductivity σ', unit: 'S/m', kind: 'number', group: 'Substrate', step: 'any' },
 	{ name: 'substrate.relativePermittivityTolerance', path: 'substrate.relativePermittivityTolerance', label: 'εr tolerance ±', unit: '', kind: 'number', group: 'Substrate', step: 'any' },
 	{ name: 'substrate.heightToleranceMm', path: 'substrate.heightToleranceMm', label: 'Thickness tolerance ±', unit: 'mm', kind: 'number', group: 'Substrate', step: 'any' },
+	{ name: 'laminate.name', path: 'laminate.name', label: 'Laminate ordered', unit: '', kind: 'text', group: 'Substrate', optional: true, hint: 'the product the fab notes order; blank = none named' },
+	{ name: 'laminate.relativePermittivity', path: 'laminate.relativePermittivity', label: 'Ordered laminate εr', unit: '', kind: 'number', group: 'Substrate', optional: true, hint: 'as its datasheet states; blank = the εr above', step: 'any' },
+	{ name: 'laminate.relativePermittivityTolerance', path: 'laminate.relativePermittivityTolerance', label: 'Ordered laminate εr ±', unit: '', kind: 'number', group: 'Substrate', optional: true, hint: 'blank = not stated', step: 'any' },
+	{ name: 'laminate.lossTangent', path: 'laminate.lossTangent', label: 'Ordered laminate tanδ', unit: '', kind: 'number', group: 'Substrate', optional: true, hint: 'blank = not stated', step: 'any' },
 	{ name: 'feed', path: 'feed', label: 'Feed', unit: '', kind: 'choice', group: 'Feed', choices: allFeedKinds },
 	{ name: 'targetImpedanceOhm', path: 'targetImpedanceOhm', label: 'Feed-point resistance', unit: 'Ω', kind: 'number', group: 'Feed', step: 'any' },
 	{ name: 'feedLineImpedanceOhm', path: 'feedLineImpedanceOhm', label: 'Feed-line impedance Z₀', unit: 'Ω', kind: 'number', group: 'Feed', step: 'any' },
@@ -81,6 +88,9 @@ export const designFormFields: readonly FormField[] = [
 	{ name: 'probe.clearanceDiameterMm', path: 'probe.clearanceDiameterMm', label: 'Ground clearance ⌀', unit: 'mm', kind: 'number', group: 'Feed', step: 'any' },
 	{ name: 'probe.model', path: 'probe.model', label: 'Probe model', unit: '', kind: 'choice', group: 'Feed', optional: true, hint: 'blank = not stated', choices: ['', ...probeModels] },
 	{ name: 'probe.platingThicknessUm', path: 'probe.platingThicknessUm', label: 'Barrel plating', unit: 'µm', kind: 'number', group: 'Feed', optional: true, hint: 'plated barrel; blank = 25 µm', step: 'any' },
+	{ name: 'overrides.insetDepthMm', path: 'overrides.insetDepthMm', label: 'Pinned inset depth', unit: 'mm', kind: 'number', group: 'Feed', optional: true, hint: 'Homing pins it; blank = solved for the feed-point resistance', step: 'any' },
+	{ name: 'overrides.probeOffsetMm', path: 'overrides.probeOffsetMm', label: 'Pinned probe offset from the centre', unit: 'mm', kind: 'number', group: 'Feed', optional: true, hint: 'Homing pins it; blank = solved for the feed-point resistance', step: 'any' },
+	{ name: 'overrides.transformerImpedanceOhm', path: 'overrides.transformerImpedanceOhm', label: 'Pinned λg/4 section impedance', unit: 'Ω', kind: 'number', group: 'Feed', optional: true, hint: 'Homing pins it; blank = √(R_edge·Z₀)', step: 'any' },
 	{ name: 'slot.lengthMm', path: 'slot.lengthMm', label: 'Coupling slot length', unit: 'mm', kind: 'number', group: 'Feed', section: 'slot', optional: true, hint: 'blank = first-pass rule', step: 'any' },
 	{ name: 'slot.widthMm', path: 'slot.widthMm', label: 'Coupling slot width', unit: 'mm', kind: 'number', group: 'Feed', section: 'slot', optional: true, hint: 'blank = first-pass rule', step: 'any' },
 	{ name: 'slot.stubLengthMm', path: 'slot.stubLengthMm', label: 'Open stub past the slot', unit: 'mm', kind: 'number', group: 'Feed', section: 'slot', optional: true, hint: 'blank ≈ λg/4', step: 'any' },
@@ -152,6 +162,12 @@ export function fieldApplies(field: FormField, shape: string, feed: string, swit
 	if (field.name === 'inset.notchGapMm') return feed === 'inset';
 	if (field.name.startsWith('probe.')) return feed === 'probe';
 	if (field.name === 'patchWidthMm') return shape === 'rectangular';
+	// the pinned dimensions each shape and feed takes (the document's override rules)
+	if (field.name === 'overrides.lengthMm' || field.name === 'overrides.widthMm') return shape === 'rectangular';
+	if (field.name === 'overrides.radiusMm') return shape === 'circular';
+	if (field.name === 'overrides.insetDepthMm') return feed === 'inset';
+	if (field.name === 'overrides.probeOffsetMm') return feed === 'probe' && shape !== 'nearly-square';
+	if (field.name === 'overrides.transformerImpedanceOhm') return feed === 'quarter-wave';
 	return true;
 }
 
@@ -254,6 +270,10 @@ export function documentFromFormValues(values: FormValues): DesignInputDocument 
 			return layer;
 		});
 	}
+	// a laminate named without its εr orders the substrate's (a form cannot leave the datasheet value to the schema)
+	const laminate = doc.laminate as Record<string, unknown> | undefined;
+	const substrate = doc.substrate as Record<string, unknown> | undefined;
+	if (laminate && laminate.relativePermittivity === undefined && Number.isFinite(substrate?.relativePermittivity)) laminate.relativePermittivity = substrate.relativePermittivity;
 	return doc as DesignInputDocument;
 }
 

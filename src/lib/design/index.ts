@@ -12,3 +12,4 @@ export { revisionTree, type TreeRevision, type TreeRow } from './revision-tree';
 export { canonicalJson } from './canonical-json';
 export { buildArrayBenchFiles, arrayBenchDocument, ARRAY_BENCH_FORMATS } from './array-bench';
 export { predictedBand } from './predicted-band';
+export { laminateAsOrdered } from './ordered-laminate';

@@ -82,4 +82,21 @@ describe('editing from a named revision', () => {
 		expect(location).toBe(`/designs/${designId}/r/E`);
 		expect(await parentOf('E')).toBe('C');
 	});
+
+	it('an edit of a tuned revision on a named laminate keeps the pinned dimensions and the laminate the fab notes order', async () => {
+		// demo values: a revision Homing pinned (length, inset depth) on a laminate named in the team's library
+		const tuned = sampleInput({
+			name: 'Fork patch',
+			substrate: { relativePermittivity: 4.31, lossTangent: 0.018, heightMm: 1.6 },
+			laminate: { name: 'Team glass-epoxy 1.6', relativePermittivity: 4.4, lossTangent: 0.02 },
+			overrides: { lengthMm: 28.73, insetDepthMm: 5.41 }
+		});
+		await saveRevision(db, { designId, parentLabel: 'A', userId: team.users.editor.id, raw: tuned }); // F
+		const form = { ...formValuesFromInput(parseDesignInput(tuned)), from: 'F', note: 'note only' };
+		expect(await redirectOf(() => editPage.actions.save(event(`/designs/${designId}/edit?from=F&/save`, form)))).toBe(`/designs/${designId}/r/G`);
+		const saved = await db.selectFrom('revision').select('input').where('design_id', '=', designId).where('label', '=', 'G').executeTakeFirstOrThrow();
+		const input = parseDesignInput(saved.input);
+		expect(input.overrides).toEqual({ lengthMm: 28.73, insetDepthMm: 5.41 });
+		expect(input.laminate).toEqual({ name: 'Team glass-epoxy 1.6', relativePermittivity: 4.4, lossTangent: 0.02 });
+	});
 });

@@ -115,3 +115,49 @@ describe('the band to cover in the editor', () => {
 		expect(designFormFields.find((f) => f.name === 'bandToCover.lowerGHz')?.unit).toBe('GHz');
 	});
 });
+
+describe('pinned dimensions and the ordered laminate in the editor', () => {
+	// A revision Homing tuned and started on a library laminate (demo values): editing it through the form must keep both.
+	const tuned = parseDesignInput({
+		name: 'Tuned feeder patch',
+		frequencyHz: 2.45e9,
+		feed: 'inset',
+		substrate: { relativePermittivity: 4.31, lossTangent: 0.018, heightMm: 1.6 },
+		laminate: { name: 'Team glass-epoxy 1.6', relativePermittivity: 4.4, relativePermittivityTolerance: 0.2, lossTangent: 0.02 },
+		overrides: { lengthMm: 28.73, insetDepthMm: 5.41 }
+	});
+
+	it('a tuned revision on a named laminate → form values → document parses back to the same input', () => {
+		const values = formValuesFromInput(tuned);
+		expect(values['overrides.lengthMm']).toBe('28.73');
+		expect(values['laminate.name']).toBe('Team glass-epoxy 1.6');
+		expect(parseDesignInput(documentFromFormValues(values))).toEqual(tuned);
+	});
+
+	it('blank pinned fields and a blank laminate leave both out of the document', () => {
+		const values = { ...formValuesFromInput(tuned), 'overrides.lengthMm': '', 'overrides.insetDepthMm': '', 'laminate.name': '', 'laminate.relativePermittivity': '', 'laminate.relativePermittivityTolerance': '', 'laminate.lossTangent': '' };
+		const doc = documentFromFormValues(values);
+		expect(doc).not.toHaveProperty('overrides');
+		expect(doc).not.toHaveProperty('laminate');
+	});
+
+	it('a laminate named without its εr orders the substrate εr; junk in the substrate εr is not copied into it', () => {
+		const base = { ...formValuesFromInput(tuned), 'laminate.relativePermittivity': '', 'laminate.relativePermittivityTolerance': '', 'laminate.lossTangent': '' };
+		expect(documentFromFormValues(base).laminate).toEqual({ name: 'Team glass-epoxy 1.6', relativePermittivity: 4.31 });
+		expect(documentFromFormValues({ ...base, 'substrate.relativePermittivity': 'four' }).laminate).toEqual({ name: 'Team glass-epoxy 1.6' });
+	});
+
+	it('offers each pinned dimension only where the document takes it (the schema override rules)', () => {
+		const field = (name: string) => designFormFields.find((f) => f.name === name)!;
+		expect(fieldApplies(field('overrides.lengthMm'), 'rectangular', 'inset')).toBe(true);
+		expect(fieldApplies(field('overrides.lengthMm'), 'circular', 'probe')).toBe(false);
+		expect(fieldApplies(field('overrides.radiusMm'), 'circular', 'probe')).toBe(true);
+		expect(fieldApplies(field('overrides.insetDepthMm'), 'rectangular', 'probe')).toBe(false);
+		expect(fieldApplies(field('overrides.probeOffsetMm'), 'rectangular', 'probe')).toBe(true);
+		expect(fieldApplies(field('overrides.probeOffsetMm'), 'nearly-square', 'probe')).toBe(false);
+		expect(fieldApplies(field('overrides.transformerImpedanceOhm'), 'rectangular', 'quarter-wave')).toBe(true);
+		// a pinned length posted for a circular patch is refused by the schema, at its field
+		const issues = fieldIssues(fromZodError(designInputSchema.safeParse({ ...documentFromFormValues(formValuesFromInput(tuned)), shape: 'circular', feed: 'probe', inset: undefined }).error!).issues);
+		expect(issues.map((i) => i.field)).toContain('overrides.lengthMm');
+	});
+});

@@ -3,6 +3,7 @@ import type { Kysely } from 'kysely';
 import { z } from 'zod';
 import { defaultFeedFor, designNameSchema, patchShapes } from '../../schemas';
 import { InputError, parseWith } from '../../schemas/input-error';
+import { laminateAsOrdered } from '../../design/ordered-laminate';
 import { hzFromGhz } from '../../units';
 import type { Database } from '../db/database';
 import { createDesign, type CreatedDesign } from './create-design';
@@ -32,12 +33,7 @@ export async function startDesign(db: Kysely<Database>, opts: { teamId: string; 
 		legend: {},
 		substrate: { ...laminate.properties },
 		// named, so the fab notes order this laminate by name with its stated values
-		laminate: {
-			name: laminate.name,
-			relativePermittivity: laminate.properties.relativePermittivity,
-			...(laminate.properties.relativePermittivityTolerance > 0 ? { relativePermittivityTolerance: laminate.properties.relativePermittivityTolerance } : {}),
-			lossTangent: laminate.properties.lossTangent
-		}
+		laminate: laminateAsOrdered(laminate.name, laminate.properties)
 	};
 	try {
 		return await createDesign(db, { teamId: opts.teamId, userId: opts.userId, raw, note: `Started on ${laminate.name}` });
