@@ -35,7 +35,8 @@ export interface RevisionCheck {
 	artwork: Artwork | null;
 	/**
 	 * What the page's tables read (the board, the stack, each layer's kind and what it carries): the artwork with one
-	 * shape of each role per layer and at most one drill. Small whatever the design; never drawn.
+	 * shape of each role per layer, its geometry a token circle, and at most one drill. A few kB whatever the design
+	 * (a 64 × 64 array's feed network alone is one 3 MB region); never drawn.
 	 */
 	outline: Artwork;
 	/** The formats that apply to the whole artwork (no holes: no drill file), in registry order. */
@@ -51,14 +52,17 @@ export function shapeCountOf(artwork: Artwork): number {
 	return artwork.layers.reduce((n, l) => n + l.shapes.length, 0) + artwork.drills.length;
 }
 
-function onePerRole(shapes: readonly ArtworkShape[]): ArtworkShape[] {
+/** One shape of each role (in order of first appearance), each standing for its role only: a token circle at the origin. */
+function rolesOf(shapes: readonly ArtworkShape[]): ArtworkShape[] {
 	const seen = new Set<string>();
-	return shapes.filter((s) => (seen.has(s.role) ? false : (seen.add(s.role), true)));
+	return shapes
+		.filter((s) => (seen.has(s.role) ? false : (seen.add(s.role), true)))
+		.map((s) => ({ id: s.id, role: s.role, polarity: s.polarity, geometry: { kind: 'circle', center: [0, 0], diameterMm: 1 } }) as ArtworkShape);
 }
 
-/** The artwork's outline for the tables: every layer and the stack kept, one shape per role and layer, one drill. */
+/** The artwork's outline for the tables: the board, the stack and every layer kept, one token shape per role and layer, one drill. */
 export function artworkOutline(artwork: Artwork): Artwork {
-	return { ...artwork, layers: artwork.layers.map((l) => ({ ...l, shapes: onePerRole(l.shapes) })), drills: artwork.drills.slice(0, 1) };
+	return { ...artwork, layers: artwork.layers.map((l) => ({ ...l, shapes: rolesOf(l.shapes), voids: [] })), drills: artwork.drills.slice(0, 1) };
 }
 
 export function checkRevision(input: RevisionViewInput): RevisionCheck {
