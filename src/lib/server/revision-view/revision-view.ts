@@ -1,6 +1,7 @@
 // The revision page's heavy panels from its load: the check (artwork + design-rule check) and the fab view's read-back
 // run as two work tasks side by side, each within the page's work budget. A panel over the budget, or a design over the
 // drawing limit, comes back as a plainly worded note naming the limit: the page itself always answers.
+import type { Artwork } from '$lib/artwork';
 import type { ReadBackResult } from '$lib/formats/readback';
 import { createExportMeta } from '$lib/formats';
 import type { SizedDesign } from '$lib/rf';
@@ -50,20 +51,40 @@ async function withinBudget<T>(run: () => Promise<T>): Promise<T | null> {
 	}
 }
 
+const inputOf = (req: RevisionViewRequest): RevisionViewInput => ({
+	sized: req.sized,
+	profile: req.profile,
+	recordedProfile: req.recordedProfile,
+	meta: createExportMeta({ designName: req.designName, revisionLabel: req.label, revisionDate: req.revisionDate })
+});
+
+function checkWithinBudget(input: RevisionViewInput, label: string, budgetMs: number): Promise<RevisionCheck | null> {
+	return withinBudget(async () => {
+		const r = await runWork({ type: 'revision-check', input }, { what: `The design-rule check of revision ${label}`, budgetMs });
+		if (r.type !== 'revision-check') throw new Error(`a revision-check task answered with a ${r.type} result`);
+		return r.check;
+	});
+}
+
+function drawingPanel(check: RevisionCheck | null, label: string, budgetMs: number): RevisionPanel<null> {
+	if (!check) return { state: 'over-limit', message: overBudget(`Drawing revision ${label}`, budgetMs) + ' Its files in Downloads are complete.' };
+	if (check.artwork) return { state: 'ready', value: null };
+	return { state: 'over-limit', message: `${tooLarge(label, check.shapeCount, 'draw')} The design-rule check covers every shape, and the files in Downloads are complete.` };
+}
+
+/** Only the drawing (the refusal page): the artwork when it is within the drawing limit and the budget, else the note. */
+export async function loadRevisionDrawing(req: RevisionViewRequest): Promise<{ artwork: Artwork | null; note: string | null }> {
+	const budgetMs = req.budgetMs ?? pageWorkBudgetMs();
+	const check = await checkWithinBudget(inputOf(req), req.label, budgetMs);
+	const panel = drawingPanel(check, req.label, budgetMs);
+	return { artwork: check?.artwork ?? null, note: panel.state === 'over-limit' ? panel.message : null };
+}
+
 export async function loadRevisionView(req: RevisionViewRequest): Promise<RevisionView> {
 	const budgetMs = req.budgetMs ?? pageWorkBudgetMs();
-	const input: RevisionViewInput = {
-		sized: req.sized,
-		profile: req.profile,
-		recordedProfile: req.recordedProfile,
-		meta: createExportMeta({ designName: req.designName, revisionLabel: req.label, revisionDate: req.revisionDate })
-	};
+	const input = inputOf(req);
 	const [check, readBack] = await Promise.all([
-		withinBudget(async () => {
-			const r = await runWork({ type: 'revision-check', input }, { what: `The design-rule check of revision ${req.label}`, budgetMs });
-			if (r.type !== 'revision-check') throw new Error(`a revision-check task answered with a ${r.type} result`);
-			return r.check;
-		}),
+		checkWithinBudget(input, req.label, budgetMs),
 		withinBudget(async () => {
 			const r = await runWork({ type: 'revision-read-back', input }, { what: `The read-back of revision ${req.label}`, budgetMs });
 			if (r.type !== 'revision-read-back') throw new Error(`a revision-read-back task answered with a ${r.type} result`);
@@ -73,11 +94,7 @@ export async function loadRevisionView(req: RevisionViewRequest): Promise<Revisi
 	const checkNote = overBudget(`The design-rule check of revision ${req.label}`, budgetMs) + ' Downloads still check it in full before they are built.';
 	return {
 		check: check ? { state: 'ready', value: check } : { state: 'over-limit', message: checkNote },
-		drawing: !check
-			? { state: 'over-limit', message: overBudget(`Drawing revision ${req.label}`, budgetMs) + ' Its files in Downloads are complete.' }
-			: check.artwork
-				? { state: 'ready', value: null }
-				: { state: 'over-limit', message: `${tooLarge(req.label, check.shapeCount, 'draw')} The design-rule check covers every shape, and the files in Downloads are complete.` },
+		drawing: drawingPanel(check, req.label, budgetMs),
 		fab: !readBack
 			? { state: 'over-limit', message: overBudget(`Reading back revision ${req.label}’s Gerber and drill files`, budgetMs) + ' Every download is still read back in full before it is delivered.' }
 			: readBack.result

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { arrayBenchDocument, gate, prepareSized, readBack } from '../../../../src/lib/design';
 import { applicableFormats, createExportMeta } from '../../../../src/lib/formats';
 import { STANDARD_QUICK_TURN_PROFILE } from '../../../../src/lib/schemas/fab-profile';
-import { loadRevisionView, REVISION_DRAWING_SHAPE_LIMIT } from '../../../../src/lib/server/revision-view';
+import { loadRevisionDrawing, loadRevisionView, REVISION_DRAWING_SHAPE_LIMIT } from '../../../../src/lib/server/revision-view';
 import { artworkOutline, checkRevision, readBackRevision, shapeCountOf } from '../../../../src/lib/server/revision-view/revision-view-work';
 import { previewLayerStyles } from '../../../../src/lib/components/preview-paths';
 import { fabViewCoppers } from '../../../../src/lib/components/fab-view-coppers';
@@ -85,5 +85,17 @@ describe('loadRevisionView (worker threads, the page budget)', () => {
 			expect(panel.state).toBe('over-limit');
 			expect(panel.state === 'over-limit' && panel.message).toMatch(/did not finish within the page’s work budget of 5 ms \(FRINGEFIELD_PAGE_WORK_BUDGET_MS\) and was stopped/);
 		}
+	}, 60_000);
+
+	it('gives the refusal page the artwork to mark, or the note for an array over the limit or the budget', async () => {
+		const small = await loadRevisionDrawing(request(2, 60_000));
+		expect(small.note).toBeNull();
+		expect(small.artwork).toEqual(prepareSized(sizeDocument(arrayBenchDocument(2))).artwork);
+		const large = await loadRevisionDrawing(request(32, 60_000));
+		expect(large.artwork).toBeNull();
+		expect(large.note).toMatch(/too large to draw on this page: .* at most 4 000 shapes/);
+		const late = await loadRevisionDrawing(request(2, 1));
+		expect(late.artwork).toBeNull();
+		expect(late.note).toMatch(/work budget of 1 ms \(FRINGEFIELD_PAGE_WORK_BUDGET_MS\)/);
 	}, 60_000);
 });
