@@ -9,6 +9,19 @@ export function workBudgetMs(): number {
 	return Number.isFinite(raw) && raw > 0 ? raw : DEFAULT_WORK_BUDGET_MS;
 }
 
+/**
+ * Default budget of a page's heavy panels (the revision page's check, drawing and read-back): a page answers within
+ * it, showing the panels that finished and a note naming the budget for the others. An ordinary design needs well
+ * under a second; the largest design the page draws (16 × 16, see REVISION_DRAWING_SHAPE_LIMIT) about 1 s on one core.
+ */
+export const DEFAULT_PAGE_WORK_BUDGET_MS = 10_000;
+
+/** FRINGEFIELD_PAGE_WORK_BUDGET_MS when set to a positive number of milliseconds, else the default. */
+export function pageWorkBudgetMs(): number {
+	const raw = Number(process.env.FRINGEFIELD_PAGE_WORK_BUDGET_MS);
+	return Number.isFinite(raw) && raw > 0 ? raw : DEFAULT_PAGE_WORK_BUDGET_MS;
+}
+
 /** Human form of a budget: "120 s", "2.5 s", "50 ms". */
 export function formatBudget(ms: number): string {
 	if (ms < 1000) return `${Math.round(ms)} ms`;

@@ -3,6 +3,7 @@ import type { Violation } from '$lib/drc';
 import type { SizedDesign } from '$lib/rf';
 import type { FabProfile } from '$lib/schemas/fab-profile';
 import { buildExportBytes, checkRevisionArtwork, type ExportBuildInput, type ExportBuildReport } from '../exports/export-work';
+import { checkRevision, readBackRevision, type RevisionCheck, type RevisionReadBack, type RevisionViewInput } from '../revision-view/revision-view-work';
 import { writeSweepFile, type SweepBuildInput, type SweepFileFacts } from '../sweeps/sweep-work';
 
 export type WorkTask =
@@ -11,9 +12,18 @@ export type WorkTask =
 	/** One download, gate included. */
 	| { type: 'export'; input: ExportBuildInput }
 	/** A sweep plan's file, written to the cache. */
-	| { type: 'sweep'; job: SweepBuildInput };
+	| { type: 'sweep'; job: SweepBuildInput }
+	/** The revision page's artwork and design-rule check. */
+	| { type: 'revision-check'; input: RevisionViewInput }
+	/** The revision page's fab view: its Gerber + drill set read back. */
+	| { type: 'revision-read-back'; input: RevisionViewInput };
 
-export type WorkResult = { type: 'gate'; violations: Violation[] } | { type: 'export'; report: ExportBuildReport } | { type: 'sweep'; facts: SweepFileFacts };
+export type WorkResult =
+	| { type: 'gate'; violations: Violation[] }
+	| { type: 'export'; report: ExportBuildReport }
+	| { type: 'sweep'; facts: SweepFileFacts }
+	| { type: 'revision-check'; check: RevisionCheck }
+	| { type: 'revision-read-back'; readBack: RevisionReadBack };
 
 export async function runTask(task: WorkTask): Promise<WorkResult> {
 	switch (task.type) {
@@ -23,5 +33,9 @@ export async function runTask(task: WorkTask): Promise<WorkResult> {
 			return { type: 'export', report: await buildExportBytes(task.input) };
 		case 'sweep':
 			return { type: 'sweep', facts: await writeSweepFile(task.job) };
+		case 'revision-check':
+			return { type: 'revision-check', check: checkRevision(task.input) };
+		case 'revision-read-back':
+			return { type: 'revision-read-back', readBack: readBackRevision(task.input) };
 	}
 }

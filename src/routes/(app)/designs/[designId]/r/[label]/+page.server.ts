@@ -1,12 +1,13 @@
-// One revision: its stored input and results (the page draws the preview and the DXF from them), the fab profile it is
-// checked against (its recorded one, or ?profile=<id> of the team's others, without saving anything), and its Field
-// check panel: start a check or Homing, cancel one, make a revision from a Homing study's tuned input.
+// One revision: its stored input and results, the fab profile it is checked against (its recorded one, or ?profile=<id>
+// of the team's others, without saving anything), the heavy panels (artwork, design-rule check, fab view read-back)
+// built on worker threads within the page's work budget (issue 13: never on the request thread), and its Field check panel: start a check or Homing, cancel one, make a revision from a Homing study's tuned input.
 import { error, isHttpError, redirect } from '@sveltejs/kit';
 import { formFail } from '$lib/server/http/form-failure';
 import { getDb } from '$lib/server/db';
 import { findDesignWithRevisions } from '$lib/server/designs';
 import { requireDesign } from '$lib/server/designs/design-access';
 import { revisionFabCheck } from '$lib/server/fab-profiles';
+import { loadRevisionView } from '$lib/server/revision-view';
 import { cancelFieldCheck, loadFieldCheckPanel, requireFieldCheck, reviseFromHoming, startFieldCheck } from '$lib/server/field-checks';
 import { findRetuneSource, requireRevision } from '$lib/server/measurements';
 import { copperLayerCountOf, InputError, parseWith } from '$lib/schemas';
@@ -27,15 +28,28 @@ export const load: PageServerLoad = async (event) => {
 		if (err instanceof InputError) error(400, 'The fab profile named in the address is not one of the team’s fab profiles; choose one from the list on the revision page.');
 		throw err;
 	}
+	const [view, retunedFrom, fieldCheckPanel] = await Promise.all([
+		loadRevisionView({
+			sized: revision.results,
+			label: revision.label,
+			designName: design.name,
+			revisionDate: new Date(revision.createdAt).toISOString().slice(0, 10),
+			profile: fabCheck.profile,
+			recordedProfile: fabCheck.recorded
+		}),
+		findRetuneSource(getDb(), revision.id),
+		loadFieldCheckPanel(getDb(), revision, event.url.searchParams.get('check'))
+	]);
 	return {
 		design,
 		revision,
+		view,
 		children,
 		labels: found.revisions.map((r) => r.label),
 		canEdit,
 		fabCheck,
-		retunedFrom: await findRetuneSource(getDb(), revision.id),
-		fieldCheck: { ...(await loadFieldCheckPanel(getDb(), revision, event.url.searchParams.get('check'))), canRun: can(role, 'field-check.start') }
+		retunedFrom,
+		fieldCheck: { ...fieldCheckPanel, canRun: can(role, 'field-check.start') }
 	};
 };
 

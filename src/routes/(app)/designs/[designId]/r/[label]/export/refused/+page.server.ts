@@ -3,6 +3,7 @@ import { error } from '@sveltejs/kit';
 import { can } from '$lib/server/access';
 import { requireDesign } from '$lib/server/designs/design-access';
 import { checkExportTarget, loadExportTarget, WAIVER_MAX_CHARS, WAIVER_MIN_CHARS } from '$lib/server/exports';
+import { loadRevisionDrawing } from '$lib/server/revision-view';
 import { isExportKind } from '$lib/schemas/api';
 import type { PageServerLoad } from './$types';
 
@@ -13,10 +14,22 @@ export const load: PageServerLoad = async (event) => {
 	const format = event.url.searchParams.get('format') ?? 'bundle';
 	if (!isExportKind(format)) error(400, `format must be one of the export kinds, not "${format}"`);
 	const gate = await checkExportTarget(target);
+	// the board with its violations marked, drawn from an artwork built on a worker thread (none to mark: not built)
+	const drawing =
+		gate.violations.length > 0
+			? await loadRevisionDrawing({
+					sized: target.revision.results,
+					label: target.revision.label,
+					designName: target.design.name,
+					revisionDate: new Date(target.revision.createdAt).toISOString().slice(0, 10),
+					profile: gate.profile,
+					recordedProfile: gate.profile
+				})
+			: { artwork: null, note: null };
 	return {
+		drawing,
 		design,
 		label: target.revision.label,
-		results: target.revision.results,
 		format,
 		profile: gate.profile,
 		profileRecorded: gate.profileRecorded,
