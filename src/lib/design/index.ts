@@ -1,6 +1,6 @@
 // Public face of the design room: the one pipeline, and the pure helpers the editor, the server and the CLI share.
 export { prepare, prepareSized, gate, stamped, writeFiles, readBack, holdsFabFiles, bundle, type PreparedDesign, type WriteOptions } from './pipeline';
-export { sizeDocument, type SizingOutcome } from './live-sizing';
+export { sizeDocument, elementCountOfFormValues, LIVE_PREVIEW_ELEMENT_LIMIT, type SizingOutcome } from './live-sizing';
 export * from './design-form-fields';
 export * from './form-units';
 export * from './tolerance-lengths';

@@ -84,6 +84,33 @@ describe('the revision page of the largest array (64 × 64)', () => {
 	}, 300_000);
 });
 
+describe('the editor of the largest array (64 × 64)', () => {
+	it('renders on the server without sizing, drawing or checking it: a note names the live limit, /healthz keeps answering', async () => {
+		const path = `/designs/${bigDesignId}/edit?from=A`;
+		const open = () => fetch(server.origin + path, { headers: { cookie: `ff_session=${ws.owner.sessionId}`, accept: 'text/html' } }).then(async (r) => ({ status: r.status, text: await r.text() }));
+		// five renders one after the other, so the probes see more than one
+		const pages = (async () => {
+			const answers = [];
+			for (let i = 0; i < 5; i++) answers.push(await open());
+			return answers;
+		})();
+		const [busy, idle] = await Promise.all([healthWhile(server.origin, pages), healthWhile(tight.origin, pages)]);
+		const answers = await pages;
+		expect(answers.map((a) => a.status)).toEqual([200, 200, 200, 200, 200]);
+		const { status, text } = answers[0];
+		console.log(`editor probes: ${busy.map((t) => t.toFixed(0)).join(' ')}; idle: ${idle.map((t) => t.toFixed(0)).join(' ')}`);
+		const limitMs = Math.max(HEALTH_LIMIT_MS, 3 * Math.max(...idle));
+		console.log(`64×64 editor: /healthz max ${Math.max(...busy).toFixed(0)} ms over ${busy.length} probes (idle server ${Math.max(...idle).toFixed(0)} ms); HTML ${text.length} chars`);
+		expect(status).toBe(200);
+		expect(Math.max(...busy)).toBeLessThan(limitMs);
+		expect(text).toContain('data-testid="editor-over-live-limit"');
+		expect(text).toMatch(/4,096 elements: the editor draws and checks arrays of at most 256 elements/);
+		// no live preview of 4 096 patches in the page (it was megabytes of SVG)
+		expect(text).not.toContain('data-testid="patch-preview"');
+		expect(text.length).toBeLessThan(500_000);
+	}, 300_000);
+});
+
 describe('an ordinary design (a single patch)', () => {
 	it('gets the preview, the fab view read back and the check, built off the request thread', async () => {
 		const page = await get(server.origin, `/designs/${ws.a.designId}/r/${ws.a.label}`);

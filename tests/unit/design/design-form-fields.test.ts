@@ -13,6 +13,7 @@ import {
 	switchesOfInput,
 	withStackRows
 } from '../../../src/lib/design/design-form-fields';
+import { elementCountOfFormValues, LIVE_PREVIEW_ELEMENT_LIMIT } from '../../../src/lib/design/live-sizing';
 import { designInputSchema, fromZodError, parseDesignInput } from '../../../src/lib/schemas';
 import { layeredCases } from '../../fixtures/designs/layered-cases';
 
@@ -159,5 +160,17 @@ describe('pinned dimensions and the ordered laminate in the editor', () => {
 		// a pinned length posted for a circular patch is refused by the schema, at its field
 		const issues = fieldIssues(fromZodError(designInputSchema.safeParse({ ...documentFromFormValues(formValuesFromInput(tuned)), shape: 'circular', feed: 'probe', inset: undefined }).error!).issues);
 		expect(issues.map((i) => i.field)).toContain('overrides.lengthMm');
+	});
+});
+
+describe('the editor live limit', () => {
+	it('counts the elements the form makes: 1 without the array switch, columns × rows with it, junk as 1', () => {
+		expect(elementCountOfFormValues({ array: '', 'array.columns': '64', 'array.rows': '64' })).toBe(1);
+		expect(elementCountOfFormValues({ array: 'on', 'array.columns': '64', 'array.rows': '64' })).toBe(4096);
+		expect(elementCountOfFormValues({ array: 'on', 'array.columns': '16', 'array.rows': '' })).toBe(16);
+		expect(elementCountOfFormValues({ array: 'on', 'array.columns': 'x', 'array.rows': '-3' })).toBe(1);
+		// 16 × 16 is still drawn live; 32 × 16 is not
+		expect(elementCountOfFormValues({ array: 'on', 'array.columns': '16', 'array.rows': '16' })).toBeLessThanOrEqual(LIVE_PREVIEW_ELEMENT_LIMIT);
+		expect(elementCountOfFormValues({ array: 'on', 'array.columns': '32', 'array.rows': '16' })).toBeGreaterThan(LIVE_PREVIEW_ELEMENT_LIMIT);
 	});
 });
