@@ -17,7 +17,7 @@ const OCTAVE_PACKAGES = '/usr/share/octave/packages';
 const TUTORIAL = 'Tutorials/Simple_Patch_Antenna.m';
 
 /** The shipped tutorial, or null when Debian's octave-openems is not installed. */
-function findTutorial(): string | null {
+export function findTutorial(): string | null {
 	if (!existsSync(OCTAVE_PACKAGES)) return null;
 	const dir = readdirSync(OCTAVE_PACKAGES).find((d) => d.startsWith('openems-') && existsSync(join(OCTAVE_PACKAGES, d, TUTORIAL)));
 	return dir ? join(OCTAVE_PACKAGES, dir, TUTORIAL) : null;
@@ -30,7 +30,7 @@ const octaveRuns = () => !spawnSync('octave', ['--version'], { stdio: 'ignore', 
  * far-field box go (they come after the mesh is fixed and do not change it); the engine runs on one thread and the
  * port's Zin and S11 are written as text. Throws when the shipped file is not the one these edits were written for.
  */
-function headlessScript(tutorial: string): string {
+export function headlessScript(tutorial: string): string {
 	const edits: [string, string][] = [
 		['patch.width  = 32;', "patch.width  = envnum('PW', 32);"],
 		['patch.length = 40;', "patch.length = envnum('PL', 40);"],
