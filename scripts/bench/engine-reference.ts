@@ -158,7 +158,7 @@ export async function engineReferenceStudy(): Promise<string[]> {
 	// our board is 10 mm beyond the 40 × 32 mm patch on every side: 52 mm along the tutorial's resonant x, 60 mm along y
 	const ourBoard = { SW: 52, SL: 60 };
 	const steps: [string, Record<string, number>][] = [
-		['tutorial as shipped (60 × 60 mm board, 4 cells through h, boundaries 70–100 mm away, 2 mm thirds cell, 5 mm cells)', {}],
+		['tutorial as shipped (60 × 60 mm board, 4 cells through h, boundaries 50–100 mm away, 2 mm thirds cell, 5 mm cells)', {}],
 		['tutorial, our board (52 × 60 mm)', ourBoard],
 		['tutorial, our board, 8 cells through h', { ...ourBoard, CELLS: 8 }],
 		['tutorial, our board, 8 cells, boundaries λ0/4 from the board', { ...ourBoard, CELLS: 8, BD: freeSpaceWavelengthMm(TUTORIAL_TARGET_HZ) / 4 }],
