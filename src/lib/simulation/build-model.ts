@@ -213,8 +213,8 @@ export function buildFieldModel(artwork: Artwork, referenceImpedanceOhm: number,
 			// the pin is a conducting wire on the probe's mesh line (the engine's own probe-fed patch feeds a line too:
 			// openEMS 0.0.35, Tutorials/Simple_Patch_Antenna.m). A cylinder of the drill's radius put a cross of conducting
 			// edges at its foot, one cell above the ground, wherever mesh lines lay within its diameter: a capacitor across
-			// the port that depended on the mesh (R8 of the Accuracy table: resistance peak 1.4 % lower, 76 Ω instead of
-			// 35 Ω, S11 at its minimum −15 dB instead of −8 dB; absent on coarser meshes).
+			// the port that grew as the mesh was refined (R8 of the Accuracy table: resistance peak 1.3 % lower at 77 Ω
+			// instead of 35 Ω on the standard mesh, 3.3 % lower at 210 Ω on the 1.5× refined one; absent on coarser meshes).
 			properties.push({ kind: 'pec', name: 'probe-pin', primitives: [{ kind: 'box', fromMm: [px, py, portTopZ], toMm: [px, py, topZMm], priority: PRIORITY_PIN }] });
 			port = { fromMm: [px, py, groundZMm], toMm: [px, py, portTopZ], referenceImpedanceOhm };
 			fixedX.push(px);
