@@ -1,8 +1,9 @@
-// `npm run bench -- --fullwave [--cases a,b] [--skip-homing] [--pattern-only] [--validation]`: Field check timings on the real openEMS,
+// `npm run bench -- --fullwave [--cases a,b] [--skip-homing] [--pattern-only] [--validation] [--engine-reference]`: Field check timings on the real openEMS,
 // printed as Markdown. Standard and accurate mode per case (accurate's shift is the mesh-convergence figure), one Homing
 // study (quick mode), and the far field against the textbook patch (validation: full-wave directivity against the
 // published design example's two-slot directivity) and against the sizing's estimate for every case. `--validation` runs
-// only the measured patches (standard mode, one engine thread) against their published resonances.
+// only the measured patches (standard mode, one engine thread) against their published resonances; `--engine-reference`
+// only the engine authors' own probe-fed patch against ours (scripts/bench/engine-reference.ts; needs Octave).
 import { readFileSync } from 'node:fs';
 import { cpus } from 'node:os';
 import { join } from 'node:path';
@@ -13,6 +14,7 @@ import { size } from '../../src/lib/rf/index.ts';
 import { parseDesignInput } from '../../src/lib/schemas/index.ts';
 import type { FieldCheckResult } from '../../src/lib/schemas/field-check.ts';
 import { impedanceResonance } from '../../src/lib/simulation/index.ts';
+import { engineReferenceStudy } from './engine-reference.ts';
 
 const CASES = ['rectangular-inset', 'rectangular-probe', 'circular-probe'];
 
@@ -37,6 +39,7 @@ export async function runFullwaveBench(argv: string[]): Promise<void> {
 	const cases = casesArg >= 0 ? argv[casesArg + 1].split(',') : CASES;
 	if (argv.includes('--pattern-only')) return console.log((await farFieldStudy(cases)).join('\n'));
 	if (argv.includes('--validation')) return console.log((await measuredPatchStudy()).join('\n'));
+	if (argv.includes('--engine-reference')) return console.log((await engineReferenceStudy()).join('\n'));
 	const lines = [
 		`Field check on openEMS, ${cpus().length} cores (${cpus()[0]?.model ?? 'unknown CPU'}), Node.js ${process.version}, ${new Date().toISOString().slice(0, 10)}.`,
 		'',

@@ -57,7 +57,7 @@ export type ModelPrimitive = ModelBox | ModelPolygon | ModelCylinder | ModelCyli
  * - `dielectric`: εr and the conductivity κ (S/m) that gives the stated tanδ at one frequency:
  *   κ = 2π·f·ε0·εr·tanδ (exact at that frequency only; the model states which).
  * - `sheet`: a zero-thickness conducting sheet of the copper's conductivity and thickness.
- * - `pec`: a perfect conductor (probe pins, barrels).
+ * - `pec`: a perfect conductor (the probe's wire, a connector launch's posts).
  */
 export type ModelProperty =
 	| { readonly kind: 'dielectric'; readonly name: string; readonly relativePermittivity: number; readonly conductivitySPerM: number; readonly primitives: readonly ModelPrimitive[] }

@@ -92,12 +92,31 @@ describe('serializeFieldModel', () => {
 		expect(all(doc, 'ProbeBox').map((p) => p.attributes.Name)).toEqual(['port_ut1', 'port_it1']);
 	});
 
-	it('models a probe as a perfectly conducting pin above a one-cell port, and a line feed without one', () => {
-		const probe = parseXml(serializeFieldModel(fixtureModel('rectangular-probe')));
-		const pin = one(one(probe, 'Metal'), 'Cylinder');
-		expect(Number(pin.attributes.Radius)).toBeCloseTo(0.65, 9); // solid pin: the 1.3 mm finished hole
-		const barrel = one(one(parseXml(serializeFieldModel(fixtureModel('circular-probe'))), 'Metal'), 'Cylinder');
-		expect(Number(barrel.attributes.Radius)).toBeCloseTo(0.65 + 0.025, 9); // plated barrel: its outer wall
+	// the engine's own probe-fed patch (openEMS 0.0.35, Tutorials/Simple_Patch_Antenna.m) feeds the patch on a line from
+	// the ground to the patch: a wire on one mesh line, with no face near the ground that could form a capacitor across the port
+	it.each(['rectangular-probe', 'circular-probe'])('models the probe of %s as a conducting wire on the port’s mesh line above a one-cell port', (name) => {
+		const model = fixtureModel(name);
+		const doc = parseXml(serializeFieldModel(model));
+		const metal = one(doc, 'Metal');
+		expect(all(metal, 'Cylinder')).toHaveLength(0); // the solid pin and the plated barrel alike
+		const wire = one(metal, 'Box');
+		const p1 = one(wire, 'P1').attributes;
+		const p2 = one(wire, 'P2').attributes;
+		const [px, py, groundZ] = model.port.fromMm;
+		for (const p of [p1, p2]) {
+			expect(Number(p.X)).toBeCloseTo(px, 9);
+			expect(Number(p.Y)).toBeCloseTo(py, 9);
+		}
+		expect(model.mesh.xMm.some((x) => Math.abs(x - px) < 1e-9) && model.mesh.yMm.some((y) => Math.abs(y - py) < 1e-9)).toBe(true);
+		// the wire runs from the port's top (one z cell above the ground) to the patch, the top face of the dielectric
+		const firstCell = model.mesh.zMm.find((z) => z > groundZ + 1e-9)! - groundZ;
+		expect(model.port.toMm[2] - groundZ).toBeCloseTo(firstCell, 9);
+		expect(Number(p1.Z)).toBeCloseTo(model.port.toMm[2], 9);
+		const substrate = model.properties.find((p) => p.kind === 'dielectric')!.primitives[0];
+		expect(substrate.kind === 'box' && Number(p2.Z)).toBeCloseTo(substrate.kind === 'box' ? substrate.toMm[2] : NaN, 9);
+	});
+
+	it('models a line feed without a pin', () => {
 		expect(all(parseXml(serializeFieldModel(fixtureModel('rectangular-inset'))), 'Metal')).toHaveLength(0);
 	});
 
