@@ -1,7 +1,7 @@
 // One Field check: design input → model → openEMS subprocess → post-processor → FieldCheckResult.
 import { spawn } from 'node:child_process';
 import { mkdtemp, mkdir, readFile, rm, writeFile } from 'node:fs/promises';
-import { availableParallelism, tmpdir } from 'node:os';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { buildArtwork } from '../../lib/artwork';
 import { size } from '../../lib/rf';
@@ -30,7 +30,7 @@ export interface FieldCheckContext {
 	onProgress?: (progress: FieldCheckProgress) => void;
 	/** Folder for the model and the engine's output (default: a fresh temp folder, removed after). */
 	workDir?: string;
-	/** Engine threads (default FRINGEFIELD_OPENEMS_THREADS, else os.availableParallelism()). */
+	/** Engine threads (default FRINGEFIELD_OPENEMS_THREADS, else DEFAULT_ENGINE_THREADS). */
 	threads?: number;
 	/** Extra mesh refinement over the mode (default 1): a convergence study's knob, not a user option. */
 	refinement?: number;
@@ -52,11 +52,20 @@ interface EngineRun {
 const PROGRESS_LINE = /Timestep:\s*(\d+).*Energy:\s*~?\s*\S+\s*\((-?[\d.]+|-?inf)\s*dB\)/i;
 const FINAL_LINE = /Time for\s+(\d+)\s+iterations/i;
 
-function threadCount(context: FieldCheckContext): number {
+/**
+ * Engine threads when neither the caller nor FRINGEFIELD_OPENEMS_THREADS names a number. One: on the shared 2-core
+ * machine the engine's own speed figure (openEMS 0.0.35, its default multithreaded compressed-SSE engine, the
+ * circular-probe bench case in standard mode, four alternating 24 s runs each under a load average of 5–10) read
+ * 111–168 MC/s (mean 141) with one thread against 97–133 MC/s (mean 109) with two: one thread finished a check about
+ * 1.3× sooner, and a second core is better spent on a second worker (README "Scaling out", BENCHMARKS.md "Job queue").
+ */
+export const DEFAULT_ENGINE_THREADS = 1;
+
+export function threadCount(context: Pick<FieldCheckContext, 'threads'>): number {
 	const fromEnv = Number(process.env.FRINGEFIELD_OPENEMS_THREADS);
 	if (context.threads && context.threads > 0) return Math.floor(context.threads);
 	if (Number.isInteger(fromEnv) && fromEnv > 0) return fromEnv;
-	return availableParallelism();
+	return DEFAULT_ENGINE_THREADS;
 }
 
 /** The reference impedance of the port: the feed line's Z0, or the target (the coax) for a probe. */
