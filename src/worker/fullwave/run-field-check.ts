@@ -131,7 +131,7 @@ async function runEngine(
 			if (m) {
 				timesteps = Number(m[1]);
 				energyDb = m[2].toLowerCase().includes('inf') ? -Infinity : Number(m[2]);
-				// energy falls towards the −40 dB end criterion, not monotonically: report the best reached
+				// energy falls towards the end criterion (−35 dB), not monotonically: report the best reached
 				best = Math.max(best, Math.min(1, energyDb / model.endCriterionDb));
 				report(best, `${progressSpan.label}: timestep ${timesteps}, energy ${energyDb.toFixed(1)} dB`);
 			}
