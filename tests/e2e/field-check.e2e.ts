@@ -47,6 +47,9 @@ test('an editor runs a field check and sees its progress, the S11 plot and the S
 	await expect(panel.getByTestId('field-check-state')).toHaveText('done', { timeout: 200_000 });
 	await expect(bar).toHaveCount(0);
 	await expect(panel.getByTestId('field-check-words')).toContainText(/The simulated patch (resonates|no resonance)/);
+	// the run ended on the engine's energy criterion (END_CRITERION_DB, −35 dB), so it is not flagged as unsettled
+	await expect(panel.getByTestId('field-check-run')).toHaveText(/^\d+ s · energy -\d+ dB$/);
+	await panel.screenshot({ path: '/tmp/ff-field-check-panel.png' });
 	const s11 = panel.getByTestId('field-check-s11');
 	await expect(s11.locator('path[data-trace="fullwave"]')).toHaveAttribute('d', /^M[\d.]+,[\d.]+(L[\d.]+,[\d.]+){50,}/);
 	await expect(s11.locator('path[data-trace="model"]')).toHaveAttribute('d', /^M.+L/);
