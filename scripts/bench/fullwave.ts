@@ -1,15 +1,16 @@
-// `npm run bench -- --fullwave [--cases a,b] [--skip-homing] [--pattern-only] [--validation] [--engine-reference]`: Field check timings on the real openEMS,
-// printed as Markdown. Standard and accurate mode per case (accurate's shift is the mesh-convergence figure), one Homing
+// `npm run bench -- --fullwave [--cases a,b] [--skip-homing] [--skip-pattern] [--pattern-only] [--validation] [--engine-reference]`:
+// Field check timings on the real openEMS, printed as Markdown, with the engine threads, the load average when each run
+// started and the engine speed (cells × timesteps / seconds). Standard and accurate mode per case (accurate's shift is the mesh-convergence figure), one Homing
 // study (quick mode), and the far field against the textbook patch (validation: full-wave directivity against the
 // published design example's two-slot directivity) and against the sizing's estimate for every case. `--validation` runs
 // only the measured patches (standard mode, one engine thread) against their published resonances; `--engine-reference`
 // only the engine authors' own probe-fed patch against ours (scripts/bench/engine-reference.ts; needs Octave).
 import { readFileSync } from 'node:fs';
-import { cpus } from 'node:os';
+import { cpus, loadavg } from 'node:os';
 import { join } from 'node:path';
 import { rootDir } from '../lib/config.ts';
 import { ensureOpenEms } from '../lib/openems.ts';
-import { runFieldCheck, runHoming } from '../../src/worker/fullwave/index.ts';
+import { runFieldCheck, runHoming, threadCount } from '../../src/worker/fullwave/index.ts';
 import { size } from '../../src/lib/rf/index.ts';
 import { parseDesignInput } from '../../src/lib/schemas/index.ts';
 import type { FieldCheckResult } from '../../src/lib/schemas/field-check.ts';
@@ -29,8 +30,14 @@ const validationInput = () => JSON.parse(readFileSync(join(rootDir, 'tests/fixtu
 const ghz = (hz: number | null | undefined) => (hz ? (hz / 1e9).toFixed(4) : '—');
 const pct = (f: number | null | undefined) => (f === null || f === undefined ? '—' : `${(f * 100).toFixed(2)} %`);
 
-function row(name: string, mode: string, r: FieldCheckResult): string {
-	return `| ${name} | ${mode} | ${ghz(r.resonance?.frequencyHz)} | ${pct(r.deviationFraction)} | ${r.resonance ? r.resonance.s11Db.toFixed(1) : '—'} | ${r.mesh.cellCount} | ${r.mesh.timesteps} | ${r.runSeconds.toFixed(0)} | ${r.refinement ? pct(r.refinement.shiftFraction) : '—'} |`;
+/**
+ * One row. Engine speed in million cell-updates per second (MC/s, the engine's own unit; our cell count is the cells
+ * between mesh lines, a little under the engine's count of lines): only for a single run, since accurate mode's
+ * seconds cover two meshes and its cells and timesteps are the refined one's.
+ */
+function row(name: string, mode: string, r: FieldCheckResult, load: number): string {
+	const speed = r.refinement ? '—' : ((r.mesh.cellCount * r.mesh.timesteps) / r.runSeconds / 1e6).toFixed(0);
+	return `| ${name} | ${mode} | ${ghz(r.resonance?.frequencyHz)} | ${pct(r.deviationFraction)} | ${r.resonance ? r.resonance.s11Db.toFixed(1) : '—'} | ${r.mesh.cellCount} | ${r.mesh.timesteps} | ${r.runSeconds.toFixed(0)} | ${threadCount({})} | ${load.toFixed(1)} | ${speed} | ${r.refinement ? pct(r.refinement.shiftFraction) : '—'} |`;
 }
 
 export async function runFullwaveBench(argv: string[]): Promise<void> {
@@ -43,15 +50,16 @@ export async function runFullwaveBench(argv: string[]): Promise<void> {
 	const lines = [
 		`Field check on openEMS, ${cpus().length} cores (${cpus()[0]?.model ?? 'unknown CPU'}), Node.js ${process.version}, ${new Date().toISOString().slice(0, 10)}.`,
 		'',
-		'| case | mode | resonance GHz | from target | S11 at resonance dB | cells | timesteps | seconds | shift on 1.5× refinement |',
-		'| --- | --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: |'
+		'| case | mode | resonance GHz | from target | S11 at resonance dB | cells | timesteps | seconds | threads | load | MC/s | shift on 1.5× refinement |',
+		'| --- | --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |'
 	];
 	for (const name of cases) {
 		for (const mode of ['quick', 'standard', 'accurate'] as const) {
 			if (mode !== 'quick' && argv.includes('--quick-only')) continue;
 			console.error(`${name}, ${mode}…`);
+			const load = loadavg()[0];
 			const r = await runFieldCheck(fixture(name), { mode, budgetSeconds: 7200 }, {});
-			lines.push(row(name, mode, r));
+			lines.push(row(name, mode, r, load));
 			console.error(lines[lines.length - 1]);
 		}
 	}
@@ -63,15 +71,16 @@ export async function runFullwaveBench(argv: string[]): Promise<void> {
 		];
 		for (const study of studies) {
 			console.error(`Homing, ${study.name}, quick…`);
+			const load = loadavg()[0];
 			const started = performance.now();
 			const h = await runHoming(study.input, { mode: 'quick', budgetSeconds: 7200 }, {});
 			const seconds = (performance.now() - started) / 1000;
-			lines.push('', `Homing (quick mode, ${study.name}): ${h.iterations.length} rows, ${h.iterations[h.iterations.length - 1]?.simulations ?? 0} simulations, ${seconds.toFixed(0)} s; ${h.converged ? 'converged' : 'not converged'}: ${h.stoppedBecause}.`);
+			lines.push('', `Homing (quick mode, ${study.name}): ${h.iterations.length} rows, ${h.iterations[h.iterations.length - 1]?.simulations ?? 0} simulations, ${seconds.toFixed(0)} s (${threadCount({})} engine thread(s), load ${load.toFixed(1)} at the start); ${h.converged ? 'converged' : 'not converged'}: ${h.stoppedBecause}.`);
 			lines.push('', '| step | parameter | value mm (Ω for the section) | resonance GHz | S11 at target dB |', '| ---: | --- | ---: | ---: | ---: |');
 			for (const it of h.iterations) lines.push(`| ${it.step} | ${it.parameter} | ${it.value.toFixed(3)} | ${ghz(it.resonanceHz)} | ${it.s11AtTargetDb.toFixed(1)} |`);
 		}
 	}
-	lines.push('', ...(await farFieldStudy(cases)));
+	if (!argv.includes('--skip-pattern')) lines.push('', ...(await farFieldStudy(cases)));
 	console.log(lines.join('\n'));
 }
 

@@ -31,7 +31,8 @@ E/H-plane cuts are in the app and the API, not on the terminal).
                       the iterations and the tuned design-input document (with "overrides")
   --touchstone FILE   also write the simulated S11 as a Touchstone 1.1 file (.s1p)
   --budget-seconds N  wall-clock budget of each engine run (default 900)
-  --threads N         engine threads (default: all cores; or FRINGEFIELD_OPENEMS_THREADS)
+  --threads N         engine threads (default 1, or FRINGEFIELD_OPENEMS_THREADS; one was faster
+                      than two on a shared 2-core machine: measure before raising it)
 
 The results are estimates of a model (sheet copper, no connector, no solder mask): confirm them by
 measuring a built board.

@@ -77,7 +77,7 @@ export const fieldCheckResultSchema = z.strictObject({
 	targetFrequencyHz: z.number().positive(),
 	referenceImpedanceOhm: z.number().positive(),
 	mesh: meshStatisticsSchema,
-	/** Energy left in the model when the run stopped, dB below its peak (−40 or lower is settled). */
+	/** Energy left in the model when the run stopped, dB below its peak (END_CRITERION_DB of src/lib/simulation, −35, or lower is settled; checks stored before it ran to −40). */
 	energyDecayDb: z.number(),
 	runSeconds: z.number().nonnegative(),
 	samples: z.array(s11SampleSchema).min(2),

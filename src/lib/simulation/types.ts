@@ -101,7 +101,7 @@ export interface FieldModel {
 	readonly lossReferenceHz: number;
 	/** Absorbing boundary on all six faces. */
 	readonly boundary: 'MUR' | 'PML_8';
-	/** Stop when the field energy has fallen this far below its peak, dB (−40). */
+	/** Stop when the field energy has fallen this far below its peak, dB (END_CRITERION_DB, −35). */
 	readonly endCriterionDb: number;
 	readonly maxTimesteps: number;
 	readonly mesh: FieldMesh;

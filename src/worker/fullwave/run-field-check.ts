@@ -1,7 +1,7 @@
 // One Field check: design input → model → openEMS subprocess → post-processor → FieldCheckResult.
 import { spawn } from 'node:child_process';
 import { mkdtemp, mkdir, readFile, rm, writeFile } from 'node:fs/promises';
-import { availableParallelism, tmpdir } from 'node:os';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { buildArtwork } from '../../lib/artwork';
 import { size } from '../../lib/rf';
@@ -30,7 +30,7 @@ export interface FieldCheckContext {
 	onProgress?: (progress: FieldCheckProgress) => void;
 	/** Folder for the model and the engine's output (default: a fresh temp folder, removed after). */
 	workDir?: string;
-	/** Engine threads (default FRINGEFIELD_OPENEMS_THREADS, else os.availableParallelism()). */
+	/** Engine threads (default FRINGEFIELD_OPENEMS_THREADS, else DEFAULT_ENGINE_THREADS). */
 	threads?: number;
 	/** Extra mesh refinement over the mode (default 1): a convergence study's knob, not a user option. */
 	refinement?: number;
@@ -48,15 +48,35 @@ interface EngineRun {
 	pattern: FieldCheckResult['pattern'];
 }
 
-/** The engine's progress line: "[@ 40s] Timestep: 10846 || Speed: 18.4 MC/s (…) || Energy: ~5.43e-16 (-18.13dB)". */
-const PROGRESS_LINE = /Timestep:\s*(\d+).*Energy:\s*~?\s*\S+\s*\((-?[\d.]+|-?inf)\s*dB\)/i;
+/**
+ * The engine's progress line: "[@ 40s] Timestep: 10846 || Speed: 18.4 MC/s (…) || Energy: ~5.43e-16 (-18.13dB)"; while
+ * the pulse is still going in it prints "(- 0.00dB)", with a space.
+ */
+const PROGRESS_LINE = /Timestep:\s*(\d+).*Energy:\s*~?\s*\S+\s*\((-?\s*[\d.]+|-?\s*inf)\s*dB\)/i;
+/** The engine's start-up line "Excitation signal length is: 6806 timesteps (3.89792e-09s)". */
+const EXCITATION_LINE = /Excitation signal length is:\s*(\d+)\s*timesteps/i;
+/**
+ * The share of a run's progress bar given to the excitation pulse (timesteps over the pulse's length); the rest follows
+ * the energy's fall towards the end criterion. The engine prints progress only every few seconds, and the energy stays
+ * at 0 dB until the pulse is over: without this share a run of ten seconds showed no progress before it ended.
+ */
+const EXCITATION_PROGRESS_SHARE = 0.2;
 const FINAL_LINE = /Time for\s+(\d+)\s+iterations/i;
 
-function threadCount(context: FieldCheckContext): number {
+/**
+ * Engine threads when neither the caller nor FRINGEFIELD_OPENEMS_THREADS names a number. One: on the shared 2-core
+ * machine the engine's own speed figure (openEMS 0.0.35, its default multithreaded compressed-SSE engine, the
+ * circular-probe bench case in standard mode, four alternating 24 s runs each under a load average of 5–10) read
+ * 111–168 MC/s (mean 141) with one thread against 97–133 MC/s (mean 109) with two: one thread finished a check about
+ * 1.3× sooner, and a second core is better spent on a second worker (README "Scaling out", BENCHMARKS.md "Job queue").
+ */
+export const DEFAULT_ENGINE_THREADS = 1;
+
+export function threadCount(context: Pick<FieldCheckContext, 'threads'>): number {
 	const fromEnv = Number(process.env.FRINGEFIELD_OPENEMS_THREADS);
 	if (context.threads && context.threads > 0) return Math.floor(context.threads);
 	if (Number.isInteger(fromEnv) && fromEnv > 0) return fromEnv;
-	return availableParallelism();
+	return DEFAULT_ENGINE_THREADS;
 }
 
 /** The reference impedance of the port: the feed line's Z0, or the target (the coax) for a probe. */
@@ -92,6 +112,7 @@ async function runEngine(
 
 	let energyDb = 0;
 	let timesteps = 0;
+	let excitationTimesteps = 0;
 	let best = 0;
 	const child = spawn(engineBinary(), ['model.xml', `--numThreads=${threadCount(context)}`], { cwd: dir, detached: true, stdio: ['ignore', 'pipe', 'pipe'] });
 	const killGroup = () => {
@@ -118,12 +139,17 @@ async function runEngine(
 		const lines = tail.split(/\r?\n|\r/);
 		tail = lines.pop() ?? '';
 		for (const line of lines) {
+			const e = EXCITATION_LINE.exec(line);
+			if (e) excitationTimesteps = Number(e[1]);
 			const m = PROGRESS_LINE.exec(line);
 			if (m) {
 				timesteps = Number(m[1]);
-				energyDb = m[2].toLowerCase().includes('inf') ? -Infinity : Number(m[2]);
-				// energy falls towards the −40 dB end criterion, not monotonically: report the best reached
-				best = Math.max(best, Math.min(1, energyDb / model.endCriterionDb));
+				const text = m[2].replace(/\s/g, '');
+				energyDb = text.toLowerCase().includes('inf') ? -Infinity : Number(text);
+				// the pulse, then the energy's fall towards the end criterion (−35 dB), which is not monotonic: report the best reached
+				const pulse = excitationTimesteps > 0 ? Math.min(1, timesteps / excitationTimesteps) : 0;
+				const decay = Math.min(1, Math.max(0, energyDb / model.endCriterionDb));
+				best = Math.max(best, EXCITATION_PROGRESS_SHARE * pulse + (1 - EXCITATION_PROGRESS_SHARE) * decay);
 				report(best, `${progressSpan.label}: timestep ${timesteps}, energy ${energyDb.toFixed(1)} dB`);
 			}
 			const f = FINAL_LINE.exec(line);
