@@ -22,9 +22,10 @@ type Drained = 'nothing-left' | 'drained' | 'gave-up';
 
 async function drain(request: Request, waitMs: number): Promise<Drained> {
 	if (BODILESS.has(request.method) || request.body === null) return 'nothing-left';
-	// Read in full already (text(), json(), formData(), arrayBuffer() read to the end before they resolve).
-	if (request.bodyUsed && !request.body.locked) return 'nothing-left';
-	// A reader someone took and left: the rest cannot be reached from here.
+	// Read already: text(), json(), formData() and arrayBuffer() read to the end before they resolve (and keep the
+	// stream locked); a route reading the stream itself reads it to its end.
+	if (request.bodyUsed) return 'nothing-left';
+	// A reader someone took and never used: the body cannot be reached from here.
 	if (request.body.locked) return 'gave-up';
 	const reader = request.body.getReader();
 	let timer: ReturnType<typeof setTimeout> | undefined;
@@ -49,7 +50,7 @@ async function drain(request: Request, waitMs: number): Promise<Drained> {
 
 /**
  * `response`, once the request's unread body has been read to its end; with `connection: close` when it could not
- * be (the client stopped sending, or a reader was left holding it).
+ * be (the client stopped sending, or a reader was taken and left unused).
  */
 export async function afterUnreadBody(request: Request, response: Response, waitMs: number = UNREAD_BODY_WAIT_MS): Promise<Response> {
 	if ((await drain(request, waitMs)) !== 'gave-up') return response;
