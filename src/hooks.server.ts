@@ -3,11 +3,12 @@
 // every unexpected error: logged with an id support can find. At start: the app's mode (demo or production),
 // decided once; a production server without what it needs stops with one line naming the setting.
 import { isHttpError, json, type Handle, type HandleServerError, type ServerInit } from '@sveltejs/kit';
-import { building } from '$app/environment';
+import { building, dev } from '$app/environment';
 import { SettingError, startAppMode } from '$lib/server/app-mode';
 import { identify } from '$lib/server/auth/request-identity';
 import { DATABASE_BUSY_MESSAGE, DATABASE_UNAVAILABLE_MESSAGE, isDatabaseBusy, isDatabaseUnavailable } from '$lib/server/db';
 import { refuseUnreadableForm, refuseUnstorableAddress, refuseUnstorableJson } from '$lib/server/http/form-body-guard';
+import { refuseCrossSiteForm } from '$lib/server/http/cross-site-form';
 import { afterUnreadBody } from '$lib/server/http/unread-body';
 
 const RETRY_AFTER_SECONDS = '5';
@@ -62,6 +63,9 @@ export const init: ServerInit = () => {
 };
 
 async function answer({ event, resolve }: Parameters<Handle>[0]): Promise<Response> {
+	// before anything else, as SvelteKit did (off in `vite dev`, as SvelteKit's own)
+	const crossSite = dev ? null : refuseCrossSiteForm(event.request, event.url);
+	if (crossSite) return secure(crossSite);
 	try {
 		const identity = event.url.pathname === '/healthz' ? { user: null, sessionId: null, apiToken: null } : await identify(event.request, event.cookies);
 		event.locals.user = identity.user;
