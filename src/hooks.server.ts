@@ -3,17 +3,25 @@
 // every unexpected error: logged with an id support can find. At start: the app's mode (demo or production),
 // decided once; a production server without what it needs stops with one line naming the setting.
 import { isHttpError, json, type Handle, type HandleServerError, type ServerInit } from '@sveltejs/kit';
-import { building } from '$app/environment';
+import { building, dev } from '$app/environment';
 import { SettingError, startAppMode } from '$lib/server/app-mode';
 import { identify } from '$lib/server/auth/request-identity';
-import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from '$lib/server/db';
+import { DATABASE_BUSY_MESSAGE, DATABASE_UNAVAILABLE_MESSAGE, isDatabaseBusy, isDatabaseUnavailable } from '$lib/server/db';
 import { refuseUnreadableForm, refuseUnstorableAddress, refuseUnstorableJson } from '$lib/server/http/form-body-guard';
+import { refuseCrossSiteForm } from '$lib/server/http/cross-site-form';
+import { afterUnreadBody } from '$lib/server/http/unread-body';
 
 const RETRY_AFTER_SECONDS = '5';
 
-function unavailable(pathname: string): Response | null {
+/** The 503's own sentence: unreachable, or did not answer in time. */
+function unavailableMessage(err: unknown): string {
+	if (isHttpError(err) && err.status === 503) return err.body.message;
+	return isDatabaseBusy(err) ? DATABASE_BUSY_MESSAGE : DATABASE_UNAVAILABLE_MESSAGE;
+}
+
+function unavailable(pathname: string, err: unknown): Response | null {
 	if (!pathname.startsWith('/api/')) return null;
-	return json({ error: DATABASE_UNAVAILABLE_MESSAGE, issues: [] }, { status: 503, headers: { 'retry-after': RETRY_AFTER_SECONDS } });
+	return json({ error: unavailableMessage(err), issues: [] }, { status: 503, headers: { 'retry-after': RETRY_AFTER_SECONDS } });
 }
 
 /**
@@ -54,7 +62,10 @@ export const init: ServerInit = () => {
 	}
 };
 
-export const handle: Handle = async ({ event, resolve }) => {
+async function answer({ event, resolve }: Parameters<Handle>[0]): Promise<Response> {
+	// before anything else, as SvelteKit did (off in `vite dev`, as SvelteKit's own)
+	const crossSite = dev ? null : refuseCrossSiteForm(event.request, event.url);
+	if (crossSite) return secure(crossSite);
 	try {
 		const identity = event.url.pathname === '/healthz' ? { user: null, sessionId: null, apiToken: null } : await identify(event.request, event.cookies);
 		event.locals.user = identity.user;
@@ -67,16 +78,29 @@ export const handle: Handle = async ({ event, resolve }) => {
 	} catch (err) {
 		// identify() could not reach PostgreSQL: a JSON 503 for the API; pages get kit's 503 error page.
 		if (isDatabaseUnavailable(err)) {
-			const api = unavailable(event.url.pathname);
+			const api = unavailable(event.url.pathname, err);
 			if (api) return secure(api);
 		}
 		throw err;
 	}
+}
+
+// Whatever the answer, a body it did not read is read first (http/unread-body.ts): left half read, it would stall
+// the next request on the same kept-alive connection.
+export const handle: Handle = async (input) => {
+	let response: Response;
+	try {
+		response = await answer(input);
+	} catch (err) {
+		await afterUnreadBody(input.event.request, new Response(null));
+		throw err;
+	}
+	return afterUnreadBody(input.event.request, response);
 };
 
 export const handleError: HandleServerError = ({ error, event, status }) => {
 	const errorId = crypto.randomUUID();
-	if (isDatabaseUnavailable(error) || (isHttpError(error) && error.status === 503)) return { message: DATABASE_UNAVAILABLE_MESSAGE, errorId };
+	if (isDatabaseUnavailable(error) || (isHttpError(error) && error.status === 503)) return { message: unavailableMessage(error), errorId };
 	// SvelteKit's own refusals (404 no such route or action, 415 not form data, 413 body too large) say what was wrong.
 	if (status < 500) return { message: status === 404 ? 'Not found' : error instanceof Error && error.message ? error.message : 'The request was refused', errorId };
 	console.error(`[${errorId}] ${event.request.method} ${event.url.pathname}:`, error);

@@ -8,7 +8,7 @@ import type { Database } from './database';
 import { toDataExceptionRefusal, toDatabaseUnavailable } from './database-unavailable';
 
 export type { Database } from './database';
-export { isDatabaseUnavailable, DATABASE_UNAVAILABLE_MESSAGE } from './database-unavailable';
+export { isDatabaseBusy, isDatabaseUnavailable, DATABASE_UNAVAILABLE_MESSAGE, DATABASE_BUSY_MESSAGE } from './database-unavailable';
 
 let pool: pg.Pool | undefined;
 let db: Kysely<Database> | undefined;
@@ -57,6 +57,21 @@ function guardPool(p: pg.Pool): pg.Pool {
 	return p;
 }
 
+/**
+ * No statement of this process waits on PostgreSQL for ever: one that runs past `DATABASE_STATEMENT_TIMEOUT_MS`, or
+ * waits past `DATABASE_LOCK_TIMEOUT_MS` for a row or table lock, is stopped by the server (PostgreSQL docs §20.11.1,
+ * statement_timeout and lock_timeout) and answered 503 "did not answer in time". 0 turns either off.
+ */
+export const DATABASE_TIMEOUT_DEFAULTS = { statementTimeoutMs: 20_000, lockTimeoutMs: 10_000 } as const;
+
+function timeoutMs(name: string, fallback: number): number {
+	const raw = process.env[name];
+	if (raw === undefined || raw === '') return fallback;
+	const ms = Number(raw);
+	if (!Number.isInteger(ms) || ms < 0) throw new Error(`${name}: ${JSON.stringify(raw)} is not a whole number of milliseconds (0 turns the timeout off)`);
+	return ms;
+}
+
 export function getPool(): pg.Pool {
 	if (!pool) {
 		pool = guardPool(
@@ -64,7 +79,10 @@ export function getPool(): pg.Pool {
 				connectionString: databaseUrl(),
 				max: Number(process.env.DATABASE_POOL_SIZE || 10),
 				connectionTimeoutMillis: 5000,
-				idleTimeoutMillis: 30_000
+				idleTimeoutMillis: 30_000,
+				// pg sends these as session settings at connect; 0 (off) is left out, which is PostgreSQL's own default
+				statement_timeout: timeoutMs('DATABASE_STATEMENT_TIMEOUT_MS', DATABASE_TIMEOUT_DEFAULTS.statementTimeoutMs) || undefined,
+				lock_timeout: timeoutMs('DATABASE_LOCK_TIMEOUT_MS', DATABASE_TIMEOUT_DEFAULTS.lockTimeoutMs) || undefined
 			})
 		);
 		// A dropped connection must not crash the process; the next query reconnects. pg-pool listens for
