@@ -272,8 +272,8 @@ export function documentFromFormValues(values: FormValues): DesignInputDocument 
 	}
 	// a laminate named without its εr orders the substrate's (a form cannot leave the datasheet value to the schema)
 	const laminate = doc.laminate as Record<string, unknown> | undefined;
-	const substrate = doc.substrate as Record<string, unknown> | undefined;
-	if (laminate && laminate.relativePermittivity === undefined && Number.isFinite(substrate?.relativePermittivity)) laminate.relativePermittivity = substrate.relativePermittivity;
+	const substrateEr = (doc.substrate as Record<string, unknown> | undefined)?.relativePermittivity;
+	if (laminate && laminate.relativePermittivity === undefined && Number.isFinite(substrateEr)) laminate.relativePermittivity = substrateEr;
 	return doc as DesignInputDocument;
 }
 

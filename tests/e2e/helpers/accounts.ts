@@ -1,6 +1,7 @@
 // Reusable steps for e2e journeys: sign up, sign in and out, make a team, invite, and read the caught mail.
 import { expect, type APIRequestContext, type Page } from '@playwright/test';
 import { randomBytes } from 'node:crypto';
+import { fillHydrated } from './forms';
 
 export const E2E_PASSWORD = 'long enough e2e passphrase';
 
@@ -25,15 +26,11 @@ export async function signUp(page: Page, who: E2ePerson, path = '/signup'): Prom
 	if (path) await page.goto(path);
 	await expect(page.getByLabel('Your name')).toBeVisible();
 	const fromInvite = new URL(page.url()).searchParams.has('invite');
-	// Typing before the page has hydrated can be wiped by hydration (a CI run met an empty name): fill until the fields hold it.
-	await expect(async () => {
-		await page.getByLabel('Your name').fill(who.name);
-		await page.getByLabel('E-mail').fill(who.email);
-		await page.getByLabel('Password').fill(who.password);
-		await page.waitForLoadState('networkidle');
-		await expect(page.getByLabel('Your name')).toHaveValue(who.name, { timeout: 500 });
-		await expect(page.getByLabel('E-mail')).toHaveValue(who.email, { timeout: 500 });
-	}).toPass({ timeout: 15_000 });
+	await fillHydrated([
+		[page.getByLabel('Your name'), who.name],
+		[page.getByLabel('E-mail'), who.email],
+		[page.getByLabel('Password'), who.password]
+	]);
 	await page.getByRole('button', { name: /Create account/ }).click();
 	await expect(page.getByTestId('signup-sent')).toContainText(`Check your inbox at ${who.email}`);
 	const mail = await latestMailTo(page.request, who.email, 10_000, CONFIRM_SUBJECT);

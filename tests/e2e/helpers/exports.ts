@@ -1,6 +1,7 @@
 // Journey steps shared by the download and API e2e files: a fresh person, a team, a design, a token.
 import { expect, type Page } from '@playwright/test';
 import { signUp as signUpConfirmed } from './accounts';
+import { fillHydrated } from './forms';
 
 export function uniqueSuffix(): string {
 	return `${Date.now().toString(36)}${Math.floor(Math.random() * 1e6).toString(36)}`;
@@ -13,7 +14,7 @@ export async function signUp(page: Page, who: { name: string; email: string; pas
 
 export async function makeTeam(page: Page, name: string): Promise<string> {
 	await page.goto('/teams');
-	await page.getByLabel('Team name').fill(name);
+	await fillHydrated([[page.getByLabel('Team name'), name]]);
 	await page.getByRole('button', { name: 'Make team' }).click();
 	await page.waitForURL(/\/teams\/[^/?]+$/);
 	return new URL(page.url()).pathname.split('/').pop()!;
@@ -23,7 +24,7 @@ export async function makeTeam(page: Page, name: string): Promise<string> {
 export async function newDesign(page: Page, name: string): Promise<string> {
 	await page.goto('/designs');
 	const form = page.locator('form[action="?/create"]');
-	await form.getByLabel('Name').fill(name);
+	await fillHydrated([[form.getByLabel('Name'), name]]);
 	await form.getByRole('button', { name: 'Create design' }).click();
 	await page.waitForURL(/\/designs\/[^/]+\/r\/A$/);
 	return new URL(page.url()).pathname.split('/')[2];
@@ -31,7 +32,7 @@ export async function newDesign(page: Page, name: string): Promise<string> {
 
 export async function makeToken(page: Page, name: string): Promise<string> {
 	await page.goto('/settings/tokens');
-	await page.getByLabel('Name').fill(name);
+	await fillHydrated([[page.getByLabel('Name'), name]]);
 	await page.getByRole('button', { name: 'Make token' }).click();
 	const secret = page.getByTestId('token-secret');
 	await expect(secret).toBeVisible();

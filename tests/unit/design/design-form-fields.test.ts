@@ -158,7 +158,8 @@ describe('pinned dimensions and the ordered laminate in the editor', () => {
 		expect(fieldApplies(field('overrides.probeOffsetMm'), 'nearly-square', 'probe')).toBe(false);
 		expect(fieldApplies(field('overrides.transformerImpedanceOhm'), 'rectangular', 'quarter-wave')).toBe(true);
 		// a pinned length posted for a circular patch is refused by the schema, at its field
-		const issues = fieldIssues(fromZodError(designInputSchema.safeParse({ ...documentFromFormValues(formValuesFromInput(tuned)), shape: 'circular', feed: 'probe', inset: undefined }).error!).issues);
+		const circular = { ...documentFromFormValues(formValuesFromInput(tuned)), shape: 'circular', feed: 'probe', inset: undefined };
+		const issues = fieldIssues(fromZodError(designInputSchema.safeParse(circular).error!, circular).issues);
 		expect(issues.map((i) => i.field)).toContain('overrides.lengthMm');
 	});
 });
