@@ -1,7 +1,7 @@
 // `npm run bench -- --jobs`: field checks per minute through the pg-boss queue with 1 and 2 worker processes, each
 // `node --import tsx src/worker/main.ts` as `npm run worker` starts it, running the real engine (openEMS, quick mesh) on
 // a low-Q demo patch; and the queue's own ceiling with an engine that returns at once. Writes the "## Job queue"
-// section of BENCHMARKS.md. On one machine, two workers share its cores: each engine then gets half the threads.
+// section of BENCHMARKS.md. Each worker's engine runs the default one thread; on one machine, two workers share its cores.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { availableParallelism } from 'node:os';
 import pg from 'pg';
@@ -96,7 +96,8 @@ export async function runJobsBench(): Promise<void> {
 	const jobs = Number(process.env.FRINGEFIELD_BENCH_JOBS || 4);
 	try {
 		for (const workers of [1, 2]) {
-			const threads = String(Math.max(1, Math.floor(cores / workers)));
+			// each worker's engine on the product's default: one thread (src/worker/fullwave/run-field-check.ts threadCount)
+			const threads = '1';
 			console.log(`real engine: ${jobs} quick checks, ${workers} worker(s), ${threads} engine thread(s) each…`);
 			const seconds = await runRound({ databaseUrl, designId: design.id, workers, jobs, entry: ['src/worker/main.ts'], env: { FRINGEFIELD_OPENEMS_THREADS: threads } });
 			rows.push({ work: 'field check, openEMS quick mesh', workers, jobs, seconds, perMinute: (jobs * 60) / seconds, note: `${threads} engine thread(s) per worker` });
@@ -124,7 +125,7 @@ export async function runJobsBench(): Promise<void> {
 		'## Job queue',
 		`Written by \`npm run bench -- --jobs\` on ${new Date().toISOString().slice(0, 10)} (${cores} cores): field checks queued first, then 1 or 2 worker processes (\`node --import tsx src/worker/main.ts\`, as \`npm run worker\`) started on the same PostgreSQL; the clock runs from the workers' start to the last stored result.\n\n${table}\n\n` +
 			`- Two workers on this one machine ran ${(two.perMinute / one.perMinute).toFixed(2)}× the checks per minute of one. They share the same ${cores} cores, so the gain is not more hardware: one check alone took ${alone1.seconds.toFixed(1)} s with 1 engine thread and ${aloneN.seconds.toFixed(1)} s with ${cores}, i.e. on this (shared) machine one engine does not turn a second thread into speed, while a second worker keeps the second core busy. Set \`FRINGEFIELD_OPENEMS_THREADS\` and the number of workers per machine from such a measurement on your own hardware; workers on other machines add their cores (README "Scaling out").\n` +
-			'- The instant-engine rows are the queue\'s own cost per job (taking it, heartbeats, one transaction to store and complete), with the workers\' start-up (a few seconds of tsx) inside the wall time; well under a second per job, small beside a full-wave run of tens of seconds. A second worker does not speed them up: the cost is PostgreSQL round trips and polling, not CPU.\n'
+			'- The instant-engine rows are the queue\'s own cost per job (taking it, heartbeats, one transaction to store and complete), with the workers\' start-up (tsx) inside the wall time; well under a second per job, small beside a full-wave run of tens of seconds. A second worker does not speed them up: the cost is PostgreSQL round trips and polling, not CPU.\n'
 	);
 	console.log('written to BENCHMARKS.md');
 }
