@@ -3,12 +3,13 @@
 // Node's HTTP server closes an idle connection after 5 s unless told otherwise (Node.js docs, server.keepAliveTimeout);
 // undici, the fetch of Node, keeps one for the server's stated timeout less 1 s (undici docs, keepAliveTimeoutThreshold).
 import { readFileSync } from 'node:fs';
-import { connect, type Socket } from 'node:net';
+import { connect } from 'node:net';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { SERVER_ENV_DEFAULTS, serverEnv } from '../../../scripts/lib/server-env';
 import { closeDb } from '../../../src/lib/server/db';
 import { rootDir, startBuiltServer, type BuiltServer } from './helpers/built-server';
+import { exchange } from './helpers/raw-exchange';
 
 let server: BuiltServer;
 beforeAll(async () => {
@@ -19,42 +20,19 @@ afterAll(async () => {
 	await closeDb();
 });
 
-/** Sends one HTTP/1.1 request on the socket and resolves to the whole answer's head and body once it has arrived. */
-function exchange(socket: Socket, request: string): Promise<string> {
-	return new Promise((resolve, reject) => {
-		if (socket.destroyed || socket.readyState !== 'open') return reject(new Error('the server had closed the connection before the request was sent'));
-		let text = '';
-		const onData = (chunk: Buffer) => {
-			text += chunk.toString('latin1');
-			const headEnd = text.indexOf('\r\n\r\n');
-			const length = /content-length: *(\d+)/i.exec(text)?.[1];
-			if (headEnd >= 0 && length !== undefined && text.length >= headEnd + 4 + Number(length)) done(() => resolve(text));
-		};
-		const onClose = () => done(() => reject(new Error(`the server closed the connection${text ? ` after ${JSON.stringify(text.slice(0, 80))}` : ' without an answer'}`)));
-		const done = (settle: () => void) => {
-			socket.off('data', onData);
-			socket.off('close', onClose);
-			settle();
-		};
-		socket.on('data', onData);
-		socket.once('close', onClose);
-		socket.write(request);
-	});
-}
-
 describe('kept-alive connections', () => {
 	it('are held longer than Node’s 5 s default: a POST sent after 6 s idle on the same connection is answered', async () => {
 		const { port, hostname } = new URL(server.origin);
 		const socket = connect(Number(port), hostname);
 		await new Promise((r) => socket.once('connect', r));
 		try {
-			const first = await exchange(socket, `GET /healthz HTTP/1.1\r\nHost: ${hostname}:${port}\r\nConnection: keep-alive\r\n\r\n`);
+			const first = (await exchange(socket, `GET /healthz HTTP/1.1\r\nHost: ${hostname}:${port}\r\nConnection: keep-alive\r\n\r\n`)).head;
 			expect(first).toMatch(/^HTTP\/1\.1 200/);
 			// the server says how long it keeps the connection, so clients can close first
 			expect(first).toMatch(new RegExp(`keep-alive: timeout=${SERVER_ENV_DEFAULTS.KEEP_ALIVE_TIMEOUT}`, 'i'));
 			await new Promise((r) => setTimeout(r, 6_000));
 			const body = '{}';
-			const second = await exchange(socket, `POST /api/v1/size HTTP/1.1\r\nHost: ${hostname}:${port}\r\nContent-Type: application/json\r\nContent-Length: ${body.length}\r\nConnection: keep-alive\r\n\r\n${body}`);
+			const second = (await exchange(socket, `POST /api/v1/size HTTP/1.1\r\nHost: ${hostname}:${port}\r\nContent-Type: application/json\r\nContent-Length: ${body.length}\r\nConnection: keep-alive\r\n\r\n`, body)).head;
 			// an answer at all is the point: 401 without a token
 			expect(second).toMatch(/^HTTP\/1\.1 401/);
 		} finally {

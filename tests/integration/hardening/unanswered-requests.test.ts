@@ -12,6 +12,7 @@ import { closeDb, DATABASE_BUSY_MESSAGE, getDb } from '../../../src/lib/server/d
 import { cancelOpenFieldChecks } from '../jobs/helpers/open-checks';
 import { api } from './helpers/client';
 import { startBuiltServer, type BuiltServer } from './helpers/built-server';
+import { exchange } from './helpers/raw-exchange';
 import { createHardeningWorkspace, type HardeningWorkspace } from './helpers/workspace';
 
 /** A short lock timeout for this file's server, so the lock test takes about a second. */
@@ -30,36 +31,6 @@ afterAll(async () => {
 	if (ws) await cancelOpenFieldChecks(getDb(), ws.a.teamId);
 	await closeDb();
 });
-
-interface Exchange {
-	head: string;
-	body: string;
-}
-
-/** Sends `head` then `body` on the socket; resolves with the answer once its Content-Length has arrived, rejects after `waitMs`. */
-function exchange(socket: Socket, head: string, body: string | Uint8Array, waitMs = ANSWER_WAIT_MS): Promise<Exchange> {
-	return new Promise((resolve, reject) => {
-		let text = '';
-		const onData = (chunk: Buffer) => {
-			text += chunk.toString('utf8');
-			const headEnd = text.indexOf('\r\n\r\n');
-			const length = /content-length: *(\d+)/i.exec(text)?.[1];
-			if (headEnd >= 0 && length !== undefined && Buffer.byteLength(text.slice(headEnd + 4)) >= Number(length)) done(() => resolve({ head: text.slice(0, headEnd), body: text.slice(headEnd + 4) }));
-		};
-		const onClose = () => done(() => reject(new Error(`the server closed the connection${text ? ` after ${JSON.stringify(text.slice(0, 80))}` : ' without an answer'}`)));
-		const timer = setTimeout(() => done(() => reject(new Error(`no answer within ${waitMs} ms`))), waitMs);
-		const done = (settle: () => void) => {
-			clearTimeout(timer);
-			socket.off('data', onData);
-			socket.off('close', onClose);
-			settle();
-		};
-		socket.on('data', onData);
-		socket.once('close', onClose);
-		socket.write(head);
-		socket.write(body);
-	});
-}
 
 function post(path: string, contentType: string, body: string | Uint8Array, extra = ''): string {
 	const { host } = new URL(server.origin);
