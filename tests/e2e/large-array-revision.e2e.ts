@@ -38,6 +38,16 @@ test('the largest array’s revision page shows its check and says plainly what 
 	// the array-factor plot comes from the stored sizing, drawn whatever the size
 	await expect(page.getByTestId('array-pattern')).toBeVisible();
 	await page.screenshot({ path: '/tmp/ff-revpage-large-array.png', fullPage: true });
+
+	// its editor neither draws nor checks 4 096 patches as one types: a note names the live limit; the sizing still follows
+	await page.goto(`/designs/${large.designId}/edit?from=A`);
+	await expect(page.getByTestId('editor-over-live-limit')).toContainText('4,096 elements: the editor draws and checks arrays of at most 256 elements');
+	await expect(page.getByTestId('patch-preview')).toHaveCount(0);
+	const length = page.locator('[data-quantity="patchLengthMm"] td').first();
+	const before = Number(await length.textContent());
+	await page.getByLabel('Target frequency f₀').fill('2.2');
+	await expect.poll(async () => Number(await length.textContent())).toBeGreaterThan(before * 1.05);
+	await page.screenshot({ path: '/tmp/ff-editor-large-array.png', fullPage: true });
 });
 
 test('an ordinary design’s revision page still draws the preview, the fab view and the check', async ({ page }) => {
